@@ -1,0 +1,96 @@
+# Tubewright build and checks. `make run` opens the app, `make test` runs
+# everything CI runs. Both install the Debian/Ubuntu packages they need when
+# they run as root, and otherwise print the exact apt-get command.
+
+SHELL := /bin/bash
+GO ?= go
+VERSION ?= $(shell git describe --always --dirty 2>/dev/null || echo dev)
+LDFLAGS := -X tubewright/ui.Version=$(VERSION)
+
+# Gio's desktop build (cgo headers) and Mesa's software renderer, which the
+# headless screenshot tests use (see DEVELOPERS.md).
+DEB_PKGS := gcc pkg-config libwayland-dev libx11-dev libx11-xcb-dev \
+	libxkbcommon-x11-dev libgles2-mesa-dev libegl1-mesa-dev libffi-dev \
+	libxcursor-dev libvulkan-dev libegl1 libegl-mesa0 libgl1-mesa-dri libgles2
+
+FUZZTIME ?= 20s
+
+.PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
+	web shots bench fuzz clean
+
+all: test
+
+## run: build and open the app in a desktop window
+run: deps
+	$(GO) run -ldflags "$(LDFLAGS)" ./cmd/tubewright
+
+## test: everything CI checks
+test: deps fmt-check vet lint unit build-twcalc build-wasm
+	@echo "make test: all checks passed"
+
+check-go:
+	@command -v $(GO) >/dev/null || { echo "Go is missing: install Go 1.26 or newer (https://go.dev/doc/install) and put it on PATH"; exit 1; }
+
+deps: check-go
+	@missing=""; \
+	for p in $(DEB_PKGS); do \
+		dpkg-query -W -f='$${Status}' $$p 2>/dev/null | grep -q 'install ok installed' || missing="$$missing $$p"; \
+	done; \
+	if [ -n "$$missing" ]; then \
+		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
+			echo "installing system packages:$$missing"; \
+			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends $$missing >/dev/null; \
+		else \
+			echo "missing system packages; run:"; \
+			echo "  sudo apt-get install -y --no-install-recommends$$missing"; \
+			exit 1; \
+		fi; \
+	fi
+
+fmt-check:
+	@out=$$(gofmt -l $$(git ls-files '*.go' 2>/dev/null || find . -name '*.go')); \
+	if [ -n "$$out" ]; then echo "gofmt would change:"; echo "$$out"; exit 1; fi
+
+vet:
+	$(GO) vet ./...
+	GOOS=js GOARCH=wasm $(GO) vet ./cmd/tubewright/ ./ui/...
+
+lint:
+	$(GO) tool staticcheck ./...
+
+unit:
+	$(GO) test -race -count=1 ./...
+
+build-twcalc:
+	CGO_ENABLED=0 $(GO) build -o /dev/null ./cmd/twcalc
+
+build-wasm:
+	GOOS=js GOARCH=wasm $(GO) build -o /dev/null ./cmd/tubewright
+
+## web: the WebAssembly build with its page shell, in build/web
+web: check-go
+	rm -rf build/web && mkdir -p build/web
+	GOOS=js GOARCH=wasm $(GO) build -ldflags "-s -w $(LDFLAGS)" -o build/web/tubewright.wasm ./cmd/tubewright
+	cp assets/web/* build/web/
+	cp "$$($(GO) env GOROOT)/lib/wasm/wasm_exec.js" build/web/
+
+## shots: screenshots of every screen at phone, tablet and desktop sizes, in build/shots
+shots: deps
+	mkdir -p build/shots
+	SHOT_DIR=$(CURDIR)/build/shots $(GO) test -count=1 -run 'TestScreenshot' ./ui/
+
+## bench: the benchmarks behind the speed and memory claims
+bench: check-go
+	$(GO) test -run '^$$' -bench . -benchmem ./...
+
+## fuzz: each fuzz target for FUZZTIME (default 20s)
+fuzz: check-go
+	@for pkg in $$($(GO) list ./...); do \
+		for f in $$($(GO) test -list '^Fuzz' $$pkg 2>/dev/null | grep '^Fuzz'); do \
+			echo "== $$pkg $$f"; \
+			$(GO) test -run '^$$' -fuzz "^$$f$$" -fuzztime $(FUZZTIME) $$pkg || exit 1; \
+		done; \
+	done
+
+clean:
+	rm -rf build
