@@ -1,0 +1,19 @@
+package main
+
+// command is one subcommand of twcalc: its name as typed, a one-line summary
+// for `twcalc help`, and the function that parses its flags and computes.
+//
+// A run function parses its own arguments with newFlags, returns a report on
+// success, and returns an error naming the flag and value on bad input. It
+// never prints: run() in main.go writes the table or the JSON object.
+type command struct {
+	name, summary string
+	run           func(args []string) (*report, error)
+}
+
+// commands is the table of subcommands in the order `twcalc help` lists
+// them. Each calculator adds ONE line here; its run function lives in its own
+// file cmd/twcalc/<name>.go.
+var commands = []command{
+	{"gas", "properties of a working gas or mixture", runGas},
+}

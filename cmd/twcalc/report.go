@@ -1,0 +1,304 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"strings"
+	"text/tabwriter"
+
+	"tubewright/calc/units"
+)
+
+// report is what a subcommand computed: the inputs it used, named results
+// with SI units, model warnings and safety cautions. run() prints it as an
+// aligned table or, with --json, as one JSON object:
+//
+//	{"inputs":{...},
+//	 "results":{"NAME":{"value":N,"unit":"SI unit"[,"uncertainty":U]}},
+//	 "warnings":[...], "cautions":[...]}
+//
+// Names keep their insertion order in both forms. A result that is NaN or
+// ±Inf is never printed: adding one records an error, and run() exits 1
+// with "internal: result NAME is not finite".
+type report struct {
+	inputs    []entry
+	results   []entry
+	warnings  []string
+	cautions  []string
+	tableData *sweepTable
+	err       error // first programming error found while building
+}
+
+// entry is one named input or result.
+type entry struct {
+	name  string
+	json  json.RawMessage // the JSON value of the entry
+	shown string          // the table text
+}
+
+// sweepTable is a CSV table attached to a report (see report.table).
+type sweepTable struct {
+	header []string
+	rows   [][]float64
+}
+
+// newReport returns an empty report.
+func newReport() *report { return &report{} }
+
+func (r *report) fail(format string, a ...any) {
+	if r.err == nil {
+		r.err = fmt.Errorf(format, a...)
+	}
+}
+
+func (r *report) put(list *[]entry, kind, name string, v any, shown string) {
+	for _, e := range *list {
+		if e.name == name {
+			r.fail("internal: %s %s added twice", kind, name)
+			return
+		}
+	}
+	raw, err := json.Marshal(v)
+	if err != nil {
+		r.fail("internal: %s %s cannot be written: %v", kind, name, err)
+		return
+	}
+	*list = append(*list, entry{name: name, json: raw, shown: shown})
+}
+
+// input records an input as the command used it: a string as typed, a
+// number, a bool, or any JSON-encodable value.
+func (r *report) input(name string, value any) {
+	r.put(&r.inputs, "input", name, value, fmt.Sprint(value))
+}
+
+// inputQuantity records a parsed quantity input in SI with the text typed:
+// {"value":V,"unit":"SI unit"[,"uncertainty":U],"typed":"27degC"}. The table
+// shows the typed text and, when it differs, the SI value it was read as.
+func (r *report) inputQuantity(name string, q units.Quantity, typed string) {
+	if !finite(q.Value) || !finite(q.Uncertainty) {
+		r.fail("internal: input %s is not finite", name)
+		return
+	}
+	v := struct {
+		Value       float64  `json:"value"`
+		Unit        string   `json:"unit"`
+		Uncertainty *float64 `json:"uncertainty,omitempty"`
+		Typed       string   `json:"typed"`
+	}{Value: q.Value, Unit: units.SIUnit(q.Dim), Typed: typed}
+	si := units.Format(q.Value, q.Dim)
+	if q.Uncertainty > 0 {
+		v.Uncertainty = &q.Uncertainty
+		si = units.FormatPM(q.Value, q.Uncertainty, q.Dim)
+	}
+	shown := typed
+	if strings.ReplaceAll(si, " ", "") != strings.ReplaceAll(typed, " ", "") {
+		shown += "  (= " + si + ")"
+	}
+	r.put(&r.inputs, "input", name, v, shown)
+}
+
+// resultJSON is the JSON form of one numeric result.
+type resultJSON struct {
+	Value       float64  `json:"value"`
+	Unit        string   `json:"unit"`
+	Uncertainty *float64 `json:"uncertainty,omitempty"`
+}
+
+// add records result name with SI value v of dimension dim.
+func (r *report) add(name string, v float64, dim units.Dimension) {
+	if !finite(v) {
+		r.fail("internal: result %s is not finite", name)
+		return
+	}
+	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, units.Format(v, dim))
+}
+
+// addPM records result name with SI value v and standard uncertainty u;
+// the uncertainty is shown only when u > 0.
+func (r *report) addPM(name string, v, u float64, dim units.Dimension) {
+	if !finite(v) || !finite(u) || u < 0 {
+		r.fail("internal: result %s is not finite", name)
+		return
+	}
+	if u == 0 {
+		r.add(name, v, dim)
+		return
+	}
+	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim), Uncertainty: &u}, units.FormatPM(v, u, dim))
+}
+
+// addValue records a result that is not a number with a unit (a verdict, a
+// list, an object): JSON {"value":v,"unit":""}. v must encode as JSON
+// without NaN or Inf.
+func (r *report) addValue(name string, v any) {
+	shown := fmt.Sprint(v)
+	switch v.(type) {
+	case string, bool, int, int64, float64:
+	default:
+		if b, err := json.Marshal(v); err == nil {
+			shown = string(b)
+		}
+	}
+	r.put(&r.results, "result", name, struct {
+		Value any    `json:"value"`
+		Unit  string `json:"unit"`
+	}{v, ""}, shown)
+}
+
+// addComplex records a dimensionless complex result as
+// {"value":{"re":..,"im":..},"unit":"1"}.
+func (r *report) addComplex(name string, c complex128) {
+	re, im := real(c), imag(c)
+	if !finite(re) || !finite(im) {
+		r.fail("internal: result %s is not finite", name)
+		return
+	}
+	type reim struct {
+		Re float64 `json:"re"`
+		Im float64 `json:"im"`
+	}
+	sign := "+"
+	if im < 0 || (im == 0 && math.Signbit(im)) {
+		sign = "-"
+	}
+	shown := strconv.FormatFloat(re, 'g', 4, 64) + " " + sign + " " + strconv.FormatFloat(math.Abs(im), 'g', 4, 64) + "i"
+	r.put(&r.results, "result", name, struct {
+		Value reim   `json:"value"`
+		Unit  string `json:"unit"`
+	}{reim{re, im}, units.SIUnit(units.DimNone)}, shown)
+}
+
+// warn adds a model warning (a state outside a model's validated range, a
+// result near a limit of the method).
+func (r *report) warn(s string) { r.warnings = append(r.warnings, oneLine(s)) }
+
+// caution adds a safety caution; it is always printed, also with --json.
+func (r *report) caution(s string) { r.cautions = append(r.cautions, oneLine(s)) }
+
+// table attaches a sweep: without --json run() prints it as CSV (see
+// writeCSV) instead of the result table; with --json it is added to the
+// object as "table":{"columns":[...],"rows":[[...]...]}. Header names carry
+// their unit, e.g. "temperature_K".
+func (r *report) table(header []string, rows [][]float64) {
+	if err := checkTable(header, rows); err != nil {
+		r.fail("internal: %v", err)
+		return
+	}
+	r.tableData = &sweepTable{header: header, rows: rows}
+}
+
+func oneLine(s string) string {
+	return strings.Join(strings.Fields(s), " ")
+}
+
+// writeJSON writes r as one indented JSON object with keys in insertion
+// order.
+func (r *report) writeJSON(w io.Writer) error {
+	var b bytes.Buffer
+	b.WriteString(`{"inputs":`)
+	writeObject(&b, r.inputs)
+	b.WriteString(`,"results":`)
+	writeObject(&b, r.results)
+	for _, list := range []struct {
+		key string
+		v   []string
+	}{{"warnings", r.warnings}, {"cautions", r.cautions}} {
+		v := list.v
+		if v == nil {
+			v = []string{}
+		}
+		raw, err := json.Marshal(v)
+		if err != nil {
+			return err
+		}
+		fmt.Fprintf(&b, `,%q:%s`, list.key, raw)
+	}
+	if t := r.tableData; t != nil {
+		raw, err := json.Marshal(struct {
+			Columns []string    `json:"columns"`
+			Rows    [][]float64 `json:"rows"`
+		}{t.header, t.rows})
+		if err != nil {
+			return err
+		}
+		b.WriteString(`,"table":`)
+		b.Write(raw)
+	}
+	b.WriteString("}")
+	var out bytes.Buffer
+	if err := json.Indent(&out, b.Bytes(), "", "  "); err != nil {
+		return err
+	}
+	out.WriteString("\n")
+	_, err := w.Write(out.Bytes())
+	return err
+}
+
+func writeObject(b *bytes.Buffer, list []entry) {
+	b.WriteString("{")
+	for i, e := range list {
+		if i > 0 {
+			b.WriteString(",")
+		}
+		key, _ := json.Marshal(e.name)
+		b.Write(key)
+		b.WriteString(":")
+		b.Write(e.json)
+	}
+	b.WriteString("}")
+}
+
+// writeText writes r for people: inputs, results, warnings, then the
+// cautions, set apart so that they cannot be missed. A report with a sweep
+// table writes the CSV instead of the result list, and the warnings and
+// cautions as "# " comment lines after it.
+func (r *report) writeText(w io.Writer) error {
+	var b bytes.Buffer
+	if t := r.tableData; t != nil {
+		if err := writeCSV(&b, t.header, t.rows); err != nil {
+			return err
+		}
+		for _, s := range r.warnings {
+			fmt.Fprintf(&b, "# warning: %s\n", s)
+		}
+		for _, s := range r.cautions {
+			fmt.Fprintf(&b, "# CAUTION: %s\n", s)
+		}
+		_, err := w.Write(b.Bytes())
+		return err
+	}
+	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	section := func(title string, list []entry) {
+		if len(list) == 0 {
+			return
+		}
+		fmt.Fprintf(tw, "%s\n", title)
+		for _, e := range list {
+			fmt.Fprintf(tw, "  %s\t%s\n", e.name, e.shown)
+		}
+	}
+	section("inputs", r.inputs)
+	section("results", r.results)
+	if err := tw.Flush(); err != nil {
+		return err
+	}
+	if len(r.warnings) > 0 {
+		b.WriteString("warnings\n")
+		for _, s := range r.warnings {
+			fmt.Fprintf(&b, "  - %s\n", s)
+		}
+	}
+	if len(r.cautions) > 0 {
+		b.WriteString("\n!! CAUTION !!\n")
+		for _, s := range r.cautions {
+			fmt.Fprintf(&b, "  ! %s\n", s)
+		}
+	}
+	_, err := w.Write(b.Bytes())
+	return err
+}
