@@ -1,0 +1,121 @@
+package units
+
+import (
+	"math"
+	"strings"
+	"unicode/utf8"
+)
+
+// RangeError reports a value outside the range where a model or formula is
+// valid. Every package of the project returns it for out-of-range input so
+// that screens and the terminal companion can name the field, the value and
+// the bounds the same way.
+type RangeError struct {
+	Field string  // what the value is, e.g. "temperature", "plate spacing"
+	Value float64 // the offending value, in Unit
+	Min   float64 // lower bound in Unit; -Inf when there is none
+	Max   float64 // upper bound in Unit; +Inf when there is none
+	Unit  string  // unit symbol of Value, Min and Max, normally the SI one ("K", "m")
+	Why   string  // optional: whose range it is, e.g. "helium model"
+}
+
+// NewRangeError returns a RangeError for field with the given value, bounds
+// and unit symbol. Use ±Inf for a bound that does not exist.
+func NewRangeError(field string, value, min, max float64, unit string) *RangeError {
+	return &RangeError{Field: field, Value: value, Min: min, Max: max, Unit: unit}
+}
+
+// Error reads like "temperature 15 K is outside the valid range 20–3000 K
+// (helium model)", or for one-sided ranges "length -0.005 m must be at least
+// 0 m". Numbers have 4 significant digits.
+func (e *RangeError) Error() string {
+	field := e.Field
+	if field == "" {
+		field = "value"
+	}
+	var b strings.Builder
+	b.WriteString(field)
+	b.WriteByte(' ')
+	b.WriteString(e.withUnit(e.Value))
+	lo, hi := !math.IsInf(e.Min, -1) && !math.IsNaN(e.Min), !math.IsInf(e.Max, 1) && !math.IsNaN(e.Max)
+	switch {
+	case lo && hi:
+		b.WriteString(" is outside the valid range ")
+		b.WriteString(formatNumber(e.Min, 4))
+		b.WriteString("–")
+		b.WriteString(e.withUnit(e.Max))
+	case lo:
+		b.WriteString(" must be at least ")
+		b.WriteString(e.withUnit(e.Min))
+	case hi:
+		b.WriteString(" must be at most ")
+		b.WriteString(e.withUnit(e.Max))
+	default:
+		b.WriteString(" is not a finite number")
+	}
+	if e.Why != "" {
+		b.WriteString(" (")
+		b.WriteString(e.Why)
+		b.WriteByte(')')
+	}
+	return b.String()
+}
+
+func (e *RangeError) withUnit(v float64) string {
+	s := formatNumber(v, 4)
+	if e.Unit == "" || !isFinite(v) {
+		return s
+	}
+	return s + " " + e.Unit
+}
+
+// ParseError reports typed input that Parse could not accept. Its message
+// quotes the input, says what is wrong and, where it helps, lists the units
+// accepted for the dimension.
+type ParseError struct {
+	Input    string    // the text as typed
+	Dim      Dimension // the dimension that was asked for
+	Msg      string    // what is wrong, phrased to follow the quoted input
+	Accepted []string  // units accepted for Dim, when the unit was the problem
+	Err      error     // underlying error, e.g. a *RangeError; may be nil
+}
+
+// Error reads like `"10 bar" is a pressure, not a length` or
+// `"3 parsec" has an unknown length unit "parsec"; accepted: m, mm, ...`.
+func (e *ParseError) Error() string {
+	var b strings.Builder
+	b.WriteString(quoteInput(e.Input))
+	b.WriteByte(' ')
+	b.WriteString(e.Msg)
+	if len(e.Accepted) > 0 {
+		b.WriteString("; accepted: ")
+		b.WriteString(strings.Join(e.Accepted, ", "))
+	}
+	return b.String()
+}
+
+// Unwrap returns the underlying error, so errors.As finds a *RangeError.
+func (e *ParseError) Unwrap() error { return e.Err }
+
+// quoteInput quotes s for a message, shortened to 40 characters.
+func quoteInput(s string) string {
+	const max = 40
+	if utf8.RuneCountInString(s) > max {
+		r := []rune(s)
+		s = string(r[:max]) + "…"
+	}
+	var b strings.Builder
+	b.WriteByte('"')
+	for _, r := range s {
+		switch {
+		case r == '"':
+			b.WriteString(`\"`)
+		case r == utf8.RuneError || r < ' ' || r == 0x7f:
+			b.WriteString("\uFFFD")
+		default:
+			b.WriteRune(r)
+		}
+	}
+	b.WriteByte('"')
+	return b.String()
+}

@@ -1,0 +1,296 @@
+package units
+
+import (
+	"errors"
+	"math"
+	"strconv"
+	"strings"
+)
+
+// This file writes numbers with their units for people to read.
+
+// NotANumber is what every Format function prints for NaN and ±Inf. Callers
+// should not pass such values; the dash keeps them off screens and files.
+const NotANumber = "—"
+
+// formatNumber writes v with sig significant digits, trailing zeros after
+// the decimal point removed. Plain notation is used for 1e-3 ≤ |v| < 1e6
+// and a short exponent ("1.013e7", "2.5e-5") outside.
+func formatNumber(v float64, sig int) string {
+	if !isFinite(v) {
+		return NotANumber
+	}
+	if v == 0 {
+		return "0"
+	}
+	e := strconv.FormatFloat(v, 'e', sig-1, 64) // rounded: "-1.013e+05"
+	k := strings.IndexByte(e, 'e')
+	exp, _ := strconv.Atoi(e[k+1:])
+	if exp >= -3 && exp < 6 {
+		r, _ := strconv.ParseFloat(e, 64)
+		dec := sig - 1 - exp
+		if dec < 0 {
+			dec = 0
+		}
+		return trimZeros(strconv.FormatFloat(r, 'f', dec, 64))
+	}
+	return trimZeros(e[:k]) + "e" + strconv.Itoa(exp)
+}
+
+// trimZeros removes trailing zeros after a decimal point, and the point.
+func trimZeros(s string) string {
+	if !strings.Contains(s, ".") {
+		return s
+	}
+	s = strings.TrimRight(s, "0")
+	return strings.TrimSuffix(s, ".")
+}
+
+// joinUnit appends a unit symbol to a number with a space; % and the
+// symbols of feet and inches follow it directly... except that we always
+// use "in" and "ft", so only % is attached.
+func joinUnit(num, symbol string) string {
+	switch symbol {
+	case "":
+		return num
+	case "%":
+		return num + " %"
+	}
+	return num + " " + symbol
+}
+
+// Format writes an SI value of dimension d in d's SI unit with 4
+// significant digits: "578.3 Hz", "101300 Pa", "1.013e7 Pa", "0.147 m".
+// Plain notation is used for 1e-3 ≤ |v| < 1e6, a short exponent outside.
+// NaN and ±Inf give "—".
+func Format(v float64, d Dimension) string {
+	if !isFinite(v) {
+		return NotANumber
+	}
+	return joinUnit(formatNumber(v, 4), SIUnit(d))
+}
+
+// ErrUnknownUnit is returned (wrapped) by the conversion functions for a
+// unit they do not know.
+var ErrUnknownUnit = errors.New("unknown unit")
+
+// resolve finds unit among every dimension (first match in Dimension
+// order) or within d when d is valid and byDim is set.
+func resolve(unit string, d Dimension, byDim bool) (*unitDef, error) {
+	if byDim && !d.valid() {
+		panic("calc: units: unknown Dimension")
+	}
+	def := lookupUnit(unit, d, !byDim)
+	if def == nil {
+		if byDim {
+			return nil, &ParseError{Input: unit, Dim: d, Msg: "is not " + article(d.String()) + " " + d.String() + " unit", Accepted: Units(d), Err: ErrUnknownUnit}
+		}
+		return nil, &ParseError{Input: unit, Dim: DimNone, Msg: "is not a unit this program knows", Err: ErrUnknownUnit}
+	}
+	return def, nil
+}
+
+// toUnit converts an SI value to def's unit (gauge units subtract atm).
+func toUnit(v float64, def *unitDef, atm float64) float64 {
+	if def.gauge {
+		v -= atm
+	}
+	return (v - def.offset) / def.factor
+}
+
+// fromUnit converts x in def's unit to SI (gauge units add atm).
+func fromUnit(x float64, def *unitDef, atm float64) float64 {
+	v := x*def.factor + def.offset
+	if def.gauge {
+		v += atm
+	}
+	return v
+}
+
+// ToUnit converts an SI value v to the unit named unit (any accepted
+// spelling). A unit used by several dimensions is taken in the first:
+// "degC" is an absolute temperature (use ToUnitDim for a difference); gauge
+// units subtract StandardAtmosphere.
+func ToUnit(v float64, unit string) (float64, error) {
+	def, err := resolve(unit, DimNone, false)
+	if err != nil {
+		return 0, err
+	}
+	return toUnit(v, def, StandardAtmosphere), nil
+}
+
+// FromUnit converts x, written in unit, to SI; see ToUnit for how a unit
+// shared by dimensions is read.
+func FromUnit(x float64, unit string) (float64, error) {
+	def, err := resolve(unit, DimNone, false)
+	if err != nil {
+		return 0, err
+	}
+	return fromUnit(x, def, StandardAtmosphere), nil
+}
+
+// ToUnitDim is ToUnit with the unit looked up within dimension d, so
+// ToUnitDim(2, DimTemperatureDifference, "degF") is 3.6.
+func ToUnitDim(v float64, d Dimension, unit string) (float64, error) {
+	def, err := resolve(unit, d, true)
+	if err != nil {
+		return 0, err
+	}
+	return toUnit(v, def, StandardAtmosphere), nil
+}
+
+// FromUnitDim is FromUnit with the unit looked up within dimension d.
+func FromUnitDim(x float64, d Dimension, unit string) (float64, error) {
+	def, err := resolve(unit, d, true)
+	if err != nil {
+		return 0, err
+	}
+	return fromUnit(x, def, StandardAtmosphere), nil
+}
+
+// Gauge returns the gauge pressure of the absolute pressure abs against the
+// ambient absolute pressure atm, both in Pa; atm ≤ 0 means
+// StandardAtmosphere.
+func Gauge(abs, atm float64) float64 {
+	if atm <= 0 {
+		atm = StandardAtmosphere
+	}
+	return abs - atm
+}
+
+// FormatIn writes the SI value v in the unit named unit with 4 significant
+// digits and the unit's display symbol: FormatIn(101325, "bar") is
+// "1.013 bar", FormatIn(300, "degC") is "26.85 °C". The unit is looked up
+// as in ToUnit; use FormatInDim for temperature differences.
+func FormatIn(v float64, unit string) (string, error) {
+	def, err := resolve(unit, DimNone, false)
+	if err != nil {
+		return "", err
+	}
+	return formatDef(v, def, StandardAtmosphere), nil
+}
+
+// FormatInDim is FormatIn with the unit looked up within d:
+// FormatInDim(2, DimTemperatureDifference, "degF") is "3.6 °F".
+func FormatInDim(v float64, d Dimension, unit string) (string, error) {
+	def, err := resolve(unit, d, true)
+	if err != nil {
+		return "", err
+	}
+	return formatDef(v, def, StandardAtmosphere), nil
+}
+
+// FormatGauge writes the absolute pressure abs (Pa) as a gauge pressure
+// against the ambient absolute pressure atm (Pa; ≤ 0 means
+// StandardAtmosphere) in a gauge unit: "barg", "psig", "kPag", "MPag" or
+// "mbarg"; the plain names "bar", "psi", "kPa", "MPa", "mbar" pick their
+// gauge twin.
+func FormatGauge(abs, atm float64, unit string) (string, error) {
+	def, err := resolve(unit, DimPressure, true)
+	if err != nil {
+		return "", err
+	}
+	if !def.gauge {
+		twin := idx.find(DimPressure, def.name+"g")
+		if twin == nil || !twin.gauge {
+			return "", &ParseError{Input: unit, Dim: DimPressure, Msg: "has no gauge form", Accepted: []string{"barg", "psig", "kPag", "MPag", "mbarg"}}
+		}
+		def = twin
+	}
+	if atm <= 0 {
+		atm = StandardAtmosphere
+	}
+	return formatDef(abs, def, atm), nil
+}
+
+func formatDef(v float64, def *unitDef, atm float64) string {
+	if !isFinite(v) {
+		return NotANumber
+	}
+	x := toUnit(v, def, atm)
+	if !isFinite(x) {
+		return NotANumber
+	}
+	return joinUnit(formatNumber(x, 4), def.symbol)
+}
+
+// FormatPM writes a value and its standard uncertainty u (both SI) in d's
+// SI unit: "567 ± 8 Hz", "0.147 ± 0.0012 m". The uncertainty keeps two
+// significant digits when its first digit is 1 or 2, one otherwise, and
+// the value is rounded to the same decimal place (common practice in
+// reporting measurements; see JCGM 100:2008 (GUM) 7.2.6, which asks for at
+// most two significant digits). Outside 1e-3 ≤ |v| < 1e6 both share one
+// exponent: "1.0132e5 ± 0.0008e5 Pa". u = 0 gives Format(v, d); NaN or Inf
+// in v gives "—".
+func FormatPM(v, u float64, d Dimension) string {
+	return pm(v, u, SIUnit(d))
+}
+
+// FormatPMIn is FormatPM in a chosen unit of d; the uncertainty is
+// converted as a difference (a temperature ± in °C or °F is a difference).
+func FormatPMIn(v, u float64, d Dimension, unit string) (string, error) {
+	def, err := resolve(unit, d, true)
+	if err != nil {
+		return "", err
+	}
+	if !isFinite(v) {
+		return NotANumber, nil
+	}
+	return pm(toUnit(v, def, StandardAtmosphere), u/def.factor, def.symbol), nil
+}
+
+// pm formats v ± u (already in the unit of symbol).
+func pm(v, u float64, symbol string) string {
+	if !isFinite(v) {
+		return NotANumber
+	}
+	u = math.Abs(u)
+	if u == 0 || !isFinite(u) {
+		return joinUnit(formatNumber(v, 4), symbol)
+	}
+	// Round u to 2 significant digits if its first digit is 1 or 2, else 1.
+	e2 := strconv.FormatFloat(u, 'e', 1, 64)
+	m2, _ := strconv.ParseFloat(e2[:strings.IndexByte(e2, 'e')], 64)
+	ue := e2
+	if m2 >= 3 {
+		ue = strconv.FormatFloat(u, 'e', 0, 64)
+	}
+	k := strings.IndexByte(ue, 'e')
+	uexp, _ := strconv.Atoi(ue[k+1:])
+	last := uexp // decimal place of the last kept digit
+	if strings.Contains(ue[:k], ".") {
+		last--
+	}
+	ur, _ := strconv.ParseFloat(ue, 64)
+	vexp := 0
+	if v != 0 {
+		vexp = int(math.Floor(math.Log10(math.Abs(v))))
+	}
+	top := max(vexp, uexp)
+	if top-last > 15 {
+		// The uncertainty is far below the value's precision.
+		return joinUnit(formatNumber(v, 4)+" ± "+formatNumber(u, 2), symbol)
+	}
+	if top >= -3 && top < 6 {
+		dec := max(0, -last)
+		scale := math.Pow(10, float64(last))
+		vr := math.Round(v/scale) * scale
+		return joinUnit(fixed(vr, dec)+" ± "+fixed(ur, dec), symbol)
+	}
+	// Shared exponent: mantissas to the place of the last digit.
+	scale := math.Pow(10, float64(top))
+	dec := top - last
+	vm := math.Round(v/math.Pow(10, float64(last))) * math.Pow(10, float64(last)) / scale
+	um := ur / scale
+	exp := "e" + strconv.Itoa(top)
+	return joinUnit(fixed(vm, dec)+exp+" ± "+fixed(um, dec)+exp, symbol)
+}
+
+// fixed writes x with dec decimals, "-0" as "0".
+func fixed(x float64, dec int) string {
+	s := strconv.FormatFloat(x, 'f', dec, 64)
+	if strings.TrimLeft(s, "-0.") == "" {
+		return strings.TrimPrefix(s, "-")
+	}
+	return s
+}
