@@ -24,6 +24,7 @@ const (
 	kindFloat
 	kindBool
 	kindGas
+	kindSpan
 )
 
 // flagDef is one flag of a subcommand: its text as typed and where the
@@ -51,6 +52,7 @@ type flagDef struct {
 	f *float64
 	b *bool
 	g *gasprops.Mixture
+	r *span
 }
 
 // rawValue is the flag.Value of every flagDef: it only records the text.
@@ -116,7 +118,7 @@ func (fl *flags) define(d *flagDef) *flagDef {
 	if fl.fs.Lookup(d.name) != nil {
 		panic("twcalc: flag --" + d.name + " defined twice in " + fl.name)
 	}
-	d.required = d.def == "" && d.kind != kindBool && d.kind != kindString
+	d.required = d.def == "" && d.kind != kindBool && d.kind != kindString && d.kind != kindSpan
 	d.typed = d.def
 	fl.defs = append(fl.defs, d)
 	fl.fs.Var(rawValue{d}, d.name, d.usage)
@@ -186,6 +188,14 @@ func (fl *flags) boolean(name, usage string) *bool {
 func (fl *flags) gas(name, def, usage string) *gasprops.Mixture {
 	d := &flagDef{name: name, usage: usage, kind: kindGas, def: def, g: new(gasprops.Mixture)}
 	return fl.define(d).g
+}
+
+// span declares an optional range flag for sweeps, typed FROM:TO:N
+// ("250K:350K:11", "10bar:30bar:5") or FROM:TO for 11 points; each end in
+// any unit of dim. Unset, the span's Set field is false.
+func (fl *flags) span(name string, dim units.Dimension, usage string) *span {
+	d := &flagDef{name: name, usage: usage, kind: kindSpan, dim: dim, r: new(span)}
+	return fl.define(d).r
 }
 
 // positional allows up to n positional arguments (e.g. a file name), named
@@ -327,6 +337,8 @@ func (d *flagDef) read() error {
 			return err
 		}
 		*d.g = m
+	case kindSpan:
+		return d.r.read(s, d.dim, d.opts)
 	}
 	return nil
 }
@@ -400,6 +412,8 @@ func (fl *flags) help() string {
 			arg = " X"
 		case kindString:
 			arg = " TEXT"
+		case kindSpan:
+			arg = " FROM:TO[:N]"
 		}
 		fmt.Fprintf(&b, "  --%s%s\n        %s", d.name, arg, d.usage)
 		switch {
@@ -444,6 +458,8 @@ func (fl *flags) echo(r *report) {
 			r.input(d.name, *d.b)
 		case kindGas:
 			r.input(d.name, d.typed)
+		case kindSpan:
+			r.input(d.name, map[string]any{"from": d.r.From, "to": d.r.To, "points": d.r.N, "unit": units.SIUnit(d.dim), "typed": d.typed})
 		}
 	}
 }
@@ -475,4 +491,58 @@ func quoteValue(s string) string {
 		s = string(r[:max]) + "…"
 	}
 	return fmt.Sprintf("%q", s)
+}
+
+// span is a range of a quantity for a sweep, in SI.
+type span struct {
+	From, To float64 // ends, SI; From may exceed To (a falling sweep)
+	N        int     // number of points including both ends, 2..maxSpanPoints
+	Set      bool    // the flag was given
+}
+
+// maxSpanPoints bounds a sweep so a slip ("1e9") cannot hang the terminal.
+const maxSpanPoints = 100000
+
+// read parses FROM:TO[:N].
+func (sp *span) read(s string, dim units.Dimension, o units.Options) error {
+	parts := strings.Split(s, ":")
+	if len(parts) < 2 || len(parts) > 3 {
+		return errors.New("write the range as FROM:TO or FROM:TO:N, e.g. 250K:350K:11")
+	}
+	var ends [2]float64
+	for i, p := range parts[:2] {
+		q, err := units.ParseWith(p, dim, o)
+		if err != nil {
+			return err
+		}
+		if !finite(q.Value) {
+			return errors.New("not a finite number")
+		}
+		ends[i] = q.Value
+	}
+	n := 11
+	if len(parts) == 3 {
+		v, err := strconv.Atoi(strings.TrimSpace(parts[2]))
+		if err != nil {
+			return fmt.Errorf("the number of points %q is not a whole number", parts[2])
+		}
+		if v < 2 || v > maxSpanPoints {
+			return units.NewRangeError("number of points", float64(v), 2, maxSpanPoints, "")
+		}
+		n = v
+	}
+	*sp = span{From: ends[0], To: ends[1], N: n, Set: true}
+	return nil
+}
+
+// values returns the N evenly spaced points from From to To, both ends
+// exact.
+func (sp *span) values() []float64 {
+	v := make([]float64, sp.N)
+	for i := range v {
+		t := float64(i) / float64(sp.N-1)
+		v[i] = sp.From + t*(sp.To-sp.From)
+	}
+	v[sp.N-1] = sp.To
+	return v
 }
