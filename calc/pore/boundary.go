@@ -1,0 +1,36 @@
+package pore
+
+import "math/cmplx"
+
+// boundary is the wide-channel (boundary-layer) limit.
+type boundary struct{ rh float64 }
+
+// BoundaryLayer returns the wide-channel limit of any pore with hydraulic
+// radius hydraulicRadius (m) and porosity 1:
+//
+//	f = (1-i) δ / (2 r_h)
+//
+// (Swift 2002, ch. 4, the boundary-layer approximation, from memory; valid when
+// r_h ≫ δ; it is the large-r_h limit of every exact shape here, which the
+// tests check). Do not use it for r_h below a few δ: there |f| is
+// overestimated and f never tends to 1.
+func BoundaryLayer(hydraulicRadius float64) (Shape, error) {
+	if err := positive("hydraulic radius", hydraulicRadius); err != nil {
+		return nil, err
+	}
+	return &boundary{rh: hydraulicRadius}, nil
+}
+
+func (b *boundary) HydraulicRadius() float64 { return b.rh }
+func (b *boundary) Porosity() float64        { return 1 }
+func (b *boundary) Describe() string {
+	return "wide channel (boundary-layer limit), hydraulic radius " + mm(b.rh)
+}
+
+func (b *boundary) F(delta float64) complex128 {
+	if badDelta(delta) {
+		return cmplx.NaN()
+	}
+	d := delta / (2 * b.rh)
+	return complex(d, -d)
+}
