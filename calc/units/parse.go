@@ -88,7 +88,8 @@ func (p *parser) readPiece(s string) (piece, error) {
 		return piece{}, p.fail(err.Error(), nil)
 	}
 	unit := normalizeUnit(rest)
-	if unit != "" && (isDigit(unit[0]) || unit[0] == '.' || unit[0] == ',' || strings.HasPrefix(unit, "/0") ||
+	perUnit := strings.HasPrefix(unit, "1/") && len(unit) > 2 && !isDigit(unit[2]) // "1/s", "1/m²"
+	if unit != "" && !perUnit && (isDigit(unit[0]) || unit[0] == '.' || unit[0] == ',' || strings.HasPrefix(unit, "/0") ||
 		len(unit) > 1 && unit[0] == '/' && isDigit(unit[1])) {
 		return piece{}, p.fail("has more than one number; write numbers without spaces or thousands separators", nil)
 	}
