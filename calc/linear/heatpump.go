@@ -1,0 +1,196 @@
+package linear
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"math/cmplx"
+)
+
+// HeatPumpSettings adds the heat pump's own inputs to Settings.
+type HeatPumpSettings struct {
+	Settings
+	// Frequency overrides the driver's frequency (Hz); 0 uses the driver's.
+	Frequency float64
+	// CoolingLoad is the heat (W) taken from the cold side; 0 is zero load.
+	CoolingLoad float64
+}
+
+// HeatPumpResult is the answer of HeatPump.
+type HeatPumpResult struct {
+	Frequency       float64 // drive frequency, Hz
+	ColdTemperature float64 // Tc at the stack's cold end, K
+	TemperatureSpan float64 // T_ambient - Tc, K
+	AcousticPower   float64 // acoustic power the driver puts in, W
+	CoolingLoad     float64 // heat taken from the cold side, W
+	COP             float64 // CoolingLoad / AcousticPower
+	CarnotCOP       float64 // Tc / (T_ambient - Tc)
+	COPRelative     float64 // COP / CarnotCOP
+	DriverPressure  float64 // |p1| at the driver, Pa
+	DriverFlow      float64 // |U1| at the driver, m³/s
+	Iterations      int
+	Evaluations     int
+	Profile         Profile
+	Warnings        []string
+}
+
+// HeatPump finds the mean-temperature profile through the device's one
+// stack for a driver at the start end, at a given frequency and amplitude.
+// The stack's neighbour on one side is held at ambient (or a value); the
+// parts marked "cold" on the other side float at the cold temperature Tc.
+// Along the stack, dTm/dx follows from the total power H2 (see gradient in
+// model.go), which is constant through the stack: with the cold side beyond
+// the stack (x larger) H2 = -Q, with the cold side between the driver and
+// the stack H2 = W + Q, where Q is the cooling load and W the driver's
+// acoustic power (energy conservation in the insulated cold region).
+//
+// Unknowns: the complex free amplitude at the driver (U1 when the pressure
+// amplitude is given, p1 otherwise) and Tc; residuals: the far-end boundary
+// condition and the mismatch between the integrated Tm at the stack's end
+// and its neighbour's temperature. Damped Newton, as in Onset.
+func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
+	var in HeatPumpSettings
+	if hs != nil {
+		in = *hs
+	}
+	set := in.Settings.values()
+	drv := dev.Driver()
+	if drv == nil {
+		return nil, errors.New("heat pump: the first part must be a driver")
+	}
+	f := in.Frequency
+	if f <= 0 {
+		f = drv.Frequency
+	}
+	if f <= 0 {
+		return nil, &FieldError{Part: 0, Kind: KindDriver, Field: "frequency", Msg: "is missing: the heat pump needs the drive frequency"}
+	}
+	if !(in.CoolingLoad >= 0) || math.IsInf(in.CoolingLoad, 0) {
+		return nil, fmt.Errorf("heat pump: cooling load %g W must be zero or positive", in.CoolingLoad)
+	}
+	m, err := newModel(dev, set.Gas, set.RelTol)
+	if err != nil {
+		return nil, err
+	}
+	stack := -1
+	for i, s := range m.segs {
+		if s.kind == KindStack {
+			if stack >= 0 {
+				return nil, errors.New("heat pump: the device has more than one stack; the heat pump solve handles one")
+			}
+			stack = i
+		}
+	}
+	if stack < 0 {
+		return nil, errors.New("heat pump: the device has no stack")
+	}
+	st := &m.segs[stack]
+	coldRight := st.rightRef == TempCold
+	if coldRight == (st.leftRef == TempCold) {
+		return nil, fmt.Errorf("heat pump: exactly one neighbour of the stack (part %d) must be at \"cold\" and the other at \"ambient\" or a value", stack+1)
+	}
+	if dev.has(TempHot) {
+		if dev.HotTemperature <= 0 {
+			return nil, errors.New("heat pump: parts at \"hot\" need \"hot_temperature\" at the top level")
+		}
+		m.th = dev.HotTemperature
+	}
+	ta := dev.AmbientTemperature
+	m.omega = complex(2*math.Pi*f, 0)
+	usePressure := drv.PressureAmplitude > 0
+	amp := complex(drv.PressureAmplitude, 0)
+	if !usePressure {
+		amp = complex(drv.VolumeVelocityAmplitude, 0)
+	}
+	start := func(free complex128) (p0, u0 complex128) {
+		if usePressure {
+			return amp, free
+		}
+		return free, amp
+	}
+	// Start: the linear answer with every part at ambient (two integrations).
+	m.tc, m.runMode = ta, modeLinear
+	p0, u0 := start(0)
+	ya, err := m.run(p0, u0, nil)
+	if err != nil {
+		return nil, err
+	}
+	ra := m.residual(ya)
+	pe, ue := complex128(0), complex128(1) // unit free amplitude, no drive
+	if !usePressure {
+		pe, ue = 1, 0
+	}
+	yb, err := m.run(pe, ue, nil)
+	if err != nil {
+		return nil, err
+	}
+	rb := m.residual(yb) // the residual is linear in the state at fixed temperatures
+	if rb == 0 {
+		return nil, errors.New("heat pump: the driver cannot excite the device (degenerate start)")
+	}
+	free := -ra / rb
+	fs := math.Max(cmplx.Abs(free), 1e-30)
+	rs := drv.PressureAmplitude // residual scale, Pa
+	if !usePressure {
+		rs = fs // the free amplitude is the driver's pressure
+	}
+	m.runMode = modeHeatPump
+	load := in.CoolingLoad
+	pb := &newtonProblem{
+		n: 3, x: []float64{real(free), imag(free), ta}, scale: []float64{fs, fs, ta},
+		lo: []float64{-1e3 * fs, -1e3 * fs, 0.05 * ta}, hi: []float64{1e3 * fs, 1e3 * fs, 3 * ta},
+		maxStep: []float64{10 * fs, 10 * fs, 0.1 * ta},
+		tol:     set.Tolerance, maxIter: 2 * set.MaxIterations,
+		f: func(x, r []float64) error {
+			m.tc = x[2]
+			p0, u0 := start(complex(x[0], x[1]))
+			if coldRight {
+				m.h2 = -load
+			} else {
+				m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + load
+			}
+			y, err := m.run(p0, u0, nil)
+			if err != nil {
+				return err
+			}
+			z := m.residual(y)
+			r[0], r[1], r[2] = real(z)/rs, imag(z)/rs, m.stackMis/ta
+			return nil
+		},
+	}
+	if err := pb.solve(); err != nil {
+		return nil, &ConvergenceError{Solve: "heat pump", Iterations: pb.iterations, Last: pb.x,
+			Names: []string{"real part of free amplitude", "imaginary part of free amplitude", "cold temperature (K)"}, Why: err.Error()}
+	}
+	res := &HeatPumpResult{Frequency: f, Iterations: pb.iterations, Evaluations: pb.evaluations, CoolingLoad: load}
+	m.tc = pb.x[2]
+	p0, u0 = start(complex(pb.x[0], pb.x[1]))
+	if coldRight {
+		m.h2 = -load
+	} else {
+		m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + load
+	}
+	var prof *Profile
+	if !set.NoProfile {
+		prof = &res.Profile
+	}
+	if _, err := m.run(p0, u0, prof); err != nil {
+		return nil, err
+	}
+	res.ColdTemperature = m.tc
+	res.TemperatureSpan = ta - m.tc
+	res.AcousticPower = 0.5 * real(p0*cmplx.Conj(u0))
+	res.DriverPressure, res.DriverFlow = cmplx.Abs(p0), cmplx.Abs(u0)
+	if res.AcousticPower > 0 {
+		res.COP = load / res.AcousticPower
+	}
+	if res.TemperatureSpan > 0 {
+		res.CarnotCOP = m.tc / res.TemperatureSpan
+		res.COPRelative = res.COP / res.CarnotCOP
+	}
+	res.Warnings = m.warnings(f, ta)
+	if res.TemperatureSpan < 0 {
+		res.Warnings = append(res.Warnings, "the cold side ends up warmer than ambient: the stack pumps heat the other way at this frequency and position")
+	}
+	return res, nil
+}
