@@ -132,7 +132,7 @@ func newModel(dev *Device, g Gas, rtol float64) (*model, error) {
 		case KindStack, KindExchanger:
 			s.area = p.Area()
 			s.gasArea = p.Porosity * s.area
-			sh, err := shapeFor(p.Pores)
+			sh, err := shapeFor(p.Pores, p.Porosity)
 			if err != nil {
 				return nil, &FieldError{Part: i, Kind: p.Kind, Field: "pores", Msg: err.Error()}
 			}
