@@ -1,0 +1,183 @@
+package resonator
+
+import (
+	"fmt"
+	"math"
+
+	"tubewright/calc/numeric"
+	"tubewright/calc/units"
+	"tubewright/gasprops"
+)
+
+// MaxMode is the highest harmonic number accepted.
+const MaxMode = 50
+
+// Tube is a straight rigid tube of uniform circular cross-section.
+type Tube struct {
+	Ends       Ends          // which ends are closed
+	Correction EndCorrection // model of each open end
+	Mode       int           // harmonic number n ≥ 1 (1 = fundamental)
+	Length     float64       // physical length, m (ignored by TubeLength)
+	Radius     float64       // inner radius, m
+}
+
+// Result is a solved uniform-tube resonance. Sigma fields are the
+// propagated standard uncertainties (0 when the inputs had none).
+type Result struct {
+	Frequency       float64 // resonance frequency, Hz
+	Length          float64 // physical tube length, m
+	EndCorrection   float64 // δ at each open end, m (0 for closed-closed)
+	EffectiveLength float64 // acoustic length L + δ·(open ends), m
+	SoundSpeed      float64 // m/s
+	Wavelength      float64 // c/f, m
+	KA              float64 // Helmholtz number 2πf·a/c
+	Attenuation     float64 // Kirchhoff amplitude attenuation, Np/m
+	Q               Quality // quality factor by loss mechanism
+	Bandwidth       float64 // -3 dB (half-power) bandwidth f/Q, Hz
+	DecayTime       float64 // amplitude 1/e decay time Q/(πf), s
+
+	FrequencySigma, LengthSigma, EndCorrectionSigma float64
+	QSigma, BandwidthSigma, DecayTimeSigma          float64
+
+	Warnings []string // model-range warnings, never errors
+}
+
+// modeFactor returns m such that f = m·c/L_eff: (2n-1)/4 for a
+// quarter-wave tube, n/2 for a half-wave tube.
+func (t Tube) modeFactor() float64 {
+	if t.Ends == ClosedOpen {
+		return float64(2*t.Mode-1) / 4
+	}
+	return float64(t.Mode) / 2
+}
+
+func (t Tube) check(needLength bool) error {
+	if t.Ends < ClosedOpen || t.Ends > OpenOpen {
+		panic("resonator: unknown Ends")
+	}
+	if t.Correction < NoCorrection || t.Correction > Flanged {
+		panic("resonator: unknown EndCorrection")
+	}
+	if t.Mode < 1 || t.Mode > MaxMode {
+		return units.NewRangeError("mode", float64(t.Mode), 1, MaxMode, "")
+	}
+	if needLength {
+		if err := checkPositive("length", t.Length, "m"); err != nil {
+			return err
+		}
+	}
+	return checkPositive("radius", t.Radius, "m")
+}
+
+// TubeFrequency returns the resonance frequency of mode t.Mode of the tube
+// filled with gas of properties g (use gasprops to get them at the mean
+// temperature and pressure), with its end corrections, losses and Q:
+//
+//	f_n = (2n-1) c / (4 L_eff)   closed-open   (quarter-wave)
+//	f_n = n c / (2 L_eff)        closed-closed, open-open (half-wave)
+//	L_eff = L + δ(ka)·(number of open ends)
+//
+// (Kinsler, Frey, Coppens & Sanders, Fundamentals of Acoustics, 4th ed.
+// 2000, ch. 10, standing waves in pipes). Because δ depends on ka and so on
+// f, the equation is solved with Brent's method. Losses: see
+// KirchhoffAttenuation and Quality. Errors: length, radius not positive,
+// mode outside 1-50, incomplete gas properties.
+func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
+	if err := t.check(true); err != nil {
+		return Result{}, err
+	}
+	if err := checkProps(g); err != nil {
+		return Result{}, err
+	}
+	c, m, nOpen := g.SoundSpeed, t.modeFactor(), float64(t.Ends.OpenEnds())
+	f0 := m * c / t.Length
+	f := f0
+	if t.Correction != NoCorrection && nOpen > 0 {
+		// g(f) = f·(L + n δ(ka(f))) - m c, increasing in f; δ ≤ 0.8216 a
+		h := func(f float64) float64 {
+			d, _ := CorrectionLength(t.Correction, t.Radius, 2*math.Pi*f*t.Radius/c)
+			return f*(t.Length+nOpen*d) - m*c
+		}
+		lo := m * c / (t.Length + nOpen*FlangedLimit*t.Radius*1.001)
+		r, err := numeric.Brent(h, lo, f0, &numeric.RootSettings{RelTol: 1e-13})
+		if err != nil {
+			return Result{}, fmt.Errorf("resonator: end-corrected frequency: %w", err)
+		}
+		f = r.X
+	}
+	return finish(t, g, f), nil
+}
+
+// TubeLength returns the physical length of a tube (t.Length is ignored)
+// whose mode t.Mode resonates at frequency f (Hz) with gas properties g:
+//
+//	L = m c / f - δ(ka)·(number of open ends)
+//
+// with m as in TubeFrequency. It is an error when the end corrections alone
+// are longer than the acoustic length (the frequency is too high for this
+// radius and mode): the RangeError gives the highest frequency possible.
+func TubeLength(t Tube, f float64, g gasprops.Properties) (Result, error) {
+	if err := t.check(false); err != nil {
+		return Result{}, err
+	}
+	if err := checkPositive("frequency", f, "Hz"); err != nil {
+		return Result{}, err
+	}
+	if err := checkProps(g); err != nil {
+		return Result{}, err
+	}
+	c, m, nOpen := g.SoundSpeed, t.modeFactor(), float64(t.Ends.OpenEnds())
+	length := func(f float64) float64 {
+		d, _ := CorrectionLength(t.Correction, t.Radius, 2*math.Pi*f*t.Radius/c)
+		return m*c/f - nOpen*d
+	}
+	L := length(f)
+	if !(L > 0) {
+		fmax := f
+		if r, err := numeric.Brent(length, f*1e-6, f, nil); err == nil {
+			fmax = r.X
+		}
+		e := units.NewRangeError("frequency", f, 0, fmax, "Hz")
+		e.Why = fmt.Sprintf("the end corrections of a %.3g m radius are longer than the acoustic length of mode %d above that", t.Radius, t.Mode)
+		return Result{}, e
+	}
+	t.Length = L
+	return finish(t, g, f), nil
+}
+
+// finish fills the result for a tube t resonating at f.
+func finish(t Tube, g gasprops.Properties, f float64) Result {
+	c := g.SoundSpeed
+	k := 2 * math.Pi * f / c
+	ka := k * t.Radius
+	nOpen := float64(t.Ends.OpenEnds())
+	d, warn := CorrectionLength(t.Correction, t.Radius, ka)
+	if nOpen == 0 {
+		d, warn = 0, ""
+	}
+	r := Result{
+		Frequency:       f,
+		Length:          t.Length,
+		EndCorrection:   d,
+		EffectiveLength: t.Length + nOpen*d,
+		SoundSpeed:      c,
+		Wavelength:      c / f,
+		KA:              ka,
+	}
+	if warn == "" && ka >= CutoffKA {
+		warn = kaWarning(ka, math.Inf(1))
+	}
+	if warn != "" {
+		r.Warnings = append(r.Warnings, warn)
+	}
+	alpha, w, _ := KirchhoffAttenuation(g, t.Radius, f)
+	if w != "" {
+		r.Warnings = append(r.Warnings, w)
+	}
+	r.Attenuation = alpha
+	r.Q = tubeQuality(t, g, f, k, d)
+	r.Bandwidth = f / r.Q.Total
+	r.DecayTime = r.Q.Total / (math.Pi * f)
+	r.Warnings = append(r.Warnings, g.Warnings...)
+	return r
+}
