@@ -222,6 +222,16 @@ func (fl *flags) given(name string) bool {
 	return false
 }
 
+// typed returns the text given for flag name, or its default.
+func (fl *flags) typed(name string) string {
+	for _, d := range fl.defs {
+		if d.name == name {
+			return d.typed
+		}
+	}
+	return ""
+}
+
 // parse reads args. Flags may come before and after positional arguments;
 // "--" ends the flags. Errors are usage errors naming the flag and value;
 // -h or --help returns a help request.

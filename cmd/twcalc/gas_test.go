@@ -201,3 +201,39 @@ func resultLines(s string) string {
 	}
 	return s
 }
+
+// TestGasUncertainty: a ± on temperature and pressure reaches the results.
+// Expected values by first-order propagation (GUM, JCGM 100:2008, eq. 10)
+// of the ideal-gas laws: c = sqrt(γRT/M) gives u_c/c = u_T/(2T), and
+// ρ = pM/(RT) gives u_ρ/ρ = sqrt((u_T/T)² + (u_p/p)²). The library's ideal
+// helium follows these laws to better than the 1 % allowed here.
+func TestGasUncertainty(t *testing.T) {
+	t.Parallel()
+	var o, e bytes.Buffer
+	if code := run([]string{"gas", "--json", "--gas", "helium", "--temperature", "300K+-3K", "--pressure", "1bar+-2kPa"}, &o, &e); code != exitOK {
+		t.Fatalf("exit %d: %s", code, e.String())
+	}
+	var obj struct {
+		Results map[string]struct {
+			Value       float64  `json:"value"`
+			Uncertainty *float64 `json:"uncertainty"`
+		} `json:"results"`
+	}
+	if err := json.Unmarshal(o.Bytes(), &obj); err != nil {
+		t.Fatal(err)
+	}
+	c, rho := obj.Results["sound_speed"], obj.Results["density"]
+	if c.Uncertainty == nil || rho.Uncertainty == nil {
+		t.Fatalf("no uncertainty on sound speed or density: %s", o.String())
+	}
+	if want := c.Value * 3 / 600; !scalar.EqualWithinRel(*c.Uncertainty, want, 0.01) {
+		t.Errorf("u(sound_speed) = %v, want %v", *c.Uncertainty, want)
+	}
+	if want := rho.Value * math.Hypot(3.0/300, 2e3/1e5); !scalar.EqualWithinRel(*rho.Uncertainty, want, 0.01) {
+		t.Errorf("u(density) = %v, want %v", *rho.Uncertainty, want)
+	}
+	// Molar mass does not depend on the state: no uncertainty at all.
+	if u := obj.Results["molar_mass"].Uncertainty; u != nil {
+		t.Errorf("molar mass has uncertainty %v", *u)
+	}
+}
