@@ -51,6 +51,9 @@
 //
 // # Input rules and limits
 //
+// "bar", "psi", "kPa" and "MPa" are absolute pressures; gauge pressures
+// are typed "barg", "psig", "kPag", "MPag" or "mbarg" and stored absolute
+// (Quantity.Gauge records how they were typed). A stress is never gauge.
 // A decimal comma is accepted ("0,25 mm") except before exactly three
 // digits ("1,500"), which is refused as ambiguous. "C" and "F" alone are
 // refused for temperatures ("C" is the coulomb): write °C or degC. Parse

@@ -46,15 +46,12 @@ func trimZeros(s string) string {
 	return strings.TrimSuffix(s, ".")
 }
 
-// joinUnit appends a unit symbol to a number with a space; % and the
-// symbols of feet and inches follow it directly... except that we always
-// use "in" and "ft", so only % is attached.
+// joinUnit appends a unit symbol to a number with a space, as the BIPM SI
+// Brochure (2019) asks, also before % (from memory of its section on
+// writing quantity values).
 func joinUnit(num, symbol string) string {
-	switch symbol {
-	case "":
+	if symbol == "" {
 		return num
-	case "%":
-		return num + " %"
 	}
 	return num + " " + symbol
 }

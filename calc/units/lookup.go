@@ -14,6 +14,9 @@ type index struct {
 	exact  [len(dims)]map[string]*unitDef
 	folded [len(dims)]map[string]*unitDef
 	byDim  [len(dims)][]*unitDef // table order, SI unit first
+	// clash holds, for folded spellings dropped because two units share
+	// them, the symbols of those units ("mhz": MHz, mHz).
+	clash [len(dims)]map[string][]string
 }
 
 var idx = buildIndex(unitTable)
@@ -67,8 +70,16 @@ func buildIndex(table []unitDef) *index {
 		}
 	}
 	for d := range dims {
+		x.clash[d] = map[string][]string{}
 		for f := range collide[d] {
 			delete(x.folded[d], f)
+			for _, def := range x.byDim[d] {
+				for _, sp := range append([]string{def.name, def.symbol}, def.spellings...) {
+					if strings.ToLower(sp) == f {
+						x.clash[d][f] = appendOnce(x.clash[d][f], def.symbol)
+					}
+				}
+			}
 		}
 	}
 	return x
@@ -162,4 +173,13 @@ func lookupUnit(unit string, dim Dimension, anyDim bool) *unitDef {
 		return idx.findAny(s)
 	}
 	return idx.find(dim, s)
+}
+
+func appendOnce(list []string, s string) []string {
+	for _, x := range list {
+		if x == s {
+			return list
+		}
+	}
+	return append(list, s)
 }

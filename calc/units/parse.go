@@ -184,8 +184,13 @@ func (p *parser) unitError(unit string) error {
 		return &ParseError{Input: p.input, Dim: p.dim, Msg: msg, Accepted: Units(p.dim)}
 	}
 	msg := "has an unknown " + p.dim.String() + " unit " + quoteInput(unit)
-	if (p.dim == DimTemperature || p.dim == DimTemperatureDifference) && (unit == "C" || unit == "F" || unit == "c" || unit == "f") {
+	switch {
+	case (p.dim == DimTemperature || p.dim == DimTemperatureDifference) && (unit == "C" || unit == "F" || unit == "c" || unit == "f"):
 		msg += " (write °" + strings.ToUpper(unit) + " or deg" + strings.ToUpper(unit) + "; " + unit + " alone is ambiguous)"
+	case (p.dim == DimTemperature || p.dim == DimTemperatureDifference) && (unit == "°" || unit == "deg"):
+		msg += " (write °C or °F)"
+	case len(idx.clash[p.dim][strings.ToLower(unit)]) > 0:
+		msg += " (letter case matters here: " + strings.Join(idx.clash[p.dim][strings.ToLower(unit)], " or ") + ")"
 	}
 	return p.failUnits(msg)
 }

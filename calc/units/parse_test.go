@@ -266,7 +266,8 @@ func TestParseErrors(t *testing.T) {
 		{"1 000 mm", DimLength, Options{}, []string{"more than one number"}, false},
 		{"1 1/0 in", DimLength, Options{}, []string{"divides by zero"}, false},
 		{"3/0 in", DimLength, Options{}, []string{"divides by zero"}, false},
-		{"1 mhz", DimFrequency, Options{}, []string{`unknown frequency unit "mhz"`}, false},
+		{"1 mhz", DimFrequency, Options{}, []string{`unknown frequency unit "mhz"`, "letter case matters here: MHz or mHz"}, false},
+		{"20 °", DimTemperature, Options{}, []string{"write °C or °F"}, false},
 	}
 	for _, c := range cases {
 		_, err := ParseWith(c.in, c.dim, c.opt)
