@@ -1,0 +1,56 @@
+package safety
+
+import (
+	"strings"
+	"testing"
+
+	"tubewright/gasprops"
+)
+
+func TestCylinderContents(t *testing.T) {
+	t.Parallel()
+	he, err := gasprops.ParseMixture("helium")
+	if err != nil {
+		t.Fatal(err)
+	}
+	// Hand calculation (ideal-gas law): 50 L water capacity at 200 bar
+	// absolute and 15 °C, reference 15 °C and 101.325 kPa:
+	// 0.05 × 200e5/101325 = 9.86923 m³ ("about 10 m³ in a 50 L cylinder at
+	// 200 bar" is the usual figure; common practice, no published source).
+	c, err := CylinderContents(he, 0.05, 200e5, 288.15, StandardISO13443)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "ideal", c.Ideal, 9.869232667, 1e-9)
+	// Helium's second virial coefficient near 288 K is about
+	// +11.8 cm³/mol (from memory), so Z ≈ 1 + 11.8e-6 × 200e5/(8.314 ×
+	// 288.15) ≈ 1.099 and the contents about 9 % below the ideal figure.
+	if !c.Corrected {
+		t.Fatalf("helium should have a non-ideal correction; warnings %q", c.Warnings)
+	}
+	near(t, "Z", c.Z, 1.099, 0.01)
+	near(t, "non-ideal", c.NonIdeal, c.Ideal/c.Z, 1e-12)
+	wantGeneralCaution(t, c.Cautions)
+	// At 0 °C reference the same gas is a smaller volume by 273.15/288.15.
+	n, err := CylinderContents(he, 0.05, 200e5, 288.15, StandardNormal)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "normal/ISO", n.Ideal/c.Ideal, 273.15/288.15, 1e-12)
+	// A mixture has no correction in the gas model: ideal with a warning.
+	mix, err := gasprops.ParseMixture("helium:0.7,argon:0.3")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := CylinderContents(mix, 0.05, 200e5, 288.15, StandardISO13443)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if m.Corrected || m.NonIdeal != m.Ideal || len(m.Warnings) == 0 || !strings.Contains(m.Warnings[len(m.Warnings)-1], "no non-ideal correction") {
+		t.Errorf("mixture: corrected %v, warnings %q", m.Corrected, m.Warnings)
+	}
+	_, err = CylinderContents(he, 0, 200e5, 288.15, StandardISO13443)
+	wantRangeError(t, err, "water capacity")
+	_, err = CylinderContents(he, 0.05, -1, 288.15, StandardISO13443)
+	wantRangeError(t, err, "fill pressure (absolute)")
+}

@@ -1,0 +1,33 @@
+package safety
+
+import "fmt"
+
+// Relief compares the set pressure of a relief device with the vessel's
+// maximum allowable working pressure.
+type Relief struct {
+	Set  GaugePressure // set pressure, gauge, Pa
+	MAWP GaugePressure // gauge, Pa
+	// OK is Set ≤ MAWP: a single relief device opens at or below the MAWP
+	// (ASME BPVC Section VIII Division 1, UG-134(a) (2019 and earlier
+	// numbering; from memory)).
+	OK       bool
+	Message  string
+	Cautions []string
+}
+
+// CheckRelief compares set and mawp (both gauge, Pa, ≥ 0, mawp > 0).
+func CheckRelief(set, mawp GaugePressure) (Relief, error) {
+	if err := gaugeInput(set); err != nil {
+		return Relief{}, err
+	}
+	if err := positive("MAWP", float64(mawp), "Pa"); err != nil {
+		return Relief{}, err
+	}
+	r := Relief{Set: set, MAWP: mawp, OK: set <= mawp, Cautions: cautions()}
+	if r.OK {
+		r.Message = fmt.Sprintf("set pressure is %.0f %% of the MAWP", 100*float64(set/mawp))
+	} else {
+		r.Message = fmt.Sprintf("set pressure is ABOVE the MAWP (%.0f %%): the vessel can be overpressurised before the device opens", 100*float64(set/mawp))
+	}
+	return r, nil
+}

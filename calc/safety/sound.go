@@ -1,0 +1,112 @@
+package safety
+
+import (
+	"math"
+)
+
+// ReferencePressure is the reference sound pressure in air, 20 µPa
+// (IEC 61672-1 and ISO 80000-8 for sound pressure level).
+const ReferencePressure = 20e-6
+
+// SoundLevel is the level of a sinusoidal pressure oscillation.
+type SoundLevel struct {
+	Amplitude float64 // pressure amplitude (peak), Pa
+	RMS       float64 // Amplitude/√2, Pa
+	SPL       float64 // 20 log10(RMS/20 µPa), dB
+	Peak      float64 // 20 log10(Amplitude/20 µPa), dB (peak sound pressure level)
+	// Limits are the occupational limits with this level set against
+	// them. The level inside a vessel is not a person's exposure: see
+	// CautionHearing.
+	Limits   []LimitCheck
+	Cautions []string
+}
+
+// LimitCheck sets a level against one published occupational limit.
+type LimitCheck struct {
+	Name   string  // e.g. "EU 2003/10/EC upper exposure action value"
+	Level  float64 // the limit, dB
+	Metric string  // what the limit applies to, e.g. "8-hour daily exposure, dB(A)"
+	Uses   string  // which of our levels is compared: "rms" or "peak"
+	Over   bool    // our level is at or above the limit
+}
+
+// Occupational noise limits compared with (dB). EU Directive 2003/10/EC
+// (noise), Article 3: exposure limit values L_EX,8h = 87 dB(A) and
+// p_peak = 200 Pa (140 dB(C)); upper exposure action values 85 dB(A) and
+// 140 Pa (137 dB(C)); lower exposure action values 80 dB(A) and 112 Pa
+// (135 dB(C)). US OSHA 29 CFR 1910.95: permissible exposure 90 dBA over
+// 8 hours (Table G-16, 5 dB exchange rate), action level 85 dBA 8-hour
+// time-weighted average (1910.95(c)), impulsive or impact noise not to
+// exceed 140 dB peak (1910.95(b)(1) footnote). All from memory of the
+// published texts.
+var occupationalLimits = []LimitCheck{
+	{Name: "EU 2003/10/EC lower exposure action value", Level: 80, Metric: "8-hour daily exposure, dB(A)", Uses: "rms"},
+	{Name: "EU 2003/10/EC upper exposure action value", Level: 85, Metric: "8-hour daily exposure, dB(A)", Uses: "rms"},
+	{Name: "EU 2003/10/EC exposure limit value", Level: 87, Metric: "8-hour daily exposure, dB(A), with hearing protection", Uses: "rms"},
+	{Name: "EU 2003/10/EC lower action value, peak", Level: 135, Metric: "peak sound pressure, dB(C)", Uses: "peak"},
+	{Name: "EU 2003/10/EC upper action value, peak", Level: 137, Metric: "peak sound pressure, dB(C)", Uses: "peak"},
+	{Name: "EU 2003/10/EC exposure limit value, peak", Level: 140, Metric: "peak sound pressure, dB(C)", Uses: "peak"},
+	{Name: "OSHA 1910.95 action level", Level: 85, Metric: "8-hour time-weighted average, dBA", Uses: "rms"},
+	{Name: "OSHA 1910.95 permissible exposure limit", Level: 90, Metric: "8-hour time-weighted average, dBA", Uses: "rms"},
+	{Name: "OSHA 1910.95 impulse or impact noise", Level: 140, Metric: "peak sound pressure level, dB", Uses: "peak"},
+}
+
+// Level returns the sound pressure levels of a sinusoidal oscillation of
+// pressure amplitude A (Pa, peak, ≥ 0):
+//
+//	p_rms = A/√2,   SPL = 20 log10(p_rms/20 µPa),   peak = 20 log10(A/20 µPa)
+//
+// (peak = SPL + 3.01 dB for a sinusoid), set against the occupational
+// limits above. The definition of sound pressure level: ISO 80000-8:2020,
+// item 8-22, with the reference 20 µPa for air (from memory). No frequency
+// weighting is applied. A-weighting lowers the level of low tones (by about
+// 19 dB at 100 Hz, IEC 61672-1 table, from memory), so comparing an
+// unweighted level with a dB(A) limit errs on the safe side below about
+// 1 kHz; between about 1 and 5 kHz the weighting adds up to about 1 dB.
+//
+// Errors: A < 0 or not finite (*units.RangeError). A = 0 gives -Inf levels
+// and is refused too.
+func Level(A float64) (SoundLevel, error) {
+	if err := positive("pressure amplitude", A, "Pa"); err != nil {
+		return SoundLevel{}, err
+	}
+	s := SoundLevel{
+		Amplitude: A,
+		RMS:       A / math.Sqrt2,
+		Cautions:  cautions(CautionHearing),
+	}
+	s.SPL = 20 * math.Log10(s.RMS/ReferencePressure)
+	s.Peak = 20 * math.Log10(A/ReferencePressure)
+	for _, l := range occupationalLimits {
+		v := s.SPL
+		if l.Uses == "peak" {
+			v = s.Peak
+		}
+		l.Over = v >= l.Level
+		s.Limits = append(s.Limits, l)
+	}
+	return s, nil
+}
+
+// AmplitudeOfSPL returns the pressure amplitude, Pa, of a sinusoid whose
+// rms sound pressure level is L dB: A = √2 · 20 µPa · 10^(L/20).
+func AmplitudeOfSPL(L float64) float64 {
+	return math.Sqrt2 * ReferencePressure * math.Pow(10, L/20)
+}
+
+// PermittedHours returns the daily exposure time, hours, allowed at a
+// steady A-weighted level L (dB(A)) where a person stands:
+//
+//	OSHA 1910.95, Table G-16 and Appendix A:  T = 8 / 2^((L − 90)/5)
+//	EU 2003/10/EC, equal energy:               T = 8 × 10^((87 − L)/10)
+//
+// The EU value is the time that brings L_EX,8h to the 87 dB(A) exposure
+// limit value, which takes hearing protection into account; the upper
+// action value 85 dB(A) already requires protection to be worn. Sources:
+// 29 CFR 1910.95 Appendix A (formula T = 8/2^((L−90)/5)); Directive
+// 2003/10/EC Annex I (L_EX,8h definition); both from memory.
+func PermittedHours(L float64) (osha, eu float64) {
+	osha = 8 / math.Pow(2, (L-90)/5)
+	eu = 8 * math.Pow(10, (87-L)/10)
+	return osha, eu
+}

@@ -1,0 +1,90 @@
+package safety
+
+import (
+	"math"
+	"testing"
+)
+
+func TestLevelWorked(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		name      string
+		A         float64
+		spl, peak float64
+	}{
+		// 1 Pa rms (amplitude √2 Pa) is 93.98 dB: the level of the usual
+		// 94 dB acoustic calibrator (IEC 60942 calibrators; common
+		// practice). 20 log10(1/20e-6) = 93.9794 dB; peak +3.0103 dB.
+		{"1 Pa rms", math.Sqrt2, 93.97940009, 96.98970004},
+		// Hand calculation for the 10 kPa amplitude:
+		// rms = 7071.07 Pa, 20 log10(7071.07/2e-5) = 20 × 8.548455 =
+		// 170.969 dB; peak 20 log10(1e4/2e-5) = 20 × 8.698970 = 173.979 dB.
+		{"10 kPa amplitude", 1e4, 170.9691001, 173.9794001},
+		// EU 2003/10/EC: p_peak 200 Pa is 140 dB(C) (the directive gives
+		// both; 20 log10(200/2e-5) = 140.000 dB).
+		{"200 Pa peak", 200, 136.9897000, 140},
+	}
+	for _, c := range cases {
+		s, err := Level(c.A)
+		if err != nil {
+			t.Fatal(err)
+		}
+		near(t, c.name+" SPL", s.SPL, c.spl, 1e-9)
+		near(t, c.name+" peak", s.Peak, c.peak, 1e-9)
+		near(t, c.name+" rms", s.RMS, c.A/math.Sqrt2, 1e-15)
+		near(t, c.name+" round trip", AmplitudeOfSPL(s.SPL), c.A, 1e-12)
+		wantGeneralCaution(t, s.Cautions)
+		if len(s.Cautions) < 2 || s.Cautions[1] != CautionHearing {
+			t.Errorf("%s: hearing caution missing", c.name)
+		}
+	}
+}
+
+func TestLevelLimits(t *testing.T) {
+	t.Parallel()
+	// 200 Pa peak sits exactly at the EU peak limit and OSHA's 140 dB peak;
+	// its rms level 137 dB is over every dB(A) value.
+	s, err := Level(200)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(s.Limits) != 9 {
+		t.Fatalf("%d limits", len(s.Limits))
+	}
+	for _, l := range s.Limits {
+		if !l.Over {
+			t.Errorf("200 Pa amplitude: %s (%g dB) not flagged", l.Name, l.Level)
+		}
+	}
+	// 0.2 Pa amplitude: SPL 77 dB, peak 80 dB: under every limit.
+	s, _ = Level(0.2)
+	for _, l := range s.Limits {
+		if l.Over {
+			t.Errorf("0.2 Pa amplitude: %s flagged", l.Name)
+		}
+	}
+	_, err = Level(0)
+	wantRangeError(t, err, "pressure amplitude")
+	_, err = Level(-5)
+	wantRangeError(t, err, "pressure amplitude")
+}
+
+func TestPermittedHours(t *testing.T) {
+	t.Parallel()
+	// OSHA 1910.95 Table G-16: 90 dBA 8 h, 95 dBA 4 h, 100 dBA 2 h,
+	// 115 dBA 0.25 h (from memory of the table).
+	// EU: L_EX,8h = 87 dB(A) at 87 dB(A) for 8 h, 90 dB(A) about 4 h
+	// (equal energy, 3 dB halving).
+	cases := []struct{ L, osha, eu float64 }{
+		{90, 8, 8 * math.Pow(10, -0.3)},
+		{95, 4, 8 * math.Pow(10, -0.8)},
+		{100, 2, 8 * math.Pow(10, -1.3)},
+		{115, 0.25, 8 * math.Pow(10, -2.8)},
+		{87, 8 * math.Pow(2, 0.6), 8},
+	}
+	for _, c := range cases {
+		o, e := PermittedHours(c.L)
+		near(t, "OSHA", o, c.osha, 1e-12)
+		near(t, "EU", e, c.eu, 1e-12)
+	}
+}
