@@ -3,6 +3,7 @@ package units
 import (
 	"math"
 	"strings"
+	"unicode"
 )
 
 // This file reads what people type at the bench: "10 bar", "30 barg",
@@ -97,7 +98,12 @@ func (p *parser) readPiece(s string) (piece, error) {
 }
 
 func (p *parser) parse() (Quantity, error) {
-	s := strings.TrimSpace(p.input)
+	s := strings.TrimSpace(strings.Map(func(r rune) rune {
+		if unicode.IsSpace(r) { // tabs, no-break and thin spaces
+			return ' '
+		}
+		return r
+	}, p.input))
 	if s == "" {
 		return Quantity{}, p.fail("is empty; type "+article(p.dim.String())+" "+p.dim.String()+" such as "+p.dim.info().example, nil)
 	}

@@ -38,6 +38,8 @@ func TestParseAccepted(t *testing.T) {
 		{"10 bar", DimPressure, 10e5, 0, "bar", false},
 		{"10bar", DimPressure, 10e5, 0, "bar", false},
 		{"  10   bar ", DimPressure, 10e5, 0, "bar", false},
+		{"10\u00a0bar", DimPressure, 10e5, 0, "bar", false},      // no-break space
+		{"1\u20091/2\tin", DimLength, 1.5 * tIn, 0, "in", false}, // thin space, tab
 		{"145 psi", DimPressure, 145 * tPsi, 0, "psi", false},
 		{"145 psia", DimPressure, 145 * tPsi, 0, "psi", false},
 		{"1.2 MPa", DimPressure, 1.2e6, 0, "MPa", false},
