@@ -16,7 +16,7 @@ func runGas(args []string) (*report, error) {
 	fl := newFlags("gas")
 	gas := fl.gas("gas", "", "working gas, or a mixture by mole fraction: helium, He, helium:0.7,argon:0.3")
 	temp := fl.quantity("temperature", units.DimTemperature, "", "gas temperature: 300K, 27degC, 80degF")
-	pres := fl.quantity("pressure", units.DimPressure, "1atm", "mean absolute pressure: 10bar, 30barg, 145psi, 1.2MPa")
+	pres := fl.quantity("pressure", units.DimPressure, "1atm", "mean pressure, absolute (10bar, 145psi, 1.2MPa) or gauge (30barg, 435psig)")
 	nonIdeal := fl.boolean("non-ideal", "correct density and sound speed with the second virial coefficient")
 	fl.describe(`examples:
   twcalc gas --gas helium --temperature 300K --pressure 10bar

@@ -48,7 +48,7 @@ func runWith(cmds []command, args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	if cmd == nil {
-		fmt.Fprintf(stderr, "twcalc: unknown command %q; run \"twcalc help\" for the list\n", oneLine(name))
+		fmt.Fprintf(stderr, "twcalc: unknown command %s; run \"twcalc help\" for the list\n", quoteValue(name))
 		return exitUsage
 	}
 	rep, err := cmd.run(args[1:])
@@ -58,7 +58,7 @@ func runWith(cmds []command, args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintf(stdout, "twcalc %s: %s\n\n%s", cmd.name, cmd.summary, help.text)
 			return exitOK
 		}
-		fmt.Fprintf(stderr, "twcalc: %s\n", oneLine(err.Error()))
+		fmt.Fprintf(stderr, "twcalc: %s\n", flat(err.Error()))
 		var usage *usageError
 		if errors.As(err, &usage) || isRangeError(err) {
 			return exitUsage
@@ -70,7 +70,7 @@ func runWith(cmds []command, args []string, stdout, stderr io.Writer) int {
 		return exitFail
 	}
 	if rep.err != nil {
-		fmt.Fprintf(stderr, "twcalc: %s\n", oneLine(rep.err.Error()))
+		fmt.Fprintf(stderr, "twcalc: %s\n", flat(rep.err.Error()))
 		return exitFail
 	}
 	if wantJSON(args[1:]) {
@@ -79,7 +79,7 @@ func runWith(cmds []command, args []string, stdout, stderr io.Writer) int {
 		err = rep.writeText(stdout)
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "twcalc: writing output: %s\n", oneLine(err.Error()))
+		fmt.Fprintf(stderr, "twcalc: writing output: %s\n", flat(err.Error()))
 		return exitFail
 	}
 	return exitOK
@@ -118,4 +118,10 @@ func listCommands(cmds []command, w io.Writer) {
 	fmt.Fprintln(w, "")
 	fmt.Fprintln(w, "Values take any common unit: 300K, 27degC, 10bar, 30barg, 145psi, 14.7cm, 3/8in.")
 	fmt.Fprintln(w, "Quote values with spaces: --temperature \"27 degC\". --json prints one JSON object.")
+}
+
+// flat puts a message on one line: line breaks become spaces, everything
+// else (the quoted values in it) is kept as it is.
+func flat(s string) string {
+	return strings.NewReplacer("\r\n", " ", "\n", " ", "\r", " ").Replace(s)
 }
