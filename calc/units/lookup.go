@@ -122,10 +122,40 @@ func (x *index) find(d Dimension, s string) *unitDef {
 	if def := x.exact[d][t]; def != nil {
 		return def
 	}
-	if def := x.folded[d][strings.ToLower(s)]; def != nil {
+	if def := x.folded[d][strings.ToLower(s)]; def != nil && safeFold(s, def) {
 		return def
 	}
-	return x.folded[d][strings.ToLower(t)]
+	if def := x.folded[d][strings.ToLower(t)]; def != nil && safeFold(t, def) {
+		return def
+	}
+	return nil
+}
+
+// safeFold reports whether reading typed as def, ignoring letter case, is
+// safe: m/M (milli/mega) and g/G (gram/giga) at the start are never
+// folded, so "5 MW" is not taken for 5 mW nor "mpa" for MPa.
+func safeFold(typed string, def *unitDef) bool {
+	if typed == "" {
+		return false
+	}
+	a, b := typed[0], def.name[0]
+	if a == b {
+		return true
+	}
+	switch a | 0x20 {
+	case 'm', 'g':
+		return false
+	}
+	return true
+}
+
+// foldHint returns the symbol of the unit that typed matches when letter
+// case is ignored, or "".
+func (x *index) foldHint(d Dimension, typed string) string {
+	if def := x.folded[d][strings.ToLower(typed)]; def != nil {
+		return def.symbol
+	}
+	return ""
 }
 
 // findAny looks a unit up in every dimension and returns the first match

@@ -197,6 +197,8 @@ func (p *parser) unitError(unit string) error {
 		msg += " (write °C or °F)"
 	case len(idx.clash[p.dim][strings.ToLower(unit)]) > 0:
 		msg += " (letter case matters here: " + strings.Join(idx.clash[p.dim][strings.ToLower(unit)], " or ") + ")"
+	case idx.foldHint(p.dim, unit) != "":
+		msg += " (letter case matters here: did you mean " + idx.foldHint(p.dim, unit) + "?)"
 	}
 	return p.failUnits(msg)
 }

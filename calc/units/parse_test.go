@@ -270,6 +270,11 @@ func TestParseErrors(t *testing.T) {
 		{"3/0 in", DimLength, Options{}, []string{"divides by zero"}, false},
 		{"1 mhz", DimFrequency, Options{}, []string{`unknown frequency unit "mhz"`, "letter case matters here: MHz or mHz"}, false},
 		{"20 °", DimTemperature, Options{}, []string{"write °C or °F"}, false},
+		// Milli and mega, gram and giga are never confused by case folding.
+		{"5 MW", DimPower, Options{}, []string{`unknown power unit "MW"`, "did you mean mW?"}, false},
+		{"2 mpa", DimPressure, Options{}, []string{"did you mean MPa?"}, false},
+		{"3 ML", DimVolume, Options{}, []string{"did you mean mL?"}, false},
+		{"1 gpa", DimStress, Options{}, []string{"did you mean GPa?"}, false},
 	}
 	for _, c := range cases {
 		_, err := ParseWith(c.in, c.dim, c.opt)
