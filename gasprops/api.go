@@ -149,9 +149,12 @@ func (m Mixture) Range() (tmin, tmax float64) {
 // and c² = (γRT/M)(1 + β_a p/(RT)) with the acoustic virial β_a
 // (acousticVirial); cp, γ and transport stay ideal.
 //
-// Errors (*units.RangeError): pressure not positive and finite;
-// temperature not finite, or more than 20 % outside Range. Within 20 %
-// outside Range the result is returned with a sentence in Warnings.
+// Errors (*units.RangeError): pressure not positive and finite, or with
+// o.NonIdeal so high that |Bp/(RT)| > 0.25; temperature not finite, or
+// more than 20 % outside Range. Within 20 % outside Range the result is
+// returned with a sentence in Warnings; so it is when |Bp/(RT)| > 2 %
+// (the ideal-gas density is that far off, or the virial correction is
+// becoming a rough estimate).
 func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (Properties, error) {
 	t, pa := float64(T), float64(p)
 	if m.n == 0 {
@@ -164,6 +167,10 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 	if err != nil {
 		return Properties{}, err
 	}
+	nonIdeal := o != nil && o.NonIdeal
+	if warn, err = m.checkPressure(t, pa, nonIdeal, warn); err != nil {
+		return Properties{}, err
+	}
 	var mm, cpm float64
 	for _, c := range m.comps[:m.n] {
 		mm += c.X * c.Species.MolarMass
@@ -174,7 +181,7 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 	eta, lam := m.mixTransport(t)
 	rho := pa * mm / (R * t)
 	c2 := gamma * R * t / mm
-	if o != nil && o.NonIdeal && m.n == 1 {
+	if nonIdeal && m.n == 1 {
 		v := &m.comps[0].Species.m.virial
 		if v.kind != virialNone {
 			rho /= 1 + v.b(t)*pa/(R*t)

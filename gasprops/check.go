@@ -32,7 +32,7 @@ func (m *Mixture) checkTemperature(t float64) ([]string, error) {
 		side = "above"
 	}
 	return []string{"temperature " + fmtK(t) + " is " + side + " the validated range " +
-		fmtK(lo) + "–" + fmtK(hi) + " of the " + who.m.source + "; results are extrapolated"}, nil
+		fmtNum(lo) + "–" + fmtK(hi) + " of the " + who.m.source + "; results are extrapolated"}, nil
 }
 
 // limits returns the validated range and the species whose model sets the
@@ -54,6 +54,46 @@ func (m *Mixture) limits(t float64) (lo, hi float64, who *Species) {
 	return lo, hi, whoHi
 }
 
-func fmtK(t float64) string {
-	return strconv.FormatFloat(t, 'g', 4, 64) + " K"
+func fmtK(t float64) string { return fmtNum(t) + " K" }
+
+func fmtNum(v float64) string { return strconv.FormatFloat(v, 'g', 4, 64) }
+
+// nonIdealLimit is the largest |B p/(R T)| for which the second-virial
+// correction is applied; beyond it the truncated series is no estimate at
+// all and Properties refuses the pressure.
+const nonIdealLimit = 0.25
+
+// nonIdealWarnAt is the |B p/(R T)| above which Properties warns: in ideal
+// mode that the ideal-gas density is off by that much, in non-ideal mode
+// that higher virial terms start to matter.
+const nonIdealWarnAt = 0.02
+
+// checkPressure looks at the gas's departure from ideality at (t, pa) and
+// returns warnings to append, or a *units.RangeError when the non-ideal
+// option is on and the pressure is beyond nonIdealLimit. Below 0.5 MPa it
+// returns at once (|Bp/RT| < 0.02 there for every gas here above 200 K
+// except carbon dioxide and xenon near 200 K, for which the warning is
+// then merely skipped).
+func (m *Mixture) checkPressure(t, pa float64, nonIdeal bool, warn []string) ([]string, error) {
+	if pa < 5e5 {
+		return warn, nil
+	}
+	b, ok := m.SecondVirial(t)
+	if !ok {
+		return warn, nil
+	}
+	d := b * pa / (R * t)
+	switch {
+	case nonIdeal && math.Abs(d) > nonIdealLimit:
+		e := units.NewRangeError("pressure", pa, 0, nonIdealLimit*R*t/math.Abs(b), "Pa")
+		e.Why = "second-virial correction of the " + m.comps[0].Species.m.source
+		return nil, e
+	case math.Abs(d) > nonIdealWarnAt && !nonIdeal:
+		warn = append(warn, "at this pressure the real gas departs from the ideal gas by about "+
+			strconv.FormatFloat(math.Abs(100*d), 'f', 1, 64)+" % in density; turn on the non-ideal correction")
+	case math.Abs(d) > nonIdealWarnAt:
+		warn = append(warn, "at this pressure the gas departs from the ideal gas by about "+
+			strconv.FormatFloat(math.Abs(100*d), 'f', 1, 64)+" %; the second-virial correction is a first-order estimate")
+	}
+	return warn, nil
 }

@@ -48,26 +48,52 @@ func pairAt(si, sj *Species, T float64) pair {
 // 1984 discuss the higher approximations).
 func (m *Mixture) mixTransport(T float64) (eta, lambda float64) {
 	n := m.n
-	var etaI, lamI [MaxComponents]float64
-	for i := 0; i < n; i++ {
-		etaI[i] = m.comps[i].Species.viscosity(T)
-		lamI[i] = m.comps[i].Species.conductivity(T)
-	}
 	if n == 1 {
-		return etaI[0], lamI[0]
+		sp := m.comps[0].Species
+		return sp.viscosity(T), sp.conductivity(T)
 	}
-	var h, l [MaxComponents][MaxComponents]float64
-	var x [MaxComponents]float64
+	var in ceInput
+	in.n = n
 	for i := 0; i < n; i++ {
-		x[i] = m.comps[i].X
-		h[i][i] = x[i] * x[i] / etaI[i]
-		l[i][i] = x[i] * x[i] / lamI[i]
+		sp := m.comps[i].Species
+		in.x[i] = m.comps[i].X
+		in.m[i] = sp.MolarMass
+		in.eta[i] = sp.viscosity(T)
+		in.lam[i] = sp.conductivity(T)
 	}
 	for i := 0; i < n; i++ {
 		for j := i + 1; j < n; j++ {
-			si, sj := m.comps[i].Species, m.comps[j].Species
-			mi, mj := si.MolarMass, sj.MolarMass
-			pr := pairAt(si, sj, T)
+			in.pair[i][j] = pairAt(m.comps[i].Species, m.comps[j].Species, T)
+		}
+	}
+	return chapmanEnskog(&in)
+}
+
+// ceInput holds what the first Chapman–Enskog approximation needs: mole
+// fractions, molar masses (kg/mol), pure viscosities (Pa·s) and
+// conductivities (W/(m·K)), and the unlike pairs (upper triangle, i < j).
+type ceInput struct {
+	n    int
+	x, m [MaxComponents]float64
+	eta  [MaxComponents]float64
+	lam  [MaxComponents]float64
+	pair [MaxComponents][MaxComponents]pair
+}
+
+// chapmanEnskog evaluates the formulas of mixTransport; every x must be
+// positive.
+func chapmanEnskog(in *ceInput) (eta, lambda float64) {
+	n := in.n
+	var h, l [MaxComponents][MaxComponents]float64
+	x := &in.x
+	for i := 0; i < n; i++ {
+		h[i][i] = x[i] * x[i] / in.eta[i]
+		l[i][i] = x[i] * x[i] / in.lam[i]
+	}
+	for i := 0; i < n; i++ {
+		for j := i + 1; j < n; j++ {
+			mi, mj := in.m[i], in.m[j]
+			pr := &in.pair[i][j]
 			xx := x[i] * x[j]
 			s2 := (mi + mj) * (mi + mj)
 			g := 2 * xx / pr.eta * mi * mj / s2
@@ -82,7 +108,7 @@ func (m *Mixture) mixTransport(T float64) (eta, lambda float64) {
 			l[j][i] = l[i][j]
 		}
 	}
-	return quadInv(&h, &x, n), quadInv(&l, &x, n)
+	return quadInv(&h, x, n), quadInv(&l, x, n)
 }
 
 // quadInv returns xᵀ A⁻¹ x for the leading n×n block of a symmetric

@@ -17,15 +17,23 @@ const (
 	// 1995); for the noble gases the fits rest on Bich, Millat & Vogel
 	// (1990); for CO2 on Bousheri et al. (1987).
 	transportCEA transportKind = iota
-	// transportLJ: first-order Chapman–Enskog kinetic theory with a
-	// Lennard-Jones (12-6) potential and the collision integral fit of
-	// Neufeld, Janzen & Aziz (1972); monatomic conductivity
-	// λ = (15/4)(R/M)η (Hirschfelder, Curtiss & Bird 1954, eq. 8.2-31).
-	transportLJ
 	// transportAirLJ: the dilute-gas terms of Lemmon & Jacobsen,
 	// "Viscosity and thermal conductivity equations for nitrogen, oxygen,
 	// argon, and air", Int. J. Thermophys. 25, 21 (2004), eqs. 2–5.
 	transportAirLJ
+	// transportScaled: the law of corresponding states for the heavy noble
+	// gases (Hirschfelder, Curtiss & Bird 1954, §8.2 and §4.1; the idea of
+	// Kestin et al., J. Phys. Chem. Ref. Data 13, 229, 1984): the reduced
+	// viscosity η σ²/√(M ε) is one function of T* = kT/ε, so
+	//
+	//	η(T) = η_ref(T ε_ref/ε) · √(M ε/(M_ref ε_ref)) · (σ_ref/σ)²
+	//	λ(T) = (15/4)(R/M) η(T)
+	//
+	// with krypton's NASA CEA fits as the reference and the Lennard-Jones
+	// σ, ε of Svehla, NASA TR R-132 (1962) as scaling parameters. Used for
+	// xenon, for which no CEA fit is at hand; the reference fit is
+	// extrapolated down to 155 K when xenon is at 200 K.
+	transportScaled
 )
 
 // ceaFit is one interval of a NASA CEA transport fit.
@@ -53,6 +61,9 @@ type model struct {
 	transport transportKind
 	visc      [2]ceaFit
 	cond      [2]ceaFit
+	// condCO2 replaces the CEA conductivity fit by the dilute-gas
+	// reference correlation of Huber et al. (2016) for carbon dioxide.
+	condCO2 bool
 	// Lennard-Jones parameters: collision diameter σ in Å and well depth
 	// ε/k in K. Used for the unlike interactions in mixtures and for
 	// transportLJ species.
@@ -120,9 +131,9 @@ var (
 		source: "krypton model (NASA CEA transport fits)",
 	}}
 	xenon = &Species{Name: "xenon", Symbol: "Xe", MolarMass: 131.293e-3, m: model{
-		monatomic: true, noble: true, transport: transportLJ,
-		sigma: 4.047, epsK: 231.0, tmin: 200, tmax: 1500,
-		source: "xenon model (Chapman–Enskog, Lennard-Jones)",
+		monatomic: true, noble: true, transport: transportScaled,
+		sigma: 4.047, epsK: 231.0, tmin: 200, tmax: 3000,
+		source: "xenon model (corresponding states from krypton)",
 	}}
 )
 
@@ -181,11 +192,8 @@ var (
 		visc: [2]ceaFit{
 			{200, 1000, 0.51137258, -229.51321, 13710.678, 2.7075538},
 			{1000, 5000, 0.63978285, -42.637076, -15522.605, 1.6628843}},
-		cond: [2]ceaFit{
-			{200, 1000, 0.48056568, -507.8672, 35088.811, 3.6747794},
-			{1000, 5000, 0.69857277, -118.30477, -50688.859, 1.8650551}},
-		tmin: 200, tmax: 5000,
-		source: "carbon dioxide model (NASA CEA fits)",
+		condCO2: true, tmin: 200, tmax: 1100,
+		source: "carbon dioxide model (NASA CEA viscosity, Huber et al. 2016 conductivity)",
 	}}
 	// air is the dry-air pseudo-component of Lemmon et al. (2000): mole
 	// fractions N2 0.7812, O2 0.2096, Ar 0.0092. Its ideal-gas heat capacity

@@ -38,9 +38,9 @@ func (sp *Species) molarCp(T float64) float64 {
 	case m.cpParts != nil:
 		c := 0.0
 		for _, p := range m.cpParts {
-			c += p.x * nasaCp(&p.sp.m.cp, T)
+			c += p.x * p.sp.molarCp(T)
 		}
-		return c * R
+		return c
 	default:
 		return nasaCp(&m.cp, T) * R
 	}
@@ -106,9 +106,12 @@ func (sp *Species) viscosity(T float64) float64 {
 		return ceaEval(&m.visc, T) * 1e-7
 	case transportAirLJ:
 		return airViscosity0(T)
-	default:
-		return ljViscosity(sp.MolarMass*1e3, m.sigma, m.epsK, T)
+	case transportScaled:
+		r := krypton.m.epsK / m.epsK
+		s := krypton.m.sigma / m.sigma
+		return krypton.viscosity(T*r) * math.Sqrt(sp.MolarMass/(krypton.MolarMass*r)) * s * s
 	}
+	panic("gasprops: unknown viscosity model of " + sp.Name)
 }
 
 // conductivity returns the dilute-gas thermal conductivity of the pure
@@ -117,13 +120,20 @@ func (sp *Species) conductivity(T float64) float64 {
 	m := &sp.m
 	switch m.transport {
 	case transportCEA:
+		if m.condCO2 {
+			return co2Conductivity0(T)
+		}
 		return ceaEval(&m.cond, T) * 1e-4
 	case transportAirLJ:
 		return airConductivity0(T)
-	default:
-		// monatomic: λ = (15/4)(R/M)η, HCB 1954 eq. 8.2-31
+	case transportScaled:
+		// first Chapman–Enskog approximation for a monatomic gas (the
+		// higher approximations add 0.3–0.5 %), HCB 1954 eq. 8.2-31;
+		// scaling krypton's conductivity fit instead would extrapolate it
+		// below its 200 K limit less gracefully.
 		return 3.75 * R / sp.MolarMass * sp.viscosity(T)
 	}
+	panic("gasprops: unknown conductivity model of " + sp.Name)
 }
 
 // Lemmon & Jacobsen (2004) dilute-gas viscosity of air, eq. 2 with the
@@ -147,4 +157,18 @@ func airConductivity0(T float64) float64 {
 	tau := 132.6312 / T
 	eta := airViscosity0(T) * 1e6
 	return (1.308*eta + 1.405*math.Pow(tau, -1.1) - 1.036*math.Pow(tau, -0.3)) * 1e-3
+}
+
+// co2Conductivity0 is the dilute-gas thermal conductivity of carbon dioxide
+// in W/(m·K) from Huber, Sykioti, Assael & Perkins, "Reference correlation
+// of the thermal conductivity of carbon dioxide from the triple point to
+// 1100 K and up to 200 MPa", J. Phys. Chem. Ref. Data 45, 013102 (2016),
+// eq. 3 (uncertainty about 1 % below 0.1 MPa between 300 and 700 K):
+//
+//	λ⁰ = √Tr / Σ_{k=0..3} L_k/Tr^k  mW/(m·K),  Tr = T/304.1282 K,
+//	L = 1.51874307e-2, 2.80674040e-2, 2.28564190e-2, −7.41624210e-3.
+func co2Conductivity0(T float64) float64 {
+	tau := 304.1282 / T
+	den := 1.51874307e-2 + tau*(2.80674040e-2+tau*(2.28564190e-2+tau*-7.41624210e-3))
+	return 1e-3 / (math.Sqrt(tau) * den)
 }
