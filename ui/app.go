@@ -1,0 +1,313 @@
+package ui
+
+import (
+	"image"
+
+	"gioui.org/font"
+	"gioui.org/io/key"
+	"gioui.org/io/semantic"
+	"gioui.org/layout"
+	"gioui.org/op"
+	"gioui.org/text"
+	"gioui.org/unit"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+)
+
+// Version is the build's version stamp, shown in the About line. Release
+// builds set it with
+//
+//	go build -ldflags "-X tubewright/ui.Version=1.2.3" ./cmd/tubewright
+var Version = "dev"
+
+// wideAt is the window width from which the catalog stays beside the screen.
+const wideAt = unit.Dp(760)
+
+// readable is the widest a screen's column grows on large windows.
+const readable = unit.Dp(760)
+
+// App is the whole user interface: the catalog, the back stack of open
+// screens and the top bar. Make one with NewApp and call Layout every frame.
+type App struct {
+	env     *Env
+	screens map[string]Screen
+	stack   []string
+	entries []widget.Clickable
+	list    widget.List
+	back    widget.Clickable
+	welcome *Page
+}
+
+// NewApp builds the app. invalidate asks the window for a frame (e.g.
+// (*app.Window).Invalidate); it may be nil in tests.
+func NewApp(invalidate func()) *App {
+	a := &App{
+		env:     NewEnv(invalidate),
+		screens: make(map[string]Screen),
+		entries: make([]widget.Clickable, len(catalog)),
+	}
+	a.list.Axis = layout.Vertical
+	a.env.open = a.Open
+	a.welcome = NewPage(a.env)
+	return a
+}
+
+// Env returns the environment shared by the app's screens.
+func (a *App) Env() *Env { return a.env }
+
+// Current returns the catalog ID of the screen on top, or "" when the
+// catalog itself is showing.
+func (a *App) Current() string {
+	if len(a.stack) == 0 {
+		return ""
+	}
+	return a.stack[len(a.stack)-1]
+}
+
+// Depth returns the number of screens on the back stack.
+func (a *App) Depth() int { return len(a.stack) }
+
+// Screen returns the screen with the catalog ID id, building it on first
+// use, or nil for an unknown ID.
+func (a *App) Screen(id string) Screen {
+	if s, ok := a.screens[id]; ok {
+		return s
+	}
+	e, ok := lookupEntry(id)
+	if !ok {
+		return nil
+	}
+	s := e.New(a.env)
+	a.screens[id] = s
+	return s
+}
+
+// Open pushes the screen with catalog ID id on the back stack. Unknown IDs
+// and the screen already on top are ignored.
+func (a *App) Open(id string) {
+	if id == a.Current() || a.Screen(id) == nil {
+		return
+	}
+	a.leaveTop()
+	a.stack = append(a.stack, id)
+	a.enterTop()
+	a.env.Invalidate()
+}
+
+// openRoot shows id as the only screen on the stack (a tap in the catalog).
+func (a *App) openRoot(id string) {
+	if len(a.stack) == 1 && a.stack[0] == id {
+		return
+	}
+	if a.Screen(id) == nil {
+		return
+	}
+	a.leaveTop()
+	a.stack = append(a.stack[:0], id)
+	a.enterTop()
+}
+
+// Back pops the top screen and reports whether there was one.
+func (a *App) Back() bool {
+	if len(a.stack) == 0 {
+		return false
+	}
+	a.leaveTop()
+	a.stack = a.stack[:len(a.stack)-1]
+	a.enterTop()
+	a.env.Invalidate()
+	return true
+}
+
+func (a *App) leaveTop() {
+	if l, ok := a.Screen(a.Current()).(Leaver); ok {
+		l.Leave()
+	}
+}
+
+func (a *App) enterTop() {
+	if e, ok := a.Screen(a.Current()).(Enterer); ok {
+		e.Enter()
+	}
+}
+
+// update handles the app's own events: Back (the Android key, browser
+// history back, Escape on a keyboard, the Back button) and catalog taps.
+func (a *App) update(gtx layout.Context) {
+	if len(a.stack) > 0 {
+		// Only claim Back while a screen is open, so that at the catalog
+		// the platform's Back leaves the app as people expect.
+		for {
+			ev, ok := gtx.Event(key.Filter{Name: key.NameBack}, key.Filter{Name: key.NameEscape})
+			if !ok {
+				break
+			}
+			if ke, ok := ev.(key.Event); ok && ke.State == key.Press {
+				a.Back()
+			}
+		}
+	}
+	if a.back.Clicked(gtx) {
+		a.Back()
+	}
+	for i := range a.entries {
+		if a.entries[i].Clicked(gtx) {
+			a.openRoot(catalog[i].ID)
+		}
+	}
+}
+
+// Layout handles events and draws the app into the whole window.
+func (a *App) Layout(gtx layout.Context) layout.Dimensions {
+	a.update(gtx)
+	fill(gtx, a.env.Colors.Background, gtx.Constraints.Max)
+	gtx.Constraints.Min = gtx.Constraints.Max
+	wide := gtx.Constraints.Max.X >= gtx.Dp(wideAt)
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(a.layoutBar),
+		layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+			gtx.Constraints.Min = gtx.Constraints.Max
+			if !wide {
+				if s := a.Screen(a.Current()); s != nil {
+					return s.Layout(gtx)
+				}
+				return a.layoutCatalog(gtx, true)
+			}
+			side := gtx.Dp(320)
+			return layout.Flex{}.Layout(gtx,
+				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+					gtx.Constraints = layout.Exact(image.Pt(side, gtx.Constraints.Max.Y))
+					fill(gtx, a.env.Colors.Surface, gtx.Constraints.Max)
+					return a.layoutCatalog(gtx, false)
+				}),
+				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+					sz := image.Pt(gtx.Dp(1), gtx.Constraints.Max.Y)
+					fill(gtx, a.env.Colors.Divider, sz)
+					return layout.Dimensions{Size: sz}
+				}),
+				layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+					gtx.Constraints.Min = gtx.Constraints.Max
+					return layout.N.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						w := min(gtx.Constraints.Max.X, gtx.Dp(readable))
+						gtx.Constraints = layout.Exact(image.Pt(w, gtx.Constraints.Max.Y))
+						if s := a.Screen(a.Current()); s != nil {
+							return s.Layout(gtx)
+						}
+						return a.layoutWelcome(gtx)
+					})
+				}),
+			)
+		}),
+	)
+}
+
+// layoutBar draws the top bar: Back when a screen is open, and the title.
+func (a *App) layoutBar(gtx layout.Context) layout.Dimensions {
+	th := a.env.Theme
+	title := "Tubewright"
+	if s := a.Screen(a.Current()); s != nil {
+		title = s.Title()
+	}
+	h := gtx.Dp(56)
+	size := image.Pt(gtx.Constraints.Max.X, h)
+	fill(gtx, a.env.Colors.Accent, size)
+	gtx.Constraints = layout.Exact(size)
+	children := []layout.FlexChild{}
+	if len(a.stack) > 0 {
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			b := material.Button(th, &a.back, "‹ Back")
+			b.Background = a.env.Colors.Accent
+			b.Color = a.env.Colors.OnAccent
+			b.TextSize = unit.Sp(17)
+			b.Inset = layout.Inset{Left: 12, Right: 16, Top: 10, Bottom: 10}
+			b.CornerRadius = 0
+			gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
+			return b.Layout(gtx)
+		}))
+	}
+	children = append(children, layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+		in := layout.Inset{Left: 16, Right: 16}
+		if len(a.stack) > 0 {
+			in.Left = 4
+		}
+		return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			return in.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				l := material.Label(th, unit.Sp(20), title)
+				l.Color = a.env.Colors.OnAccent
+				l.Font.Weight = font.SemiBold
+				l.MaxLines = 1
+				l.Truncator = "…"
+				return l.Layout(gtx)
+			})
+		})
+	}))
+	layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)
+	return layout.Dimensions{Size: size}
+}
+
+// layoutCatalog draws the list of calculators; with about set it ends with
+// the About line (the phone home page).
+func (a *App) layoutCatalog(gtx layout.Context, about bool) layout.Dimensions {
+	n := len(catalog)
+	if about {
+		n++
+	}
+	cur := a.Current()
+	return material.List(a.env.Theme, &a.list).Layout(gtx, n, func(gtx layout.Context, i int) layout.Dimensions {
+		if i == len(catalog) {
+			return layout.UniformInset(16).Layout(gtx, a.aboutLine)
+		}
+		e := catalog[i]
+		return a.entries[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			semantic.DescriptionOp(e.Title).Add(gtx.Ops)
+			m := op.Record(gtx.Ops)
+			dims := layout.Inset{Left: 16, Right: 16, Top: 12, Bottom: 12}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				gtx.Constraints.Min.X = gtx.Constraints.Max.X
+				return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+						l := material.Label(a.env.Theme, unit.Sp(17), e.Title)
+						l.Font.Weight = font.SemiBold
+						l.Color = a.env.Colors.Text
+						return l.Layout(gtx)
+					}),
+					layout.Rigid(layout.Spacer{Height: 2}.Layout),
+					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+						l := material.Body2(a.env.Theme, e.Summary)
+						l.Color = a.env.Colors.Muted
+						return l.Layout(gtx)
+					}),
+				)
+			})
+			call := m.Stop()
+			if e.ID == cur {
+				fill(gtx, a.env.Colors.Selected, dims.Size)
+			}
+			call.Add(gtx.Ops)
+			line := image.Pt(dims.Size.X, gtx.Dp(1))
+			st := op.Offset(image.Pt(0, dims.Size.Y-line.Y)).Push(gtx.Ops)
+			fill(gtx, a.env.Colors.Divider, line)
+			st.Pop()
+			return dims
+		})
+	})
+}
+
+// aboutLine draws the version stamp and the app's promises.
+func (a *App) aboutLine(gtx layout.Context) layout.Dimensions {
+	l := material.Body2(a.env.Theme, "Tubewright "+Version+". Works offline: no network, no telemetry. "+
+		"Each screen names the published methods it uses. Results that bear on safety come with cautions and "+
+		"never replace local codes, standards or licensed practice.")
+	l.Color = a.env.Colors.Muted
+	l.Alignment = text.Start
+	return l.Layout(gtx)
+}
+
+// layoutWelcome fills the right pane of a wide window when no screen is open.
+func (a *App) layoutWelcome(gtx layout.Context) layout.Dimensions {
+	return a.welcome.Layout(gtx,
+		Heading(a.env, "Pick a calculator"),
+		Para(a.env, "Choose a calculator from the list. Fields accept the units you have at hand: "+
+			"bar, psi or MPa; K, °C or °F (type degC, degF); m, mm or in; Hz or kHz."),
+		a.aboutLine,
+	)
+}

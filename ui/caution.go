@@ -1,0 +1,59 @@
+package ui
+
+import (
+	"gioui.org/layout"
+	"gioui.org/unit"
+	"gioui.org/widget/material"
+)
+
+// Caution is a visually distinct box of safety cautions. Every result that
+// bears on pressure, stored energy, oxygen depletion, hot parts or sound
+// level is shown next to one; the screen supplies the words, which should
+// defer to local codes and licensed practice.
+type Caution struct {
+	// Heading is the first line, e.g. "Before you pressurise". Empty
+	// means "Caution".
+	Heading string
+	// Lines are the cautions, one paragraph each.
+	Lines []string
+
+	env *Env
+}
+
+// NewCaution returns a caution box.
+func NewCaution(env *Env, heading string, lines ...string) *Caution {
+	return &Caution{Heading: heading, Lines: lines, env: env}
+}
+
+// Layout draws the box across the available width.
+func (c *Caution) Layout(gtx layout.Context) layout.Dimensions {
+	th := c.env.Theme
+	col := c.env.Colors
+	heading := c.Heading
+	if heading == "" {
+		heading = "Caution"
+	}
+	gtx.Constraints.Min.X = gtx.Constraints.Max.X
+	return background(gtx, col.CautionBg, col.CautionEdge, gtx.Dp(6), gtx.Dp(2), func(gtx layout.Context) layout.Dimensions {
+		return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			children := make([]layout.FlexChild, 0, 1+2*len(c.Lines))
+			children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+				l := material.Label(th, unit.Sp(17), "⚠ "+heading)
+				l.Color = col.CautionEdge
+				l.Font.Weight = 700
+				return l.Layout(gtx)
+			}))
+			for _, line := range c.Lines {
+				children = append(children,
+					layout.Rigid(layout.Spacer{Height: 6}.Layout),
+					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+						l := material.Body2(th, line)
+						l.Color = col.CautionText
+						l.TextSize = unit.Sp(15)
+						return l.Layout(gtx)
+					}))
+			}
+			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
+		})
+	})
+}

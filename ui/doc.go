@@ -1,0 +1,20 @@
+// Package ui is Tubewright's user interface: the app shell (a catalog of
+// calculators, a back stack, phone and wide layouts), the shared widgets
+// every calculator screen uses (unit-aware number fields, a gas picker,
+// result rows with units, caution boxes, plots, background jobs) and the
+// screens themselves, one file each.
+//
+// The package follows Gio's immediate-mode style: every control keeps its
+// state in a struct made once and owned by its screen; each frame a screen
+// first handles the events of its controls, then (if an input changed)
+// recomputes by calling the calc and gasprops packages, then lays out.
+// There is no physics here and there are no package-level widgets.
+//
+// Numbers reach the screen only through the units package's formatters, so
+// every value carries its unit and a non-finite value is shown as "—" with
+// a reason instead of NaN or Inf. Safety results are always drawn next to a
+// Caution box.
+//
+// Screens are listed in catalog.go, one line each, and built once by a
+// constructor func(*Env) Screen when first opened.
+package ui

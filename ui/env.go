@@ -1,0 +1,95 @@
+package ui
+
+import (
+	"math"
+
+	"gioui.org/widget/material"
+)
+
+// Env is what every screen and widget shares: the theme, a way to ask for a
+// new frame from another goroutine, the Bench of carried-over values and
+// navigation. One Env exists per App; it is touched only on the UI
+// goroutine, except Invalidate, which is safe from any goroutine.
+type Env struct {
+	// Theme is the material theme (embedded fonts, our palette).
+	Theme *material.Theme
+	// Colors is the palette beyond the material one (muted text, errors,
+	// cautions).
+	Colors Colors
+	// Invalidate asks the window for a new frame. Safe from any goroutine;
+	// never nil.
+	Invalidate func()
+	// Bench carries the last used gas, temperature, pressure and computed
+	// frequency from one screen to the next.
+	Bench *Bench
+
+	open func(id string)
+}
+
+// NewEnv returns an Env with the app theme. invalidate may be nil (tests);
+// Open does nothing until an App owns the Env.
+func NewEnv(invalidate func()) *Env {
+	if invalidate == nil {
+		invalidate = func() {}
+	}
+	th, c := NewTheme()
+	return &Env{Theme: th, Colors: c, Invalidate: invalidate, Bench: new(Bench), open: func(string) {}}
+}
+
+// Open shows the screen with the catalog ID id on top of the current one
+// (Back returns). Unknown IDs are ignored.
+func (e *Env) Open(id string) { e.open(id) }
+
+// Bench is the small carry-over between screens: what the user last used,
+// so that, say, the penetration-depth screen can take the resonator's
+// frequency in one tap. Zero values and "" mean "not set". Values are SI:
+// K, Pa absolute, Hz.
+type Bench struct {
+	// Gas is the last used gas as text understood by
+	// gasprops.ParseMixture: "helium" or "helium:0.7,argon:0.3".
+	Gas string
+	// Temperature is the last used mean gas temperature in K.
+	Temperature float64
+	// Pressure is the last used mean (fill) pressure in Pa, absolute.
+	Pressure float64
+	// Frequency is the last computed or measured operating frequency in Hz.
+	Frequency float64
+	// FrequencyFrom names the screen that set Frequency, e.g. "Tube
+	// resonance", for a "from ..." note beside the value.
+	FrequencyFrom string
+}
+
+// usable reports whether v is a finite, positive number.
+func usable(v float64) bool { return v > 0 && !math.IsInf(v, 0) && !math.IsNaN(v) }
+
+// SetGas records the gas text. Empty text is ignored.
+func (b *Bench) SetGas(text string) {
+	if text != "" {
+		b.Gas = text
+	}
+}
+
+// SetTemperature records a temperature in K; non-finite or non-positive
+// values are ignored.
+func (b *Bench) SetTemperature(k float64) {
+	if usable(k) {
+		b.Temperature = k
+	}
+}
+
+// SetPressure records an absolute pressure in Pa; non-finite or
+// non-positive values are ignored.
+func (b *Bench) SetPressure(pa float64) {
+	if usable(pa) {
+		b.Pressure = pa
+	}
+}
+
+// SetFrequency records a frequency in Hz and the title of the screen that
+// produced it; non-finite or non-positive values are ignored.
+func (b *Bench) SetFrequency(hz float64, from string) {
+	if usable(hz) {
+		b.Frequency = hz
+		b.FrequencyFrom = from
+	}
+}

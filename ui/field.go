@@ -1,0 +1,283 @@
+package ui
+
+import (
+	"errors"
+	"fmt"
+	"strings"
+
+	"gioui.org/io/key"
+	"gioui.org/io/semantic"
+	"gioui.org/layout"
+	"gioui.org/op"
+	"gioui.org/op/clip"
+	"gioui.org/unit"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/units"
+)
+
+// fieldWidth is the widest a number field grows.
+const fieldWidth = unit.Dp(420)
+
+// Field is a number field that understands units: the user types "10 bar",
+// "145 psi" or "27 degC" and the field parses it with the units package on
+// every change, shows what it accepts, and shows an error naming the field,
+// the value and what is accepted when the text does not parse. Text set by
+// code does not count as a user change.
+type Field struct {
+	// Label names the field for people, e.g. "Mean temperature".
+	Label string
+	// Dim is the dimension the field accepts.
+	Dim units.Dimension
+	// Options are passed to units.ParseWith (default unit, atmosphere,
+	// negatives).
+	Options units.Options
+	// Hint is the line under the field when the input is good, e.g.
+	// "K, degC or degF". Empty means a hint for Dim.
+	Hint string
+
+	env      *Env
+	editor   widget.Editor
+	q        units.Quantity
+	err      error
+	extErr   error
+	changed  bool
+	codeText string
+	code     bool
+}
+
+// NewField returns a field for dimension dim with the given starting text
+// (which counts as set by code, not a user change).
+func NewField(env *Env, label string, dim units.Dimension, text string) *Field {
+	f := &Field{Label: label, Dim: dim, env: env}
+	f.editor.SingleLine = true
+	f.editor.Submit = true
+	// Units need letters, so not key.HintNumeric: HintText keeps a full
+	// keyboard on phones.
+	f.editor.InputHint = key.HintText
+	f.SetText(text)
+	return f
+}
+
+// SetText replaces the text from code (e.g. a value carried over from
+// another screen). It re-parses but does not count as a user change.
+func (f *Field) SetText(s string) {
+	f.editor.SetText(s)
+	f.codeText = f.editor.Text()
+	f.code = true
+	f.parse()
+}
+
+// Text returns the current text.
+func (f *Field) Text() string { return f.editor.Text() }
+
+// Changed reports, once, whether the user changed the text since the last
+// Update or Changed call.
+func (f *Field) Changed() bool {
+	c := f.changed
+	f.changed = false
+	return c
+}
+
+// Quantity returns the parsed value, or the parse error (whose text names
+// the field).
+func (f *Field) Quantity() (units.Quantity, error) {
+	if f.err != nil {
+		return units.Quantity{}, f.err
+	}
+	return f.q, nil
+}
+
+// Value returns the parsed SI value and whether the text parsed.
+func (f *Field) Value() (float64, bool) {
+	if f.err != nil {
+		return 0, false
+	}
+	return f.q.Value, true
+}
+
+// SetError shows err under the field in place of the hint, for a value that
+// parsed but that a calculation rejected (e.g. a units.RangeError about this
+// input). nil clears it. A parse error always takes precedence.
+func (f *Field) SetError(err error) { f.extErr = err }
+
+// ErrorText returns the error text shown under the field, or "".
+func (f *Field) ErrorText() string {
+	switch {
+	case f.err != nil:
+		return f.err.Error()
+	case f.extErr != nil:
+		return f.message(f.extErr)
+	}
+	return ""
+}
+
+// Focus asks for keyboard focus on the field's editor.
+func (f *Field) Focus(gtx layout.Context) {
+	gtx.Execute(key.FocusCmd{Tag: &f.editor})
+}
+
+// FieldError is a field's parse error: it names the field and the text.
+type FieldError struct {
+	Field string // the field's label
+	Text  string // what was typed
+	Err   error  // the parser's reason
+}
+
+// Error reads like `Mean pressure: "10 bra" has an unknown pressure unit
+// "bra"; accepted: ...` (the units package quotes the input).
+func (e *FieldError) Error() string {
+	if strings.TrimSpace(e.Text) == "" {
+		return fmt.Sprintf("%s: empty; type a value with its unit", e.Field)
+	}
+	return fmt.Sprintf("%s: %v", e.Field, e.Err)
+}
+
+// Unwrap returns the parser's error.
+func (e *FieldError) Unwrap() error { return e.Err }
+
+func (f *Field) parse() {
+	txt := f.editor.Text()
+	q, err := units.ParseWith(txt, f.Dim, f.Options)
+	if err != nil {
+		f.err = &FieldError{Field: f.Label, Text: txt, Err: err}
+		return
+	}
+	f.q, f.err = q, nil
+	f.extErr = nil
+}
+
+// message prefixes an error with the field's label unless it already names
+// the field.
+func (f *Field) message(err error) string {
+	msg := err.Error()
+	var re *units.RangeError
+	if errors.As(err, &re) && re.Field != "" {
+		return msg
+	}
+	if strings.HasPrefix(strings.ToLower(msg), strings.ToLower(f.Label)) {
+		return msg
+	}
+	return f.Label + ": " + msg
+}
+
+// Update handles the editor's events and reports whether the user changed
+// the text since the last Update or Changed call. Screens call it (or
+// Changed) at the start of their Layout, before computing.
+func (f *Field) Update(gtx layout.Context) bool {
+	f.update(gtx)
+	return f.Changed()
+}
+
+// update handles the editor's events and remembers a user change for
+// Changed.
+func (f *Field) update(gtx layout.Context) bool {
+	user := false
+	for {
+		ev, ok := f.editor.Update(gtx)
+		if !ok {
+			break
+		}
+		if _, ok := ev.(widget.ChangeEvent); !ok {
+			continue
+		}
+		if f.code && f.editor.Text() == f.codeText {
+			// The change event of a SetText from code.
+			f.code = false
+			continue
+		}
+		f.code = false
+		user = true
+	}
+	if user {
+		f.parse()
+		f.changed = true
+	}
+	return user
+}
+
+// Layout draws the label, the text box and the hint or error line.
+func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
+	if f.update(gtx) {
+		// A change found during layout is acted on in the next frame.
+		gtx.Execute(op.InvalidateCmd{})
+	}
+	th := f.env.Theme
+	c := f.env.Colors
+	gtx.Constraints.Max.X = min(gtx.Constraints.Max.X, gtx.Dp(fieldWidth))
+	gtx.Constraints.Min.X = gtx.Constraints.Max.X
+	errText := f.ErrorText()
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			l := material.Body2(th, f.Label)
+			l.Color = c.Text
+			l.Font.Weight = 600
+			return l.Layout(gtx)
+		}),
+		layout.Rigid(layout.Spacer{Height: 4}.Layout),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			edge := c.Divider
+			bw := gtx.Dp(1)
+			if gtx.Focused(&f.editor) {
+				edge, bw = c.Accent, gtx.Dp(2)
+			}
+			if errText != "" {
+				edge = c.Error
+			}
+			return background(gtx, c.Surface, edge, gtx.Dp(6), bw, func(gtx layout.Context) layout.Dimensions {
+				return layout.Inset{Left: 12, Right: 12, Top: 10, Bottom: 10}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					m := op.Record(gtx.Ops)
+					e := material.Editor(th, &f.editor, f.hint())
+					e.Color = c.Text
+					e.HintColor = c.Muted
+					e.SelectionColor = c.Selected
+					dims := e.Layout(gtx)
+					call := m.Stop()
+					// A clip node carrying the label lets tests and
+					// screen readers find the editor by the field's name.
+					st := clip.Rect{Max: dims.Size}.Push(gtx.Ops)
+					semantic.DescriptionOp(f.Label).Add(gtx.Ops)
+					call.Add(gtx.Ops)
+					st.Pop()
+					return dims
+				})
+			})
+		}),
+		layout.Rigid(layout.Spacer{Height: 4}.Layout),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			if errText != "" {
+				l := material.Body2(th, errText)
+				l.Color = c.Error
+				return Described(f.Label+" error", l.Layout)(gtx)
+			}
+			l := material.Caption(th, f.hint())
+			l.Color = c.Muted
+			l.TextSize = unit.Sp(13)
+			return l.Layout(gtx)
+		}),
+	)
+}
+
+// hint returns the accepted-units hint.
+func (f *Field) hint() string {
+	if f.Hint != "" {
+		return f.Hint
+	}
+	if h, ok := dimHints[f.Dim]; ok {
+		return h
+	}
+	return "value in " + units.SIUnit(f.Dim)
+}
+
+// dimHints are the default "what you can type" lines per dimension.
+var dimHints = map[units.Dimension]string{
+	units.DimLength:                "e.g. 147 mm, 14.7 cm, 5.8 in, 0.147 m",
+	units.DimTemperature:           "e.g. 300 K, 27 degC, 80 degF",
+	units.DimTemperatureDifference: "e.g. 23 K, 23 degC, 41 degF",
+	units.DimPressure:              "absolute: 10 bar, 145 psi, 1 MPa; gauge: 9 barg, 130 psig",
+	units.DimStress:                "e.g. 120 MPa, 17 ksi, 120 N/mm²",
+	units.DimFrequency:             "e.g. 578 Hz, 1.2 kHz, 567 Hz ± 8 Hz",
+	units.DimVolume:                "e.g. 2 L, 2000 cm³, 0.002 m³",
+	units.DimNone:                  "a number, or a percentage such as 30 %",
+}

@@ -1,0 +1,175 @@
+package ui
+
+import (
+	"errors"
+	"strings"
+
+	"gioui.org/layout"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/units"
+	"tubewright/gasprops"
+)
+
+// gasScreen shows the thermophysical properties of the working gas at one
+// temperature and pressure, updating as the user types.
+type gasScreen struct {
+	env      *Env
+	page     *Page
+	picker   *GasPicker
+	temp     *Field
+	press    *Field
+	nonIdeal widget.Bool
+	results  *Results
+	dirty    bool
+}
+
+// newGasScreen builds the working-gas screen.
+func newGasScreen(env *Env) Screen {
+	s := &gasScreen{
+		env:     env,
+		page:    NewPage(env),
+		picker:  NewGasPicker(env, "helium"),
+		temp:    NewField(env, "Temperature", units.DimTemperature, "300 K"),
+		press:   NewField(env, "Mean pressure", units.DimPressure, "1 bar"),
+		results: NewResults(env),
+		dirty:   true,
+	}
+	s.temp.Options.DefaultUnit = "K"
+	s.temp.Hint = "e.g. 300 K, 27 degC, 80 degF (a bare number is K)"
+	return s
+}
+
+// Title implements Screen.
+func (s *gasScreen) Title() string { return "Working gas" }
+
+// Enter takes the gas, temperature and pressure last used on another
+// screen.
+func (s *gasScreen) Enter() {
+	b := s.env.Bench
+	if b.Gas != "" && b.Gas != s.picker.Text() {
+		if s.picker.SetText(b.Gas) == nil {
+			s.dirty = true
+		}
+	}
+	if v, ok := s.temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
+		s.temp.SetText(units.Format(b.Temperature, units.DimTemperature))
+		s.dirty = true
+	}
+	if v, ok := s.press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
+		s.press.SetText(formatPressure(b.Pressure))
+		s.dirty = true
+	}
+}
+
+// near reports whether a and b agree to 1e-9 relative.
+func near(a, b float64) bool {
+	d := a - b
+	if d < 0 {
+		d = -d
+	}
+	return d <= 1e-9*max(abs(a), abs(b))
+}
+
+func abs(v float64) float64 {
+	if v < 0 {
+		return -v
+	}
+	return v
+}
+
+// formatPressure writes a pressure in bar for a field's text.
+func formatPressure(pa float64) string {
+	if s, err := units.FormatIn(pa, "bar"); err == nil {
+		return s
+	}
+	return units.Format(pa, units.DimPressure)
+}
+
+// update handles the controls' events and recomputes when an input changed.
+func (s *gasScreen) update(gtx layout.Context) {
+	if s.picker.Update(gtx) {
+		s.dirty = true
+	}
+	if s.temp.Update(gtx) {
+		s.dirty = true
+	}
+	if s.press.Update(gtx) {
+		s.dirty = true
+	}
+	if s.nonIdeal.Update(gtx) {
+		s.dirty = true
+	}
+	if s.dirty {
+		s.dirty = false
+		s.compute()
+	}
+}
+
+// compute evaluates the gas with gasprops and fills the results card.
+func (s *gasScreen) compute() {
+	r := s.results
+	r.Reset()
+	s.temp.SetError(nil)
+	s.press.SetError(nil)
+	mix, err := s.picker.Mixture()
+	if err != nil {
+		r.Fail(err)
+		return
+	}
+	tq, terr := s.temp.Quantity()
+	pq, perr := s.press.Quantity()
+	if err := errors.Join(terr, perr); err != nil {
+		r.Fail(errors.New("check the fields marked in red"))
+		return
+	}
+	opt := &gasprops.Options{NonIdeal: s.nonIdeal.Value}
+	p, err := mix.Properties(units.Temperature(tq.Value), units.Pressure(pq.Value), opt)
+	if err != nil {
+		var re *units.RangeError
+		if errors.As(err, &re) {
+			switch f := strings.ToLower(re.Field); {
+			case strings.Contains(f, "temperature"):
+				s.temp.SetError(err)
+			case strings.Contains(f, "pressure"):
+				s.press.SetError(err)
+			}
+		}
+		r.Fail(err)
+		return
+	}
+	s.env.Bench.SetGas(s.picker.Text())
+	s.env.Bench.SetTemperature(tq.Value)
+	s.env.Bench.SetPressure(pq.Value)
+	r.Add("Molar mass", p.MolarMass, units.DimMolarMass)
+	r.Add("Density", p.Density, units.DimDensity)
+	r.Add("Sound speed", p.SoundSpeed, units.DimSpeed)
+	r.Add("Ratio of specific heats γ", p.Gamma, units.DimNone)
+	r.Add("Isobaric specific heat cp", p.IsobaricSpecificHeat, units.DimSpecificHeat)
+	r.Add("Dynamic viscosity", p.Viscosity, units.DimDynamicViscosity)
+	r.Add("Thermal conductivity", p.ThermalConductivity, units.DimThermalConductivity)
+	r.Add("Thermal diffusivity", p.ThermalDiffusivity, units.DimDiffusivity)
+	r.Add("Kinematic viscosity", p.KinematicViscosity, units.DimKinematicViscosity)
+	r.Add("Prandtl number", p.Prandtl, units.DimNone)
+	r.Warn(p.Warnings...)
+}
+
+// Layout implements Screen.
+func (s *gasScreen) Layout(gtx layout.Context) layout.Dimensions {
+	s.update(gtx)
+	return s.page.Layout(gtx,
+		s.picker.Layout,
+		s.temp.Layout,
+		s.press.Layout,
+		func(gtx layout.Context) layout.Dimensions {
+			cb := material.CheckBox(s.env.Theme, &s.nonIdeal, "Real-gas correction to density and sound speed (second virial)")
+			cb.Color = s.env.Colors.Text
+			cb.IconColor = s.env.Colors.Accent
+			return cb.Layout(gtx)
+		},
+		s.results.Layout,
+		Note(s.env, "Ideal gas unless the real-gas correction is on. Transport properties from kinetic theory; "+
+			"the gas models and their sources are listed in the gasprops package documentation."),
+	)
+}

@@ -1,0 +1,218 @@
+package ui
+
+import (
+	"fmt"
+	"image"
+	"math"
+
+	"gioui.org/layout"
+	"gioui.org/op"
+	"gioui.org/unit"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/units"
+)
+
+// Results is a card of result rows (label, value with its unit, optional
+// note), followed by the model's warnings. Values go through the units
+// formatters; a non-finite value is never shown: the row reads "—" with a
+// reason. A screen fills it after each computation (Reset, then Add...).
+type Results struct {
+	env      *Env
+	rows     []resultRow
+	warnings []string
+	failure  string
+}
+
+type resultRow struct {
+	label, value, note string
+}
+
+// NewResults returns an empty results card.
+func NewResults(env *Env) *Results { return &Results{env: env} }
+
+// Reset removes all rows, warnings and the failure text.
+func (r *Results) Reset() {
+	r.rows = r.rows[:0]
+	r.warnings = r.warnings[:0]
+	r.failure = ""
+}
+
+// finite reports whether v is neither NaN nor ±Inf.
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// notDefined is the note of a row whose value is not a finite number.
+const notDefined = "no finite value for these inputs"
+
+// Add appends a row with v (SI) formatted in the SI unit of dim.
+func (r *Results) Add(label string, v float64, dim units.Dimension) {
+	if !finite(v) {
+		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		return
+	}
+	r.rows = append(r.rows, resultRow{label: label, value: units.Format(v, dim)})
+}
+
+// AddIn appends a row with v (SI) shown in the chosen unit, e.g. "bar" or
+// "mm".
+func (r *Results) AddIn(label string, v float64, unit string) {
+	if !finite(v) {
+		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		return
+	}
+	s, err := units.FormatIn(v, unit)
+	if err != nil {
+		r.rows = append(r.rows, resultRow{label, "—", err.Error()})
+		return
+	}
+	r.rows = append(r.rows, resultRow{label: label, value: s})
+}
+
+// AddPM appends a row with a value and its standard uncertainty, both SI,
+// e.g. "567 ± 8 Hz". A non-finite uncertainty drops the ± part with a note.
+func (r *Results) AddPM(label string, v, u float64, dim units.Dimension) {
+	switch {
+	case !finite(v):
+		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+	case !finite(u):
+		r.rows = append(r.rows, resultRow{label, units.Format(v, dim), "uncertainty not available"})
+	default:
+		r.rows = append(r.rows, resultRow{label: label, value: units.FormatPM(v, u, dim)})
+	}
+}
+
+// AddText appends a row whose value is already text, e.g. a verdict.
+func (r *Results) AddText(label, value string) {
+	r.rows = append(r.rows, resultRow{label: label, value: value})
+}
+
+// AddNote attaches a note (small text under the value) to the last row.
+func (r *Results) AddNote(note string) {
+	if len(r.rows) > 0 {
+		r.rows[len(r.rows)-1].note = note
+	}
+}
+
+// Warn appends warnings shown under the rows.
+func (r *Results) Warn(msgs ...string) { r.warnings = append(r.warnings, msgs...) }
+
+// Fail replaces the rows with one line saying why there is no result.
+func (r *Results) Fail(err error) {
+	r.rows = r.rows[:0]
+	r.failure = err.Error()
+}
+
+// Failure returns the failure text, or "".
+func (r *Results) Failure() string { return r.failure }
+
+// Value returns the shown text of the row labelled label.
+func (r *Results) Value(label string) (string, bool) {
+	for _, row := range r.rows {
+		if row.label == label {
+			return row.value, true
+		}
+	}
+	return "", false
+}
+
+// Warnings returns the warnings shown.
+func (r *Results) Warnings() []string { return append([]string(nil), r.warnings...) }
+
+// Len returns the number of rows.
+func (r *Results) Len() int { return len(r.rows) }
+
+// Layout draws the card.
+func (r *Results) Layout(gtx layout.Context) layout.Dimensions {
+	th := r.env.Theme
+	c := r.env.Colors
+	gtx.Constraints.Min.X = gtx.Constraints.Max.X
+	var children []layout.FlexChild
+	if r.failure != "" {
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				l := material.Body1(th, "No result. "+r.failure)
+				l.Color = c.Error
+				return Described("No result", l.Layout)(gtx)
+			})
+		}))
+	}
+	for i, row := range r.rows {
+		last := i == len(r.rows)-1
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return r.layoutRow(gtx, row, !last)
+		}))
+	}
+	for _, w := range r.warnings {
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return layout.Inset{Left: 14, Right: 14, Top: 4, Bottom: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				l := material.Body2(th, "Note: "+w)
+				l.Color = c.Warning
+				return l.Layout(gtx)
+			})
+		}))
+	}
+	if len(children) == 0 {
+		return layout.Dimensions{}
+	}
+	return background(gtx, c.Surface, c.Divider, gtx.Dp(8), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
+		return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
+		})
+	})
+}
+
+// layoutRow draws one row: label on the left, value on the right, note
+// below; a hairline under it when divider is set.
+func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) layout.Dimensions {
+	th := r.env.Theme
+	c := r.env.Colors
+	m := op.Record(gtx.Ops)
+	dims := layout.Inset{Left: 14, Right: 14, Top: 9, Bottom: 9}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		gtx.Constraints.Min.X = gtx.Constraints.Max.X
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+				return layout.Flex{Alignment: layout.Baseline, Spacing: layout.SpaceBetween}.Layout(gtx,
+					layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+						l := material.Body1(th, row.label)
+						l.Color = c.Muted
+						return l.Layout(gtx)
+					}),
+					layout.Rigid(layout.Spacer{Width: 12}.Layout),
+					layout.Rigid(Described(row.label, func(gtx layout.Context) layout.Dimensions {
+						l := material.Label(th, unit.Sp(17), row.value)
+						l.Color = c.Text
+						l.Font.Weight = 600
+						return l.Layout(gtx)
+					})),
+				)
+			}),
+			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+				if row.note == "" {
+					return layout.Dimensions{}
+				}
+				l := material.Caption(th, row.note)
+				l.Color = c.Muted
+				l.TextSize = unit.Sp(13)
+				return layout.Inset{Top: 2}.Layout(gtx, l.Layout)
+			}),
+		)
+	})
+	call := m.Stop()
+	call.Add(gtx.Ops)
+	if divider {
+		line := image.Pt(dims.Size.X-gtx.Dp(28), gtx.Dp(1))
+		st := op.Offset(image.Pt(gtx.Dp(14), dims.Size.Y-line.Y)).Push(gtx.Ops)
+		fill(gtx, c.Divider, line)
+		st.Pop()
+	}
+	return dims
+}
+
+// String lists the rows as "label: value" lines (for tests and logs).
+func (r *Results) String() string {
+	s := ""
+	for _, row := range r.rows {
+		s += fmt.Sprintf("%s: %s\n", row.label, row.value)
+	}
+	return s
+}
