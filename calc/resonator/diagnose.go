@@ -62,7 +62,7 @@ func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 		}
 		res, err := numeric.Brent(h, tmin, tmax, &numeric.RootSettings{RelTol: 1e-12})
 		if err != nil {
-			return 0, 0, nil, s.noSolution("measured frequency", x[0], h, tmin, tmax, "K", err)
+			return 0, 0, nil, s.noSolution(x[0], h, tmin, tmax, fmt.Sprintf("gas temperatures %g–%g K", tmin, tmax), err)
 		}
 		if g, err := s.properties(res.X, x[3]); err == nil {
 			warn = g.Warnings
@@ -122,7 +122,7 @@ func (s Setup) DiagnoseFraction(first, second *gasprops.Species, fMeas float64) 
 		}
 		res, err := numeric.Brent(h, 0, 1, &numeric.RootSettings{AbsTol: 1e-12})
 		if err != nil {
-			return 0, 0, nil, s.noSolution("measured frequency", x[0], h, 0, 1, "", err)
+			return 0, 0, nil, s.noSolution(x[0], h, 0, 1, fmt.Sprintf("mole fractions 0–1 of %s in %s", second.Name, first.Name), err)
 		}
 		return res.X, res.Iterations, nil, nil
 	}
@@ -137,17 +137,18 @@ func (s Setup) DiagnoseFraction(first, second *gasprops.Species, fMeas float64) 
 
 // noSolution builds the error for an inverse problem without a root: a
 // RangeError on the measured frequency giving the frequencies reachable
-// between the ends lo and hi of the searched variable.
-func (s Setup) noSolution(field string, fMeas float64, h func(float64) float64, lo, hi float64, unit string, cause error) error {
+// between the ends lo and hi of the searched variable (described by what).
+func (s Setup) noSolution(fMeas float64, h func(float64) float64, lo, hi float64, what string, cause error) error {
+	const field = "measured frequency"
 	if !errors.Is(cause, numeric.ErrNoBracket) {
 		return fmt.Errorf("%s %.4g Hz: the solver failed: %w", field, fMeas, cause)
 	}
 	fa, fb := h(lo)+fMeas, h(hi)+fMeas
 	if !finite(fa) || !finite(fb) {
-		return fmt.Errorf("%s %.4g Hz: %w (the model cannot be evaluated at the ends of %g–%g %s)", field, fMeas, ErrNoSolution, lo, hi, unit)
+		return fmt.Errorf("%s %.4g Hz: %w (the model cannot be evaluated at the ends of %s)", field, fMeas, ErrNoSolution, what)
 	}
 	e := units.NewRangeError(field, fMeas, math.Min(fa, fb), math.Max(fa, fb), "Hz")
-	e.Why = fmt.Sprintf("%v: this tube resonates only in that band for %g–%g %s", ErrNoSolution, lo, hi, unit)
+	e.Why = fmt.Sprintf("%v: this tube resonates only in that band for %s", ErrNoSolution, what)
 	return &noSolutionError{e}
 }
 
