@@ -1,8 +1,6 @@
 package safety
 
 import (
-	"math"
-
 	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
@@ -53,8 +51,8 @@ type Contents struct {
 // the ideal estimate (about 10 % less at 200 bar, from memory). Source: the
 // ideal-gas law and the virial equation of state truncated after B (e.g.
 // Y. A. Çengel and M. A. Boles, Thermodynamics: An Engineering Approach,
-// chapter 3, from memory). Above about 5 % correction the truncated series
-// may be off by a per cent or so; a warning says so.
+// chapter 3, from memory). The gas model warns when its correction is
+// large and only a first-order estimate.
 //
 // Errors: V ≤ 0, p ≤ 0, T ≤ 0 (*units.RangeError); gas-model errors are
 // returned unchanged.
@@ -70,8 +68,9 @@ func CylinderContents(m gasprops.Mixture, V float64, p units.Pressure, T units.T
 	}
 	c := Contents{Standard: std, Cautions: cautions(CautionCylinder, CautionAsphyxiation)}
 	c.Ideal = V * float64(p) / float64(T) * float64(std.T) / float64(std.P)
-	// Properties checks the temperature against the model's range.
-	props, err := m.Properties(T, p, nil)
+	// Properties checks the temperature against the model's range (asked
+	// non-ideal, so that its advice to correct is not repeated here).
+	props, err := m.Properties(T, p, &gasprops.Options{NonIdeal: true})
 	if err != nil {
 		return Contents{}, err
 	}
@@ -83,8 +82,6 @@ func CylinderContents(m gasprops.Mixture, V float64, p units.Pressure, T units.T
 	c.Corrected = c.Z != 1
 	if !c.Corrected {
 		c.Warnings = append(c.Warnings, "the gas model has no non-ideal correction for "+m.String()+": the ideal-gas volume is shown")
-	} else if math.Abs(c.Z-1) > 0.05 {
-		c.Warnings = append(c.Warnings, "large non-ideal correction: the second-virial series may be off by about a per cent here")
 	}
 	c.NonIdeal = c.Ideal / c.Z
 	return c, nil

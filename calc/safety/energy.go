@@ -1,6 +1,7 @@
 package safety
 
 import (
+	"fmt"
 	"math"
 
 	"tubewright/calc/units"
@@ -74,17 +75,25 @@ func ExpansionEnergy(p, pa units.Pressure, V, gamma float64) (StoredEnergy, erro
 
 // GasExpansionEnergy is ExpansionEnergy with γ of the gas m at temperature
 // T and absolute pressure p from gasprops (ideal-gas γ; for the noble gases
-// 5/3). Gas-model errors (temperature out of range) are returned unchanged.
+// 5/3). The returned warnings hold the gas model's and, when the gas
+// departs from the ideal gas by more than 2 % (Z from
+// gasprops.Mixture.Compressibility), a note that the formulas assume an
+// ideal gas. Gas-model errors (temperature out of range) are returned
+// unchanged.
 func GasExpansionEnergy(m gasprops.Mixture, T units.Temperature, p, pa units.Pressure, V float64) (StoredEnergy, []string, error) {
 	if !finite(float64(p)) || p <= 0 {
 		return StoredEnergy{}, nil, units.NewRangeError("pressure (absolute)", float64(p), 0, math.Inf(1), "Pa")
 	}
-	props, err := m.Properties(T, p, nil)
+	props, err := m.Properties(T, p, &gasprops.Options{NonIdeal: true})
 	if err != nil {
 		return StoredEnergy{}, nil, err
 	}
+	warns := props.Warnings
+	if z := m.Compressibility(float64(T), float64(p)); math.Abs(z-1) > 0.02 {
+		warns = append(warns, fmt.Sprintf("the energy formulas assume an ideal gas (here Z = %.3f)", z))
+	}
 	s, err := ExpansionEnergy(p, pa, V, props.Gamma)
-	return s, props.Warnings, err
+	return s, warns, err
 }
 
 // Tier is a rough hazard tier of a stored energy, in our own words, for

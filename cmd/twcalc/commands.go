@@ -16,4 +16,8 @@ type command struct {
 // file cmd/twcalc/<name>.go.
 var commands = []command{
 	{"gas", "properties of a working gas or mixture", runGas},
+	{"vessel", "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)", runVessel},
+	{"energy", "stored energy of a gas charge and its TNT equivalent (safety)", runEnergy},
+	{"oxygen", "oxygen left in a room after a gas release (safety)", runOxygen},
+	{"spl", "sound pressure level of a pressure amplitude against hearing limits (safety)", runSPL},
 }

@@ -1,0 +1,97 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+
+	"tubewright/calc/safety"
+	"tubewright/calc/units"
+)
+
+// runOxygen is `twcalc oxygen`: the oxygen left in a room after a release
+// of inert gas, by the displacement, well-mixed or sealed-room model, the
+// largest release that keeps 19.5 %, and the time ventilation needs to
+// bring the room back to 19.5 %.
+func runOxygen(args []string) (*report, error) {
+	fl := newFlags("oxygen")
+	room := fl.quantity("room", units.DimVolume, "", "free volume of the room: 30m3, 1000ft3")
+	rel := fl.quantity("release", units.DimVolume, "0m3", "volume of gas released, at room conditions: 9m3")
+	cyl := fl.quantity("release-from-cylinder", units.DimVolume, "0L", "water capacity of a cylinder emptied into the room: 50L")
+	fill := fl.quantity("fill-pressure", units.DimPressure, "0bar", "cylinder fill pressure: 200bar (absolute) or 200barg; required with --release-from-cylinder")
+	gas := fl.gas("gas", "helium", "gas in the cylinder, for its non-ideal correction")
+	ftemp := fl.quantity("fill-temperature", units.DimTemperature, "15degC", "temperature of the cylinder")
+	rtemp := fl.quantity("room-temperature", units.DimTemperature, "20degC", "temperature of the room")
+	model := fl.choice("model", []string{"displacement", "mixed", "sealed"}, "displacement", "how gas and air mix: displacement (air pushed out, worst case), mixed (well mixed, mixture flows out), sealed (nothing leaves)")
+	vent := fl.quantity("ventilation", units.DimRate, "0/h", "fresh-air rate in air changes per hour, for the recovery time: 2/h")
+	fl.describe(`Releases from --release and --release-from-cylinder are added. Oxygen is
+compared with 19.5 %, the oxygen-deficient threshold of US OSHA 29 CFR 1910.134.
+
+examples:
+  twcalc oxygen --release 9m3 --room 30m3 --model mixed --ventilation 2/h
+  twcalc oxygen --release-from-cylinder 50L --fill-pressure 200bar --gas helium --room 30m3 --json`)
+	if err := fl.parse(args); err != nil {
+		return nil, err
+	}
+	if !fl.given("release") && !fl.given("release-from-cylinder") {
+		return nil, &usageError{msg: "give --release VOLUME or --release-from-cylinder VOLUME --fill-pressure PRESSURE (see \"twcalc oxygen -h\")"}
+	}
+	r := newReport()
+	fl.echo(r)
+	total := rel.Value
+	var cautions []string
+	if fl.given("release-from-cylinder") {
+		if !fl.given("fill-pressure") {
+			return nil, &usageError{msg: "--fill-pressure is required with --release-from-cylinder: the cylinder's fill pressure, e.g. 200bar"}
+		}
+		pa := units.Pressure(units.StandardAtmosphere)
+		c, err := safety.CylinderContents(*gas, cyl.Value, units.Pressure(fill.Value), units.Temperature(ftemp.Value), safety.StandardISO13443)
+		if err != nil {
+			return nil, fl.blame(err, "release-from-cylinder", "fill-pressure", "fill-temperature")
+		}
+		v, err := safety.ReleaseVolume(cyl.Value, units.Pressure(fill.Value), units.Temperature(ftemp.Value), c.Z, pa, units.Temperature(rtemp.Value))
+		if err != nil {
+			return nil, fl.blame(err, "release-from-cylinder", "fill-pressure", "fill-temperature", "room-temperature")
+		}
+		r.add("cylinder_contents", c.NonIdeal, units.DimVolume)
+		r.addValue("cylinder_contents_basis", "free gas at "+c.Standard.Name)
+		r.add("cylinder_release", v, units.DimVolume)
+		r.add("compressibility", c.Z, units.DimNone)
+		for _, w := range c.Warnings {
+			r.warn(w)
+		}
+		cautions = append(cautions, safety.CautionCylinder)
+		total += v
+	}
+	m := map[string]safety.RoomModel{"displacement": safety.Displacement, "mixed": safety.WellMixed, "sealed": safety.Sealed}[*model]
+	o, err := safety.RoomOxygen(m, total, room.Value, vent.Value)
+	if err != nil {
+		var re *units.RangeError
+		if errors.As(err, &re) && re.Field == "release volume" {
+			return nil, &usageError{msg: fmt.Sprintf("release of %s into a room of %s: %v; try --model mixed or sealed, or check the volumes", units.Format(total, units.DimVolume), units.Format(room.Value, units.DimVolume), err)}
+		}
+		return nil, fl.blame(err, "room", "ventilation")
+	}
+	r.add("release_volume", total, units.DimVolume)
+	r.addValue("model", m.Label())
+	r.add("oxygen_fraction", o.Fraction, units.DimNone)
+	r.addValue("oxygen_deficient", o.Deficient)
+	r.add("threshold", safety.OxygenDeficient, units.DimNone)
+	r.add("max_release", o.MaxRelease, units.DimVolume)
+	if o.Ventilated {
+		r.add("recovery_time", o.RecoveryTime, units.DimTime)
+	} else if o.Deficient {
+		r.warn("no ventilation given: the oxygen stays low until the room is ventilated (give --ventilation to estimate the recovery time)")
+	}
+	for _, other := range safety.RoomModels {
+		if other == m {
+			continue
+		}
+		if oo, err := safety.RoomOxygen(other, total, room.Value, 0); err == nil {
+			r.add("oxygen_fraction_"+other.Key(), oo.Fraction, units.DimNone)
+		}
+	}
+	for _, c := range append(o.Cautions, cautions...) {
+		r.caution(c)
+	}
+	return r, nil
+}

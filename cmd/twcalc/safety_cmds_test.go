@@ -1,0 +1,205 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/gonum/floats/scalar"
+
+	"tubewright/calc/safety"
+)
+
+// safetyOut is the decoded --json output of a safety command.
+type safetyOut struct {
+	Results map[string]struct {
+		Value json.RawMessage `json:"value"`
+		Unit  string          `json:"unit"`
+	} `json:"results"`
+	Warnings []string `json:"warnings"`
+	Cautions []string `json:"cautions"`
+}
+
+func (o safetyOut) num(t *testing.T, name string) float64 {
+	t.Helper()
+	r, ok := o.Results[name]
+	if !ok {
+		t.Fatalf("result %q missing; have %v", name, keys(o.Results))
+	}
+	var v float64
+	if err := json.Unmarshal(r.Value, &v); err != nil {
+		t.Fatalf("result %q: %v", name, err)
+	}
+	return v
+}
+
+func keys[V any](m map[string]V) []string {
+	var out []string
+	for k := range m {
+		out = append(out, k)
+	}
+	return out
+}
+
+// runSafetyJSON runs a command with --json, wants exit 0 and a non-empty
+// cautions array starting with the general caution.
+func runSafetyJSON(t *testing.T, args ...string) safetyOut {
+	t.Helper()
+	var o, e bytes.Buffer
+	if code := run(append(args, "--json"), &o, &e); code != exitOK {
+		t.Fatalf("twcalc %q: exit %d: %s", args, code, e.String())
+	}
+	var out safetyOut
+	if err := json.Unmarshal(o.Bytes(), &out); err != nil {
+		t.Fatalf("%v\n%s", err, o.String())
+	}
+	if len(out.Cautions) == 0 || out.Cautions[0] != safety.CautionGeneral {
+		t.Errorf("twcalc %q: cautions %q, want the general caution first", args, out.Cautions)
+	}
+	return out
+}
+
+func approx(t *testing.T, what string, got, want, rel float64) {
+	t.Helper()
+	if !scalar.EqualWithinAbsOrRel(got, want, 1e-300, rel) {
+		t.Errorf("%s = %.10g, want %.10g", what, got, want)
+	}
+}
+
+func TestVesselCommand(t *testing.T) {
+	t.Parallel()
+	o := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "1")
+	// Values: hand calculations in calc/safety's tests (Lamé 26.5849 MPa;
+	// UG-27(c)(1) 1.10132 mm and 15.4478 MPa; UG-99(b) 1.3 × MAWP).
+	approx(t, "hoop_stress", o.num(t, "hoop_stress"), 26.584905660e6, 1e-9)
+	approx(t, "minimum_wall_thickness", o.num(t, "minimum_wall_thickness"), 1.101321586e-3, 1e-9)
+	approx(t, "max_allowable_pressure", o.num(t, "max_allowable_pressure"), 15.44776119e6, 1e-9)
+	approx(t, "hydrostatic_test_pressure", o.num(t, "hydrostatic_test_pressure"), 1.3*15.44776119e6, 1e-9)
+	if u := o.Results["hoop_stress"].Unit; u != "Pa" {
+		t.Errorf("hoop_stress unit %q", u)
+	}
+	// 30 bar absolute is 1.01325 bar less load than 30 barg.
+	a := runSafetyJSON(t, "vessel", "--pressure", "30bar", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa")
+	approx(t, "hoop difference", o.num(t, "hoop_stress")-a.num(t, "hoop_stress"), 101325*0.005636/0.000636, 1e-9)
+	// The MAWP depends on the wall only, not on how the pressure was typed.
+	approx(t, "same MAWP", a.num(t, "max_allowable_pressure"), o.num(t, "max_allowable_pressure"), 1e-15)
+	// Other code families: no invented formula, the reference instead.
+	eu := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--code-family", "eu")
+	if _, ok := eu.Results["minimum_wall_thickness"]; ok {
+		t.Error("eu family must not compute a UG-27 thickness")
+	}
+	if _, ok := eu.Results["code_reference"]; !ok {
+		t.Error("eu family: code_reference missing")
+	}
+	// PED 7.4 with PS = 30 bar: max(1.25 × 30, 1.43 × 30) = 42.9 bar.
+	approx(t, "eu_test_pressure", eu.num(t, "eu_test_pressure"), 42.9e5, 1e-12)
+}
+
+func TestEnergyCommand(t *testing.T) {
+	t.Parallel()
+	o := runSafetyJSON(t, "energy", "--gas", "helium", "--pressure", "30barg", "--volume", "50L")
+	// Hand calculation in calc/safety's energy tests: 173 405.6 J, Brode
+	// 225 kJ, TNT at 4.184 MJ/kg.
+	approx(t, "stored_energy", o.num(t, "stored_energy"), 173405.5674, 1e-6)
+	approx(t, "brode_energy", o.num(t, "brode_energy"), 225000, 1e-6)
+	approx(t, "tnt_equivalent", o.num(t, "tnt_equivalent"), 173405.5674/4.184e6, 1e-6)
+	if o.Results["tnt_equivalent"].Unit != "kg" || o.Results["stored_energy"].Unit != "J" {
+		t.Errorf("units %q %q", o.Results["tnt_equivalent"].Unit, o.Results["stored_energy"].Unit)
+	}
+	// 30 bar absolute stores less than 30 barg.
+	a := runSafetyJSON(t, "energy", "--gas", "helium", "--pressure", "30bar", "--volume", "50L")
+	if a.num(t, "stored_energy") >= o.num(t, "stored_energy") {
+		t.Error("30 bar absolute stores as much as 30 barg")
+	}
+}
+
+func TestOxygenCommand(t *testing.T) {
+	t.Parallel()
+	// Hand calculations in calc/safety's oxygen tests.
+	cases := []struct {
+		model string
+		want  float64
+	}{{"displacement", 0.1463}, {"mixed", 0.1548310081}, {"sealed", 0.1607692308}}
+	for _, c := range cases {
+		o := runSafetyJSON(t, "oxygen", "--release", "9m3", "--room", "30m3", "--model", c.model, "--ventilation", "2/h")
+		approx(t, c.model, o.num(t, "oxygen_fraction"), c.want, 1e-9)
+		if o.num(t, "recovery_time") <= 0 {
+			t.Errorf("%s: no recovery time", c.model)
+		}
+	}
+	// From a cylinder: 50 L at 200 bar helium releases about 9 m³
+	// (9.87 m³ ideal at 15 °C less the non-ideal 9 %, plus the 15 → 20 °C
+	// expansion, less the 0.05 m³ left in it).
+	o := runSafetyJSON(t, "oxygen", "--release-from-cylinder", "50L", "--fill-pressure", "200bar", "--gas", "helium", "--room", "30m3")
+	if v := o.num(t, "release_volume"); v < 8.8 || v > 9.3 {
+		t.Errorf("cylinder release %g m³, want about 9 m³", v)
+	}
+	if o.num(t, "oxygen_fraction") >= 0.195 {
+		t.Error("a full 50 L cylinder in 30 m³ should be oxygen-deficient")
+	}
+}
+
+func TestSPLCommand(t *testing.T) {
+	t.Parallel()
+	o := runSafetyJSON(t, "spl", "--amplitude", "10kPa")
+	// Hand calculation: 170.969 dB rms, 173.979 dB peak.
+	approx(t, "spl", o.num(t, "spl"), 170.9691001, 1e-9)
+	approx(t, "peak_level", o.num(t, "peak_level"), 173.9794001, 1e-9)
+	if o.Results["spl"].Unit != "dB" {
+		t.Errorf("spl unit %q", o.Results["spl"].Unit)
+	}
+	e := runSafetyJSON(t, "spl", "--amplitude", "1Pa", "--at-ear", "95dBA")
+	// OSHA Table G-16: 95 dBA allows 4 h.
+	approx(t, "osha_permitted_time", e.num(t, "osha_permitted_time"), 4*3600, 1e-12)
+}
+
+func TestSafetyCommandsRejectImpossibleInput(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		args []string
+		want string // part of the one-line message
+	}{
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "1.2"}, "joint-efficiency 1.2"},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "0"}, "joint efficiency 0"},
+		{[]string{"vessel", "--pressure", "0.5bar", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "below the atmosphere"},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "0mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "inner radius 0 m"},
+		{[]string{"oxygen", "--release", "40m3", "--room", "30m3"}, "release volume 40 m³ is outside the valid range 0–30 m³"},
+		{[]string{"oxygen", "--room", "30m3"}, "give --release"},
+		{[]string{"oxygen", "--release-from-cylinder", "50L", "--room", "30m3"}, "--fill-pressure is required"},
+		{[]string{"energy", "--gas", "helium", "--pressure", "1atm", "--volume", "50L"}, "no energy is stored"},
+		{[]string{"spl", "--amplitude", "0Pa"}, "pressure amplitude 0 Pa"},
+		{[]string{"spl", "--amplitude", "1barg"}, "neither gauge nor absolute"},
+	}
+	for _, c := range cases {
+		var o, e bytes.Buffer
+		code := run(c.args, &o, &e)
+		if code != exitUsage {
+			t.Errorf("%q: exit %d, want %d (stderr %q)", c.args, code, exitUsage, e.String())
+		}
+		if !strings.Contains(e.String(), c.want) || strings.Count(e.String(), "\n") != 1 {
+			t.Errorf("%q: stderr %q, want one line containing %q", c.args, e.String(), c.want)
+		}
+		if o.Len() != 0 {
+			t.Errorf("%q: wrote %q to stdout on error", c.args, o.String())
+		}
+	}
+}
+
+func TestSafetyTextOutputShowsCautions(t *testing.T) {
+	t.Parallel()
+	for _, args := range [][]string{
+		{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"},
+		{"energy", "--gas", "helium", "--pressure", "30barg", "--volume", "50L"},
+		{"oxygen", "--release", "9m3", "--room", "30m3"},
+		{"spl", "--amplitude", "10kPa"},
+	} {
+		var o, e bytes.Buffer
+		if code := run(args, &o, &e); code != exitOK {
+			t.Fatalf("%q: exit %d %s", args, code, e.String())
+		}
+		if !strings.Contains(o.String(), "CAUTION") || !strings.Contains(o.String(), "Estimates for planning only") {
+			t.Errorf("%q: table output lacks the caution:\n%s", args, o.String())
+		}
+	}
+}
