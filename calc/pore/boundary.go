@@ -18,7 +18,7 @@ func BoundaryLayer(hydraulicRadius float64) (Shape, error) {
 	if err := positive("hydraulic radius", hydraulicRadius); err != nil {
 		return nil, err
 	}
-	return &boundary{rh: hydraulicRadius}, nil
+	return checked(&boundary{rh: hydraulicRadius})
 }
 
 func (b *boundary) HydraulicRadius() float64 { return b.rh }

@@ -37,7 +37,7 @@ func CircularPores(radius, porosity float64) (Shape, error) {
 	if err := fraction("porosity", porosity); err != nil {
 		return nil, err
 	}
-	return &circular{r: radius, phi: porosity}, nil
+	return checked(&circular{r: radius, phi: porosity})
 }
 
 func (c *circular) HydraulicRadius() float64 { return c.r / 2 }

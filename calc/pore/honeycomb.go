@@ -31,7 +31,7 @@ func Honeycomb(cellsPerSquareMetre, wallThickness float64) (Shape, error) {
 		return nil, impossible("wall thickness %s is not smaller than the cell pitch %s (from the cell density): no open cell is left", mm(wallThickness), mm(p))
 	}
 	s := p - wallThickness
-	return &honeycomb{pitch: p, wall: wallThickness, channel: rectangular{a: s / 2, b: s / 2, phi: 1}}, nil
+	return checked(&honeycomb{pitch: p, wall: wallThickness, channel: rectangular{a: s / 2, b: s / 2, phi: 1}})
 }
 
 func (h *honeycomb) HydraulicRadius() float64 { return (h.pitch - h.wall) / 4 }

@@ -48,7 +48,7 @@ func Pins(pinRadius, pitch float64) (Shape, error) {
 	if 2*pinRadius >= pitch {
 		return nil, impossible("pin diameter %s is not smaller than the pin pitch %s: the pins touch or overlap", mm(2*pinRadius), mm(pitch))
 	}
-	return &pins{ri: pinRadius, ro: hexCell * pitch, pitch: pitch}, nil
+	return checked(&pins{ri: pinRadius, ro: hexCell * pitch, pitch: pitch})
 }
 
 func (p *pins) HydraulicRadius() float64 { return (p.ro*p.ro - p.ri*p.ri) / (2 * p.ri) }

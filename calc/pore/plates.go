@@ -25,7 +25,7 @@ func Plates(halfGap, thickness float64) (Shape, error) {
 	if err := nonNegative("plate thickness", thickness, "m"); err != nil {
 		return nil, err
 	}
-	return &plates{y0: halfGap, half: thickness / 2}, nil
+	return checked(&plates{y0: halfGap, half: thickness / 2})
 }
 
 // PlatesFromPitch returns parallel plates given the plate pitch (centre to

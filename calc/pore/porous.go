@@ -67,9 +67,14 @@ func Screens(meshPerMetre, wireDiameter, measuredPorosity float64) (Shape, error
 		}
 		phi = measuredPorosity
 	}
-	rh := phi * wireDiameter / (4 * (1 - phi))
+	// r_h = φ d / (4(1-φ)); for the geometric φ, 1-φ = π m d/4, so
+	// r_h = φ/(π m) without the cancellation of 1-φ at tiny m·d.
+	rh := phi / (math.Pi * meshPerMetre)
+	if measuredPorosity != 0 {
+		rh = phi * wireDiameter / (4 * (1 - phi))
+	}
 	desc := "woven screens, " + perInch(meshPerMetre) + " mesh, wire " + mm(wireDiameter)
-	return &matrix{phi: phi, rh: rh, desc: desc}, nil
+	return checked(&matrix{phi: phi, rh: rh, desc: desc})
 }
 
 // Fibres returns a random packing of fibres (metal wool, felt) of diameter
@@ -89,7 +94,7 @@ func Fibres(fibreDiameter, solidFraction float64) (Shape, error) {
 	phi := 1 - solidFraction
 	rh := phi * fibreDiameter / (4 * solidFraction)
 	desc := "random fibres, diameter " + mm(fibreDiameter) + ", solid fraction " + pct(solidFraction)
-	return &matrix{phi: phi, rh: rh, desc: desc}, nil
+	return checked(&matrix{phi: phi, rh: rh, desc: desc})
 }
 
 // SolidFraction returns the volume fraction of solid in a packing of mass

@@ -44,7 +44,7 @@ func Rectangular(halfWidth, halfHeight float64) (Shape, error) {
 		return nil, err
 	}
 	a, b := math.Min(halfWidth, halfHeight), math.Max(halfWidth, halfHeight)
-	return &rectangular{a: a, b: b, phi: 1}, nil
+	return checked(&rectangular{a: a, b: b, phi: 1})
 }
 
 func (r *rectangular) HydraulicRadius() float64 { return r.a * r.b / (r.a + r.b) }
@@ -93,17 +93,21 @@ func rectF(a, b, delta float64) complex128 {
 //	x/(1+x) = Σ_j (-1)^(j-1) x^j,  x(1+x)^(-3/2) = Σ_j c_(j-1) x^j
 //
 // so the tail is (8/π²) Σ_j α^j [(-1)^(j-1) Z(2j+2) - c_(j-1) Z(2j+3)/β]
-// with Z(s) = Σ_{m odd >= n} m^-s.
+// with Z(s) = Σ_{m odd >= n} m^-s, taken in turn for s = 4, 5, 6, ...
 func rectTail(alpha complex128, beta float64, n int) complex128 {
 	var tail complex128
 	aj := complex(1, 0)
 	c := 1.0 // binomial coefficient of (1+x)^(-3/2)
 	sign := 1.0
 	fn := float64(n)
+	z := newOddZeta(n, 4)
 	for j := 1; j <= 40; j++ {
 		aj *= alpha
-		term := aj * complex(sign*oddZeta(2*j+2, n)-c*oddZeta(2*j+3, n)/beta, 0)
-		tail += term
+		even := z.value()
+		z.next()
+		odd := z.value()
+		z.next()
+		tail += aj * complex(sign*even-c*odd/beta, 0)
 		if cmplx.Abs(aj)*math.Pow(fn, -float64(2*j+1)) < 1e-18 {
 			break
 		}
@@ -125,22 +129,61 @@ var bernoulli2k = [...]float64{
 	-3617.0 / 510 / 20922789888000,
 }
 
-// oddZeta returns Σ_{m = n, n+2, ...} m^-s for odd n >= 1 and s >= 2: ten
-// terms summed directly, the rest by Euler–Maclaurin for the Hurwitz zeta
-// function, Σ_k (q+k)^-s with q = m/2, times 2^-s.
-func oddZeta(s, n int) float64 {
-	const direct = 10
-	fs := float64(s)
-	var sum float64
-	for k := direct - 1; k >= 0; k-- {
-		sum += math.Pow(float64(n+2*k), -fs)
+// oddZetaDirect is the number of terms of Z(s) summed directly before the
+// Euler–Maclaurin remainder.
+const oddZetaDirect = 10
+
+// oddZeta evaluates Z(s) = Σ_{m = n, n+2, ...} m^-s for odd n >= 1 and
+// s = s0, s0+1, ... in turn: oddZetaDirect terms summed directly, the rest
+// as 2^-s ζ(s, q) with q = (n + 2·oddZetaDirect)/2 by Euler–Maclaurin
+// (DLMF 25.11.1 with the remainder expanded as in DLMF 2.10.1):
+//
+//	ζ(s,q) ≈ q^(1-s)/(s-1) + q^-s/2 + Σ_k B_2k/(2k)! s(s+1)…(s+2k-2) q^(-s-2k+1)
+//
+// Powers are updated by multiplication from one s to the next.
+type oddZeta struct {
+	inv [oddZetaDirect]float64 // 1/m for the direct terms
+	pw  [oddZetaDirect]float64 // m^-s
+	q   float64
+	qs  float64 // q^-s
+	two float64 // 2^-s
+	s   int
+}
+
+func newOddZeta(n, s0 int) oddZeta {
+	z := oddZeta{s: s0}
+	fs := float64(s0)
+	for k := range z.inv {
+		m := float64(n + 2*k)
+		z.inv[k] = 1 / m
+		z.pw[k] = math.Pow(m, -fs)
 	}
-	q := float64(n+2*direct) / 2
-	// ζ(s,q) ≈ q^(1-s)/(s-1) + q^-s/2 + Σ B_2k/(2k)! s(s+1)…(s+2k-2) q^(-s-2k+1)
-	qs := math.Pow(q, -fs)
-	h := q*qs/(fs-1) + qs/2
-	rise := fs   // s(s+1)...(s+2k-2)
-	pw := qs / q // q^(-s-1)
+	z.q = float64(n+2*oddZetaDirect) / 2
+	z.qs = math.Pow(z.q, -fs)
+	z.two = math.Pow(2, -fs)
+	return z
+}
+
+// next advances s by one.
+func (z *oddZeta) next() {
+	for k := range z.pw {
+		z.pw[k] *= z.inv[k]
+	}
+	z.qs /= z.q
+	z.two /= 2
+	z.s++
+}
+
+// value returns Z(s) for the current s.
+func (z *oddZeta) value() float64 {
+	var sum float64
+	for k := oddZetaDirect - 1; k >= 0; k-- {
+		sum += z.pw[k]
+	}
+	fs := float64(z.s)
+	h := z.q*z.qs/(fs-1) + z.qs/2
+	rise := fs       // s(s+1)...(s+2k-2)
+	pw := z.qs / z.q // q^(-s-1)
 	for k := 1; k <= len(bernoulli2k); k++ {
 		d := bernoulli2k[k-1] * rise * pw
 		h += d
@@ -148,7 +191,7 @@ func oddZeta(s, n int) float64 {
 			break
 		}
 		rise *= (fs + float64(2*k-1)) * (fs + float64(2*k))
-		pw /= q * q
+		pw /= z.q * z.q
 	}
-	return sum + h*math.Pow(2, -fs)
+	return sum + h*z.two
 }

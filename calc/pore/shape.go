@@ -74,3 +74,16 @@ func trimFloat(v float64) string {
 func unitsRangeUnit(field string, v, lo, hi float64, unit string) error {
 	return units.NewRangeError(field, v, lo, hi, unit)
 }
+
+// checked returns s unless its porosity or hydraulic radius cannot be
+// represented (extreme inputs), in which case it returns an error.
+func checked(s Shape) (Shape, error) {
+	phi, rh := s.Porosity(), s.HydraulicRadius()
+	if !(phi > 0 && phi <= 1) {
+		return nil, units.NewRangeError("porosity", phi, 0, 1, "")
+	}
+	if !finitePositive(rh) {
+		return nil, units.NewRangeError("hydraulic radius", rh, 0, math.MaxFloat64, "m")
+	}
+	return s, nil
+}
