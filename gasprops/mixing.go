@@ -24,8 +24,13 @@ func pairAt(si, sj *Species, T float64) pair {
 	sig := 0.5 * (si.m.sigma + sj.m.sigma)
 	eps := math.Sqrt(si.m.epsK * sj.m.epsK)
 	mred := 2 * mi * mj / (mi + mj) * 1e3 // g/mol
-	eta := ljViscosity(mred, sig, eps, T)
-	a, b := ratiosAB(T / eps)
+	ts := T / eps
+	lt := math.Log(ts)
+	o22 := omega22l(ts, lt)
+	// first-order Chapman–Enskog viscosity, HCB 1954 eq. 8.2-18 (Poling et
+	// al. 2001 eq. 9-3.9), M in g/mol and σ in Å
+	eta := 2.6693e-6 * math.Sqrt(mred*T) / (sig * sig * o22)
+	a, b := ratiosAB(ts, lt, o22)
 	return pair{eta: eta, lambda: 3.75 * R * eta * (mi + mj) / (2 * mi * mj), a: a, b: b}
 }
 

@@ -51,14 +51,15 @@ func (sp *Species) molarCp(T float64) float64 {
 // potential", J. Chem. Phys. 57, 1100 (1972): the Ω(1,1)* and Ω(2,2)* fits,
 // valid 0.3 ≤ T* ≤ 100 (the small sine term of Ω(2,2)* is omitted, as in
 // Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th
-// ed., 2001, eq. 9-4.3).
-func omega22(ts float64) float64 {
-	return 1.16145*math.Pow(ts, -0.14874) + 0.52487*math.Exp(-0.77320*ts) + 2.16178*math.Exp(-2.43787*ts)
+// ed., 2001, eq. 9-4.3). omega22l is Ω(2,2)*(T*) given T* and ln T*.
+func omega22l(ts, lt float64) float64 {
+	return 1.16145*math.Exp(-0.14874*lt) + 0.52487*math.Exp(-0.77320*ts) + 2.16178*math.Exp(-2.43787*ts)
 }
 
-// omega11d returns Ω(1,1)* and its first and second derivatives in T*.
-func omega11d(ts float64) (o, d1, d2 float64) {
-	p := 1.06036 * math.Pow(ts, -0.15610)
+// omega11d returns Ω(1,1)* and its first and second derivatives in T*,
+// given T* and ln T*.
+func omega11d(ts, lt float64) (o, d1, d2 float64) {
+	p := 1.06036 * math.Exp(-0.15610*lt)
 	e1 := 0.19300 * math.Exp(-0.47635*ts)
 	e2 := 1.03587 * math.Exp(-1.52996*ts)
 	e3 := 1.76474 * math.Exp(-3.89411*ts)
@@ -69,32 +70,21 @@ func omega11d(ts float64) (o, d1, d2 float64) {
 }
 
 // ratiosAB returns the collision-integral ratios A* = Ω(2,2)*/Ω(1,1)* and
-// B* = (5Ω(1,2)* − 4Ω(1,3)*)/Ω(1,1)* at reduced temperature T*. Ω(1,2)*
-// and Ω(1,3)* follow from Ω(1,1)* by the exact recursion
+// B* = (5Ω(1,2)* − 4Ω(1,3)*)/Ω(1,1)* at reduced temperature T*, given
+// Ω(2,2)*(T*) and ln T*. Ω(1,2)* and Ω(1,3)* follow from Ω(1,1)* by the
+// exact recursion
 //
 //	Ω(l,s+1)* = Ω(l,s)* + (T*/(s+2)) dΩ(l,s)*/dT*
 //
 // (Hirschfelder, Curtiss & Bird, Molecular Theory of Gases and Liquids,
 // 1954, §8.2), applied to the Neufeld fit.
-func ratiosAB(ts float64) (a, b float64) {
-	o11, d1, d2 := omega11d(ts)
+func ratiosAB(ts, lt, o22 float64) (a, b float64) {
+	o11, d1, d2 := omega11d(ts, lt)
 	o12 := o11 + ts/3*d1
 	// dΩ12/dT* = d1 + d1/3 + ts/3 d2
 	do12 := d1*4/3 + ts/3*d2
 	o13 := o12 + ts/4*do12
-	return omega22(ts) / o11, (5*o12 - 4*o13) / o11
-}
-
-// ljViscosity returns the first-order Chapman–Enskog viscosity in Pa·s of a
-// Lennard-Jones gas (or, with the reduced pair mass, an unlike interaction):
-//
-//	η = (5/16) √(π m k T) / (π σ² Ω(2,2)*)  =  2.6693e-6 √(M T) / (σ² Ω(2,2)*)
-//
-// with M in g/mol and σ in Å (Hirschfelder, Curtiss & Bird 1954, eq.
-// 8.2-18; Poling et al. 2001, eq. 9-3.9). For an unlike pair use
-// M = 2 M1 M2/(M1+M2).
-func ljViscosity(mGramPerMol, sigma, epsK, T float64) float64 {
-	return 2.6693e-6 * math.Sqrt(mGramPerMol*T) / (sigma * sigma * omega22(T/epsK))
+	return o22 / o11, (5*o12 - 4*o13) / o11
 }
 
 // viscosity returns the dilute-gas dynamic viscosity of the pure species in

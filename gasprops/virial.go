@@ -40,19 +40,35 @@ type virialModel struct {
 
 // b returns B(T) in m³/mol.
 func (v *virialModel) b(T float64) float64 {
+	b, _, _ := v.bd(T)
+	return b
+}
+
+// bd returns B(T) and its first two temperature derivatives, analytic.
+func (v *virialModel) bd(T float64) (b, d1, d2 float64) {
 	switch v.kind {
 	case virialPetersen:
-		return 0.4446e-5 * R * math.Pow(T, -0.2)
+		b = 0.4446e-5 * R * math.Exp(-0.2*math.Log(T))
+		return b, -0.2 * b / T, 0.24 * b / (T * T)
 	case virialTsonopoulos:
-		tr := v.tc / T // 1/Tr
-		tr2 := tr * tr
-		tr3 := tr2 * tr
-		tr8 := tr3 * tr3 * tr2
-		f0 := 0.1445 - 0.330*tr - 0.1385*tr2 - 0.0121*tr3 - 0.000607*tr8
-		f1 := 0.0637 + 0.331*tr2 - 0.423*tr3 - 0.008*tr8
-		return R * v.tc / v.pc * (f0 + v.omeg*f1)
+		// in u = Tc/T: f(u) = Σ c_k u^k, dB/dT = −(u/T) df/du,
+		// d²B/dT² = (2u f' + u² f'')/T²
+		u := v.tc / T
+		w := v.omeg
+		c1 := -0.330
+		c2 := -0.1385 + 0.331*w
+		c3 := -0.0121 - 0.423*w
+		c8 := -0.000607 - 0.008*w
+		u2 := u * u
+		u3 := u2 * u
+		u7 := u3 * u3 * u
+		f := 0.1445 + 0.0637*w + c1*u + c2*u2 + c3*u3 + c8*u7*u
+		f1 := c1 + 2*c2*u + 3*c3*u2 + 8*c8*u7
+		f2 := 2*c2 + 6*c3*u + 56*c8*u3*u3
+		k := R * v.tc / v.pc
+		return k * f, -k * u / T * f1, k * (2*u*f1 + u2*f2) / (T * T)
 	}
-	return 0
+	return 0, 0, 0
 }
 
 func init() {
@@ -108,12 +124,7 @@ func (m Mixture) Compressibility(T, p float64) float64 {
 // so that c² = (γ0 R T/M)(1 + β_a p/(R T)) to first order in pressure
 // (Trusler, Physical Acoustics and Metrology of Fluids, 1991, ch. 3).
 func (v *virialModel) acousticVirial(T, gamma0 float64) float64 {
-	h := 1e-3 * T
-	b0 := v.b(T)
-	bp := v.b(T + h)
-	bm := v.b(T - h)
-	d1 := (bp - bm) / (2 * h)
-	d2 := (bp - 2*b0 + bm) / (h * h)
+	b0, d1, d2 := v.bd(T)
 	g1 := gamma0 - 1
 	return 2*b0 + 2*g1*T*d1 + g1*g1/gamma0*T*T*d2
 }

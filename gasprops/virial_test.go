@@ -86,3 +86,21 @@ func TestNonIdealLimits(t *testing.T) {
 		}
 	}
 }
+
+// TestVirialDerivatives: the analytic dB/dT and d²B/dT² used by the
+// acoustic virial agree with central differences of B.
+func TestVirialDerivatives(t *testing.T) {
+	t.Parallel()
+	for _, s := range []*Species{helium, argon, xenon, carbonDioxide, air} {
+		v := &s.m.virial
+		for _, T := range []float64{200, 300, 700, 1500} {
+			_, d1, d2 := v.bd(T)
+			h := 1e-3 * T
+			fd1 := (v.b(T+h) - v.b(T-h)) / (2 * h)
+			fd2 := (v.b(T+h) - 2*v.b(T) + v.b(T-h)) / (h * h)
+			if !scalar.EqualWithinAbsOrRel(d1, fd1, 1e-14, 1e-5) || !scalar.EqualWithinAbsOrRel(d2, fd2, 1e-15, 1e-3) {
+				t.Errorf("%s at %g K: dB/dT %.6g (fd %.6g), d²B/dT² %.6g (fd %.6g)", s.Name, T, d1, fd1, d2, fd2)
+			}
+		}
+	}
+}
