@@ -352,6 +352,10 @@ func (m *model) run(p0, u0 complex128, prof *Profile) ([3]complex128, error) {
 			m.lastArea = s.gasArea
 			m.lastRadius = s.radius
 		}
+		if s.kind != KindStack {
+			m.propagate(s, y, prof)
+			continue
+		}
 		res, err := m.it.Integrate(m.deriv, 0, s.length, y, &m.ode)
 		m.steps += res.Steps
 		if m.err != nil {
@@ -360,7 +364,7 @@ func (m *model) run(p0, u0 complex128, prof *Profile) ([3]complex128, error) {
 		if err != nil {
 			return m.y, fmt.Errorf("part %d (%s): %w", s.part+1, s.kind, err)
 		}
-		if s.kind == KindStack {
+		{
 			if m.runMode == modeHeatPump {
 				m.stackMis = real(y[2]) - m.tR
 			}
@@ -378,6 +382,41 @@ func (m *model) run(p0, u0 complex128, prof *Profile) ([3]complex128, error) {
 
 func (m *model) wrapErr(s *segment) error {
 	return fmt.Errorf("part %d (%s): %w", s.part+1, s.kind, m.err)
+}
+
+// profilePoints is the number of profile rows per uniform part.
+const profilePoints = 24
+
+// propagate carries y across a part of uniform temperature with the exact
+// solution of the constant-coefficient equations dp/dx = ca U, dU/dx = cb p:
+//
+//	p(x) = p0 cosh(Γx) + ca U0 sinh(Γx)/Γ
+//	U(x) = cb p0 sinh(Γx)/Γ + U0 cosh(Γx),   Γ² = ca cb
+//
+// (the integrator would approximate the same solution; tests compare both).
+func (m *model) propagate(s *segment, y []complex128, prof *Profile) {
+	p0, u0 := y[0], y[1]
+	gam := cmplx.Sqrt(m.ca * m.cb)
+	at := func(x float64) (complex128, complex128) {
+		gx := gam * complex(x, 0)
+		ch, sh := cmplx.Cosh(gx), cmplx.Sinh(gx)
+		shg := complex(x, 0) // sinh(Γx)/Γ → x as Γ → 0
+		if gam != 0 {
+			shg = sh / gam
+		}
+		return p0*ch + m.ca*u0*shg, m.cb*p0*shg + u0*ch
+	}
+	if prof != nil {
+		for i := 0; i < profilePoints; i++ {
+			x := s.length * float64(i) / profilePoints
+			p, u := at(x)
+			prof.add(s.x0+x, []complex128{p, u, y[2]}, s.part)
+		}
+	}
+	y[0], y[1] = at(s.length)
+	if prof != nil {
+		prof.add(s.x0+s.length, y, s.part)
+	}
 }
 
 // residual returns the far-end boundary residual in Pa for the end state y:
