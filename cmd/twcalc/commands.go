@@ -16,6 +16,8 @@ type command struct {
 // file cmd/twcalc/<name>.go.
 var commands = []command{
 	{"gas", "properties of a working gas or mixture", runGas},
+	{"resonance", "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps", runResonance},
+	{"diagnose", "gas temperature or mixture fraction from a measured resonance frequency", runDiagnose},
 	{"vessel", "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)", runVessel},
 	{"energy", "stored energy of a gas charge and its TNT equivalent (safety)", runEnergy},
 	{"oxygen", "oxygen left in a room after a gas release (safety)", runOxygen},
