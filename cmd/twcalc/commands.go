@@ -22,4 +22,7 @@ var commands = []command{
 	{"energy", "stored energy of a gas charge and its TNT equivalent (safety)", runEnergy},
 	{"oxygen", "oxygen left in a room after a gas release (safety)", runOxygen},
 	{"spl", "sound pressure level of a pressure amplitude against hearing limits (safety)", runSPL},
+	{"depths", "thermal and viscous penetration depths of a gas at a frequency", runDepths},
+	{"pores", "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator", runPores},
+	{"placement", "where a short stack sits in a standing wave, displacement and exchanger length", runPlacement},
 }
