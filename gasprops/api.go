@@ -149,8 +149,9 @@ func (m Mixture) Range() (tmin, tmax float64) {
 // and c² = (γRT/M)(1 + β_a p/(RT)) with the acoustic virial β_a
 // (acousticVirial); cp, γ and transport stay ideal.
 //
-// Errors (*units.RangeError): pressure not positive and finite, or with
-// o.NonIdeal so high that |Bp/(RT)| > 0.25; temperature not finite, or
+// Errors (*units.RangeError): pressure not positive and finite, at or
+// above the vapour pressure of a component (its partial pressure, see
+// checkCondensation), or with o.NonIdeal so high that |Bp/(RT)| > 0.25; temperature not finite, or
 // more than 20 % outside Range. Within 20 % outside Range the result is
 // returned with a sentence in Warnings; so it is when |Bp/(RT)| > 2 %
 // (the ideal-gas density is that far off, or the virial correction is
@@ -169,6 +170,9 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 	}
 	nonIdeal := o != nil && o.NonIdeal
 	if warn, err = m.checkPressure(t, pa, nonIdeal, warn); err != nil {
+		return Properties{}, err
+	}
+	if warn, err = m.checkCondensation(t, pa, warn); err != nil {
 		return Properties{}, err
 	}
 	var mm, cpm float64

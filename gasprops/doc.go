@@ -53,6 +53,8 @@
 // tables at 200–600 K within 2 % (plus half the last printed digit), ideal
 // sound speed within 0.1 %, and air with python3-iapws.
 //
-// Below 200 K (cryogenic helium, as in pulse-tube coolers) the package
-// has no validated model.
+// A state where a component's partial pressure reaches its vapour
+// pressure (Lee–Kesler) is refused: carbon dioxide, xenon and krypton can
+// condense in the range of use. Below 200 K (cryogenic helium, as in
+// pulse-tube coolers) the package has no validated model.
 package gasprops

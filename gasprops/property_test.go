@@ -37,7 +37,7 @@ func TestPressureScaling(t *testing.T) {
 	t.Parallel()
 	he70 := mustParse(t, "helium:0.7,argon:0.3")
 	for _, m := range []Mixture{Pure(helium), Pure(nitrogen), Pure(carbonDioxide), he70} {
-		for _, T := range []float64{250, 700} {
+		for _, T := range []float64{320, 700} { // above CO2's critical point
 			a := props(t, m, T, 1e5)
 			for _, k := range []float64{0.01, 7, 100} {
 				b := props(t, m, T, k*1e5)
@@ -184,9 +184,11 @@ func TestNoNonFinite(t *testing.T) {
 				for _, o := range []*Options{nil, {NonIdeal: true}} {
 					pr, err := m.Properties(units.Temperature(T), units.Pressure(p), o)
 					if err != nil {
-						// the virial option refuses |Bp/RT| > 0.25
+						// the virial option refuses |Bp/RT| > 0.25, and a
+						// component at or above its vapour pressure is refused
 						var re *units.RangeError
-						if o != nil && p >= 1e7 && errors.As(err, &re) && re.Field == "pressure" {
+						if errors.As(err, &re) && re.Field == "pressure" &&
+							(o != nil && p >= 1e7 || strings.Contains(re.Why, "condenses")) {
 							continue
 						}
 						t.Errorf("%v at %g K, %g Pa: %v", m, T, p, err)

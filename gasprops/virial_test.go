@@ -2,6 +2,7 @@ package gasprops
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -103,4 +104,60 @@ func TestVirialDerivatives(t *testing.T) {
 			}
 		}
 	}
+}
+
+// TestVaporPressure: Lee–Kesler against the carbon dioxide saturation
+// pressures of Span & Wagner, J. Phys. Chem. Ref. Data 25, 1509 (1996),
+// table of saturation properties: 1.7850 MPa at 250 K and 4.1607 MPa at
+// 280 K (from memory), within 2 %.
+func TestVaporPressure(t *testing.T) {
+	t.Parallel()
+	for _, c := range [][2]float64{{250, 1.7850e6}, {280, 4.1607e6}} {
+		p, ok := carbonDioxide.vaporPressure(c[0])
+		if !ok || !scalar.EqualWithinRel(p, c[1], 0.02) {
+			t.Errorf("CO2 vapour pressure at %g K = %.4g Pa (ok %v), Span & Wagner %.4g", c[0], p, ok, c[1])
+		}
+	}
+	if _, ok := carbonDioxide.vaporPressure(310); ok {
+		t.Error("CO2 has a vapour pressure above its critical point")
+	}
+	if _, ok := helium.vaporPressure(200); ok {
+		t.Error("helium has a vapour pressure at 200 K")
+	}
+}
+
+// TestCondensationGuard: carbon dioxide at 250 K is refused at 20 bar
+// (above 17.85 bar), warned at 15 bar, fine at 1 bar; in a helium-xenon
+// mixture it is the xenon partial pressure that counts.
+func TestCondensationGuard(t *testing.T) {
+	t.Parallel()
+	co2 := Pure(carbonDioxide)
+	if _, err := co2.Properties(250, 20e5, nil); err == nil || !strings.Contains(err.Error(), "condenses") {
+		t.Errorf("CO2 250 K 20 bar: %v", err)
+	}
+	p, err := co2.Properties(250, 15e5, nil)
+	if err != nil || !containsAny(p.Warnings, "vapour pressure") {
+		t.Errorf("CO2 250 K 15 bar: %q %v", p.Warnings, err)
+	}
+	if p := props(t, co2, 250, 1e5); p.Warnings != nil {
+		t.Errorf("CO2 250 K 1 bar: %q", p.Warnings)
+	}
+	xe := Pure(xenon)
+	pxe, _ := xenon.vaporPressure(250)
+	if _, err := xe.Properties(250, units.Pressure(1.01*pxe), nil); err == nil {
+		t.Error("xenon above its vapour pressure accepted")
+	}
+	mix := mustParse(t, "He:0.9,Xe:0.1")
+	if _, err := mix.Properties(250, units.Pressure(1.01*pxe), nil); err != nil {
+		t.Errorf("10 %% xenon at its pure vapour pressure should be gas: %v", err)
+	}
+}
+
+func containsAny(ss []string, sub string) bool {
+	for _, s := range ss {
+		if strings.Contains(s, sub) {
+			return true
+		}
+	}
+	return false
 }
