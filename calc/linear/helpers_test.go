@@ -1,6 +1,7 @@
 package linear
 
 import (
+	"encoding/json"
 	"strings"
 	"testing"
 )
@@ -23,3 +24,5 @@ func mustDevice(t testing.TB, text string) *Device {
 	}
 	return d
 }
+
+func jsonUnmarshal(b []byte, v any) error { return json.Unmarshal(b, v) }
