@@ -41,6 +41,7 @@ func Lookup(name string) (*Species, error) {
 //	helium:0.7,argon:0.3    mole fractions
 //	He:70%,Ar:30%           mole fractions in per cent
 //	He:0.7, Ar:0.3          spaces are ignored around names and numbers
+//	helium 70 % + argon 30 %  as String writes it ("+" separates like ",")
 //
 // Fractions are normalised to sum to 1; a sum off 1 by more than 1 %
 // (100 % by more than 1 point) is an error, as are negative or non-finite
@@ -55,7 +56,10 @@ func ParseMixture(s string) (Mixture, error) {
 	if txt == "" {
 		return m, errors.New("no gas given; write a name such as helium, or a mixture such as helium:0.7,argon:0.3")
 	}
-	parts := strings.Split(txt, ",")
+	parts := strings.FieldsFunc(txt, func(r rune) bool { return r == ',' || r == '+' })
+	if len(parts) == 0 {
+		return m, fmt.Errorf("gas mixture %q names no gas", txt)
+	}
 	if len(parts) > MaxComponents {
 		return m, fmt.Errorf("gas mixture %q has %d components; at most %d are allowed", txt, len(parts), MaxComponents)
 	}
@@ -68,7 +72,10 @@ func ParseMixture(s string) (Mixture, error) {
 	sum := 0.0
 	nFrac := 0
 	for i, part := range parts {
-		name, frac, hasFrac := strings.Cut(part, ":")
+		name, frac, hasFrac := splitPart(part)
+		if t := strings.TrimSpace(name); t != "" && (t[0] >= '0' && t[0] <= '9' || t[0] == '.') {
+			return Mixture{}, fmt.Errorf("gas mixture %q: %q is not a gas name; write decimals with a point (0.5), commas separate the gases", txt, t)
+		}
 		sp, err := Lookup(name)
 		if err != nil {
 			return Mixture{}, err
@@ -115,6 +122,22 @@ func ParseMixture(s string) (Mixture, error) {
 	return m, nil
 }
 
+// splitPart splits one component "helium:0.7", "helium 70 %" or "helium"
+// into name and fraction text.
+func splitPart(part string) (name, frac string, hasFrac bool) {
+	if n, f, ok := strings.Cut(part, ":"); ok {
+		return n, f, true
+	}
+	t := strings.TrimSpace(part)
+	t2 := strings.TrimSpace(strings.TrimSuffix(t, "%"))
+	if i := strings.LastIndexByte(t2, ' '); i > 0 {
+		if _, err := strconv.ParseFloat(t2[i+1:], 64); err == nil {
+			return t2[:i], t[i+1:], true
+		}
+	}
+	return part, "", false
+}
+
 // parseFraction reads "0.7", "70%" or "70 %" as a mole fraction.
 func parseFraction(s string) (float64, error) {
 	t := strings.TrimSpace(s)
@@ -154,7 +177,7 @@ func (m Mixture) String() string {
 		}
 		b.WriteString(c.Species.Name)
 		b.WriteByte(' ')
-		b.WriteString(strconv.FormatFloat(math.Round(c.X*1e5)/1e3, 'g', 4, 64))
+		b.WriteString(strconv.FormatFloat(c.X*100, 'g', 4, 64))
 		b.WriteString(" %")
 	}
 	return b.String()

@@ -52,6 +52,9 @@ func TestParseMixture(t *testing.T) {
 		{"helium:1,argon:0", "helium"},
 		{"He:0.2,Ne:0.2,Ar:0.2,Kr:0.2,Xe:0.2", "helium 20 % + neon 20 % + argon 20 % + krypton 20 % + xenon 20 %"},
 		{"air:1", "air"},
+		{"helium 70 % + argon 30 %", "helium 70 % + argon 30 %"},
+		{"helium 0.7 + xenon 0.3", "helium 70 % + xenon 30 %"},
+		{"carbon dioxide", "carbon dioxide"},
 	}
 	for _, g := range good {
 		if g.want == "" {
@@ -71,7 +74,9 @@ func TestParseMixture(t *testing.T) {
 		{"   ", "no gas"},
 		{"unobtainium", "known gases"},
 		{"helium:0.7,argon:0.2", "sum to 0.9"},
-		{"He:0,5,Ar:0,5", "unknown gas"},
+		{"He:0,5,Ar:0,5", "decimals with a point"},
+		{",", "names no gas"},
+		{"helium 70 % argon 30 %", "unknown gas"},
 		{"helium:0.7,helium:0.3", "twice"},
 		{"He:-0.3,Ar:1.3", "outside 0–1"},
 		{"He:0.5,Ar", "every gas"},
@@ -143,7 +148,16 @@ func FuzzParseMixture(f *testing.F) {
 		if math.Abs(sum-1) > 1e-12 {
 			t.Fatalf("%q: fractions sum to %.17g", s, sum)
 		}
-		_ = m.String()
+		// String round-trips through ParseMixture (to its 4 significant digits)
+		back, err := ParseMixture(m.String())
+		if err != nil || len(back.Components()) != len(cs) {
+			t.Fatalf("%q: String %q does not parse back: %v", s, m.String(), err)
+		}
+		for i, c := range back.Components() {
+			if c.Species != cs[i].Species || math.Abs(c.X-cs[i].X) > 3e-3*cs[i].X {
+				t.Fatalf("%q: round trip %v -> %v", s, cs, back.Components())
+			}
+		}
 		p, err := m.Properties(300, 1e5, nil)
 		if err != nil || !finite(p) {
 			t.Fatalf("%q: %v %+v", s, err, p)
