@@ -230,7 +230,9 @@ func (a *App) layoutBar(gtx layout.Context) layout.Dimensions {
 		if len(a.stack) > 0 {
 			in.Left = 4
 		}
+		gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
 		return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			gtx.Constraints.Min.Y = 0
 			return in.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 				l := material.Label(th, unit.Sp(20), title)
 				l.Color = a.env.Colors.OnAccent

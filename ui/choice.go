@@ -111,15 +111,18 @@ func (c *Choice) Layout(gtx layout.Context) layout.Dimensions {
 					bw = gtx.Dp(2)
 				}
 				return background(gtx, bg, edge, gtx.Dp(16), bw, func(gtx layout.Context) layout.Dimensions {
-					gtx.Constraints.Min.Y = gtx.Dp(36)
-					return layout.Inset{Left: 14, Right: 14, Top: 8, Bottom: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						l := material.Body2(th, c.labels[i])
-						l.Color = fg
-						l.TextSize = unit.Sp(15)
-						if sel {
-							l.Font.Weight = 600
-						}
-						return l.Layout(gtx)
+					// At least 40 dp tall for fingers, the text centred.
+					gtx.Constraints.Min.Y = gtx.Dp(40)
+					return layout.Center.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						return layout.Inset{Left: 14, Right: 14, Top: 6, Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+							l := material.Body2(th, c.labels[i])
+							l.Color = fg
+							l.TextSize = unit.Sp(15)
+							if sel {
+								l.Font.Weight = 600
+							}
+							return l.Layout(gtx)
+						})
 					})
 				})
 			})

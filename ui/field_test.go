@@ -99,4 +99,3 @@ func TestChoiceClick(t *testing.T) {
 		t.Fatalf("after tap: selected %q with %d changes; want open, 1", c.Selected(), changes)
 	}
 }
-

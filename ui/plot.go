@@ -82,10 +82,15 @@ func (w *Plot) Layout(gtx layout.Context) layout.Dimensions {
 // at one pixel per dp.
 func (w *Plot) render(size image.Point, pxPerDp float32) {
 	img := image.NewRGBA(image.Rectangle{Max: size})
-	draw.Draw(img, img.Bounds(), image.White, image.Point{}, draw.Src)
 	dpi := int(96*pxPerDp + 0.5)
 	c := vgimg.NewWith(vgimg.UseImage(img), vgimg.UseDPI(dpi))
 	w.p.Draw(vgdraw.New(c))
-	w.img, w.size, w.ppdp = img, size, pxPerDp
-	w.op = paint.NewImageOp(img)
+	// The canvas draws into its own copy of the image.
+	out, ok := c.Image().(*image.RGBA)
+	if !ok {
+		out = image.NewRGBA(c.Image().Bounds())
+		draw.Draw(out, out.Bounds(), c.Image(), image.Point{}, draw.Src)
+	}
+	w.img, w.size, w.ppdp = out, size, pxPerDp
+	w.op = paint.NewImageOp(out)
 }

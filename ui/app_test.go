@@ -1,0 +1,89 @@
+package ui
+
+import (
+	"image"
+	"strings"
+	"testing"
+
+	"gioui.org/io/key"
+)
+
+// TestAppNavigation opens a screen from the catalog by tapping it, goes
+// back with the Back button and with the platform Back key (Android's
+// button, the browser's history back), on a phone and on a wide window.
+func TestAppNavigation(t *testing.T) {
+	for _, size := range []image.Point{{412, 915}, {1440, 900}} {
+		a := NewApp(nil)
+		h := newHarness(t, size, a.Layout)
+		if a.Current() != "" {
+			t.Fatalf("%v: app opens on %q, want the catalog", size, a.Current())
+		}
+		if _, ok := h.byDesc("Working gas"); !ok {
+			t.Fatalf("%v: catalog entry not shown:\n%s", size, h.dump())
+		}
+		h.click(h.mustDesc("Working gas").Desc.Bounds)
+		if a.Current() != "gas" {
+			t.Fatalf("%v: after tapping Working gas, top is %q", size, a.Current())
+		}
+		if _, ok := h.byDesc("Temperature"); !ok {
+			t.Fatalf("%v: gas screen not drawn:\n%s", size, h.dump())
+		}
+		h.tap("‹ Back")
+		if a.Current() != "" {
+			t.Fatalf("%v: Back button left %q on top", size, a.Current())
+		}
+		a.Open("gas")
+		h.frame()
+		h.r.Queue(key.Event{Name: key.NameBack, State: key.Press})
+		h.frames(2)
+		if a.Current() != "" || a.Depth() != 0 {
+			t.Fatalf("%v: Back key left %q on top (depth %d)", size, a.Current(), a.Depth())
+		}
+	}
+}
+
+// TestAppBackStack checks the stack itself: Open pushes (and ignores
+// unknown IDs and the screen already on top), Back pops and reports
+// whether there was anything to pop, and Env.Open reaches the app.
+func TestAppBackStack(t *testing.T) {
+	a := NewApp(nil)
+	if a.Back() {
+		t.Fatal("Back at the catalog reported a pop")
+	}
+	a.Env().Open("no-such-screen")
+	if a.Depth() != 0 {
+		t.Fatalf("unknown ID pushed: depth %d", a.Depth())
+	}
+	a.Env().Open("gas")
+	a.Env().Open("gas")
+	if a.Depth() != 1 || a.Current() != "gas" {
+		t.Fatalf("depth %d top %q, want 1 gas", a.Depth(), a.Current())
+	}
+	if a.Screen("gas") != a.Screen("gas") {
+		t.Fatal("screens are rebuilt instead of kept")
+	}
+	if !a.Back() || a.Depth() != 0 {
+		t.Fatal("Back did not pop the screen")
+	}
+}
+
+// TestCatalogTable checks the catalog's invariants: unique IDs usable in
+// file names, titles and summaries present, constructors that build a
+// screen whose title matches the catalog's.
+func TestCatalogTable(t *testing.T) {
+	seen := map[string]bool{}
+	env := NewEnv(nil)
+	for _, e := range Catalog() {
+		if e.ID == "" || strings.ContainsAny(e.ID, " /\\.") || seen[e.ID] {
+			t.Errorf("bad or duplicate ID %q", e.ID)
+		}
+		seen[e.ID] = true
+		if e.Title == "" || e.Summary == "" || e.New == nil {
+			t.Errorf("%s: title, summary and constructor are required", e.ID)
+			continue
+		}
+		if s := e.New(env); s == nil || s.Title() == "" {
+			t.Errorf("%s: constructor gave no screen or an untitled one", e.ID)
+		}
+	}
+}

@@ -1,0 +1,54 @@
+package ui
+
+import (
+	"errors"
+	"image"
+	"math"
+	"strings"
+	"testing"
+
+	"tubewright/calc/units"
+)
+
+// TestResultsNeverShowNaN checks that non-finite values become "—" with a
+// reason, that values carry their units, and that the rows are drawn.
+func TestResultsNeverShowNaN(t *testing.T) {
+	r := NewResults(NewEnv(nil))
+	r.Add("Frequency", 578.3, units.DimFrequency)
+	r.Add("Broken", math.NaN(), units.DimLength)
+	r.AddIn("Endless length", math.Inf(1), "mm")
+	r.AddPM("Measured", 567, 8, units.DimFrequency)
+	r.AddPM("No sigma", 567, math.NaN(), units.DimFrequency)
+	r.AddIn("Length", 0.147, "mm")
+	r.Warn("outside the model's range")
+	cases := []struct{ label, want string }{
+		{"Frequency", "578.3 Hz"},
+		{"Broken", "—"},
+		{"Endless length", "—"},
+		{"Measured", units.FormatPM(567, 8, units.DimFrequency)},
+		{"No sigma", "567 Hz"},
+		{"Length", "147 mm"},
+	}
+	for _, c := range cases {
+		if got, ok := r.Value(c.label); !ok || got != c.want {
+			t.Errorf("%s shown %q (found %v), want %q", c.label, got, ok, c.want)
+		}
+	}
+	h := newHarness(t, image.Pt(412, 800), r.Layout)
+	all := ""
+	for _, n := range h.nodes() {
+		all += n.Desc.Label + "\n"
+	}
+	for _, bad := range []string{"NaN", "Inf"} {
+		if strings.Contains(all, bad) {
+			t.Errorf("%q drawn on screen:\n%s", bad, all)
+		}
+	}
+	if !strings.Contains(all, "no finite value") || !strings.Contains(all, "Note: outside the model's range") {
+		t.Errorf("reason or warning not drawn:\n%s", all)
+	}
+	r.Fail(errors.New("temperature 15 K is too low"))
+	if r.Len() != 0 || !strings.Contains(r.Failure(), "15 K") {
+		t.Fatalf("Fail kept %d rows, failure %q", r.Len(), r.Failure())
+	}
+}
