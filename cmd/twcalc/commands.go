@@ -25,4 +25,6 @@ var commands = []command{
 	{"depths", "thermal and viscous penetration depths of a gas at a frequency", runDepths},
 	{"pores", "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator", runPores},
 	{"placement", "where a short stack sits in a standing wave, displacement and exchanger length", runPlacement},
+	{"onset", "hot temperature and frequency at which a device described in a file starts to sing", runOnset},
+	{"heatpump", "cold temperature, span and COP of a driven heat pump described in a file", runHeatPump},
 }
