@@ -64,6 +64,11 @@ type Properties struct {
 	Warnings             []string // non-nil only when the state is outside a model's validated range
 }
 
+// MinPressure is the lowest absolute pressure Properties accepts, in Pa.
+// Far below it the gas is no longer a continuum at the scale of any
+// thermoacoustic channel, and the formulas lose meaning.
+const MinPressure = 1.0
+
 // ErrEmptyMixture is returned when a zero Mixture is evaluated.
 var ErrEmptyMixture = errors.New("gasprops: no gas chosen")
 
@@ -149,10 +154,10 @@ func (m Mixture) Range() (tmin, tmax float64) {
 // and c² = (γRT/M)(1 + β_a p/(RT)) with the acoustic virial β_a
 // (acousticVirial); cp, γ and transport stay ideal.
 //
-// Errors (*units.RangeError): pressure not positive and finite, at or
-// above the vapour pressure of a component (its partial pressure, see
-// checkCondensation), or with o.NonIdeal so high that |Bp/(RT)| > 0.25; temperature not finite, or
-// more than 20 % outside Range. Within 20 % outside Range the result is
+// Errors (*units.RangeError): pressure below MinPressure or not finite,
+// at or above the vapour pressure of a component (its partial pressure,
+// see checkCondensation), or with o.NonIdeal so high that |Bp/(RT)| >
+// 0.25; temperature not finite, or more than 20 % outside Range. Within 20 % outside Range the result is
 // returned with a sentence in Warnings; so it is when |Bp/(RT)| > 2 %
 // (the ideal-gas density is that far off, or the virial correction is
 // becoming a rough estimate).
@@ -161,8 +166,8 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 	if m.n == 0 {
 		return Properties{}, ErrEmptyMixture
 	}
-	if !(pa > 0) || math.IsInf(pa, 1) {
-		return Properties{}, units.NewRangeError("pressure", pa, 0, math.Inf(1), "Pa")
+	if !(pa >= MinPressure) || math.IsInf(pa, 1) {
+		return Properties{}, units.NewRangeError("pressure", pa, MinPressure, math.Inf(1), "Pa")
 	}
 	warn, err := m.checkTemperature(t)
 	if err != nil {
@@ -206,7 +211,11 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 		Warnings:             warn,
 	}
 	if !finite(pr) {
-		return Properties{}, units.NewRangeError("pressure", pa, 0, math.Inf(1), "Pa")
+		// not reached for valid states; kept so that NaN or Inf never
+		// leaves the package
+		e := units.NewRangeError("pressure", pa, MinPressure, math.Inf(1), "Pa")
+		e.Why = "the " + m.String() + " properties overflow at this state"
+		return Properties{}, e
 	}
 	return pr, nil
 }

@@ -80,6 +80,10 @@ func (m *Mixture) checkPressure(t, pa float64, nonIdeal bool, warn []string) ([]
 	}
 	b, ok := m.SecondVirial(t)
 	if !ok {
+		if nonIdeal {
+			warn = append(warn, "no second virial coefficient is available for "+m.String()+
+				"; density and sound speed are ideal-gas values")
+		}
 		return warn, nil
 	}
 	d := b * pa / (R * t)

@@ -137,7 +137,7 @@ func TestRangeChecks(t *testing.T) {
 	}{
 		{100, 1e5, "temperature"}, {7000, 1e5, "temperature"}, {math.NaN(), 1e5, "temperature"},
 		{math.Inf(1), 1e5, "temperature"}, {-5, 1e5, "temperature"},
-		{300, 0, "pressure"}, {300, -1e5, "pressure"}, {300, math.NaN(), "pressure"}, {300, math.Inf(1), "pressure"},
+		{300, 0, "pressure"}, {300, 0.5, "pressure"}, {300, -1e5, "pressure"}, {300, math.NaN(), "pressure"}, {300, math.Inf(1), "pressure"},
 	}
 	for _, b := range bad {
 		_, err := he.Properties(units.Temperature(b.T), units.Pressure(b.p), nil)
@@ -158,6 +158,14 @@ func TestRangeChecks(t *testing.T) {
 	}
 	if _, err := ar.Properties(300, 600e5, &Options{NonIdeal: true}); err == nil {
 		t.Error("argon at 600 bar with the virial option accepted")
+	}
+	// a mixture has no B: the virial option says so above 5 bar
+	hx := mustParse(t, "He:0.7,Ar:0.3")
+	if p, err := hx.Properties(300, 20e5, &Options{NonIdeal: true}); err != nil || !containsAny(p.Warnings, "ideal-gas values") {
+		t.Errorf("He-Ar 20 bar non-ideal: %q %v", p.Warnings, err)
+	}
+	if p := props(t, hx, 300, 20e5); p.Warnings != nil {
+		t.Errorf("He-Ar 20 bar ideal: %q", p.Warnings)
 	}
 	_, err := he.Properties(100, 1e5, nil)
 	if err == nil || !strings.Contains(err.Error(), "helium model") {
@@ -180,7 +188,7 @@ func TestNoNonFinite(t *testing.T) {
 	for _, m := range mixes {
 		lo, hi := m.Range()
 		for _, T := range []float64{lo * 0.81, lo, (lo + hi) / 2, hi, hi * 1.19} {
-			for _, p := range []float64{1, 1e5, 1e7, 1e8} {
+			for _, p := range []float64{MinPressure, 1e5, 1e7, 1e8} {
 				for _, o := range []*Options{nil, {NonIdeal: true}} {
 					pr, err := m.Properties(units.Temperature(T), units.Pressure(p), o)
 					if err != nil {
