@@ -15,7 +15,8 @@ const (
 	// distributed with the NASA CEA program's transport data file
 	// (Gordon & McBride, NASA RP-1311, 1994/1996; Svehla, NASA TM-4647,
 	// 1995); for the noble gases the fits rest on Bich, Millat & Vogel
-	// (1990); for CO2 on Bousheri et al. (1987).
+	// (1990); for CO2 viscosity on Bousheri et al. (1987) and Svehla
+	// (1994), as the data file notes.
 	transportCEA transportKind = iota
 	// transportAirLJ: the dilute-gas terms of Lemmon & Jacobsen,
 	// "Viscosity and thermal conductivity equations for nitrogen, oxygen,
@@ -65,8 +66,8 @@ type model struct {
 	// reference correlation of Huber et al. (2016) for carbon dioxide.
 	condCO2 bool
 	// Lennard-Jones parameters: collision diameter σ in Å and well depth
-	// ε/k in K. Used for the unlike interactions in mixtures and for
-	// transportLJ species.
+	// ε/k in K (Svehla, NASA TR R-132, 1962). Used for the unlike
+	// interactions in mixtures and as the scaling of transportScaled.
 	sigma, epsK float64
 	// validated temperature range of every model of this species, K
 	tmin, tmax float64
