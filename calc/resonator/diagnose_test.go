@@ -78,7 +78,7 @@ func TestDiagnoseUncertainty(t *testing.T) {
 
 func TestDiagnoseNoSolution(t *testing.T) {
 	t.Parallel()
-	s := Setup{Tube: Tube{Ends: ClosedOpen, Correction: Flanged, Mode: 1, Length: 0.147, Radius: 0.008}, Gas: mixture(t, "air"), Temperature: 293, Pressure: 101325}
+	s := Setup{Tube: Tube{Ends: ClosedOpen, Correction: Flanged, Mode: 1, Length: 0.3, Radius: 0.01}, Gas: mixture(t, "air"), Temperature: 293, Pressure: 101325}
 	for _, f := range []float64{50, 1e5} {
 		_, err := s.DiagnoseTemperature(f)
 		if !errors.Is(err, ErrNoSolution) {

@@ -8,12 +8,12 @@ import (
 	"tubewright/gasprops"
 )
 
-// A closed-open glass tube 0.25 m long, 8 mm radius, in air at 20 °C.
+// A closed-open glass tube 0.25 m long, 10 mm radius, in air at 20 °C.
 func ExampleSetup_SolveFrequency() {
 	air, _ := gasprops.ParseMixture("air")
 	s := resonator.Setup{
 		Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1,
-			Length: 0.25, Radius: 0.008},
+			Length: 0.25, Radius: 0.01},
 		Gas: air, Temperature: 293.15, Pressure: units.StandardAtmosphere,
 		U: resonator.Uncertainty{Length: 0.001},
 	}
@@ -25,8 +25,8 @@ func ExampleSetup_SolveFrequency() {
 	fmt.Println(units.FormatPM(r.Frequency, r.FrequencySigma, units.DimFrequency))
 	fmt.Printf("end correction %.2f mm, Q %.1f\n", r.EndCorrection*1e3, r.Q.Total)
 	// Output:
-	// 336.7 ± 1.3 Hz
-	// end correction 4.90 mm, Q 44.5
+	// 335.1 ± 1.3 Hz
+	// end correction 6.13 mm, Q 54.0
 }
 
 // The mean temperature of helium in a 1 m closed-closed tube that sings at

@@ -14,7 +14,7 @@ func runDiagnose(args []string) (*report, error) {
 	gas := fl.gas("gas", "", "working gas: helium, air, helium:0.9,argon:0.1 (for --find fraction the first, pure gas)")
 	pres := fl.quantity("pressure", units.DimPressure, "1atm", "mean pressure, absolute (10bar) or gauge (30barg)")
 	tf := addTubeFlags(fl, "")
-	meas := fl.quantity("measured-frequency", units.DimFrequency, "", "measured resonance frequency, with its ±: 567Hz+-8Hz")
+	meas := fl.quantity("measured-frequency", units.DimFrequency, "", "measured resonance frequency, with its ±: 140Hz+-2Hz")
 	find := fl.choice("find", []string{"temperature", "fraction"}, "temperature", "what to infer: the mean gas temperature, or the mole fraction of --second-gas")
 	second := fl.str("second-gas", "", "second gas of the mixture for --find fraction: argon")
 	temp := fl.quantity("temperature", units.DimTemperature, "20degC", "known gas temperature for --find fraction: 300K, 20degC+-1K")

@@ -24,7 +24,7 @@ func addTubeFlags(fl *flags, lengthDef string) *tubeFlags {
 		ends:   fl.choice("ends", []string{"closed-open", "closed-closed", "open-open"}, "closed-open", "end conditions: closed-open (quarter-wave), closed-closed or open-open (half-wave)"),
 		corr:   fl.choice("end-correction", []string{"none", "unflanged", "flanged"}, "unflanged", "model of each open end: none, unflanged (thin-walled pipe in free space) or flanged (pipe ending in a large flat wall)"),
 		mode:   fl.integer("mode", 1, 1, resonator.MaxMode, "harmonic number n (1 = fundamental)"),
-		length: fl.quantity("length", units.DimLength, lengthDef, "physical tube length: 1m, 147mm, 5.8in; may carry a ±: 0.25m+-1mm"),
+		length: fl.quantity("length", units.DimLength, lengthDef, "physical tube length: 1m, 500mm, 20in; may carry a ±: 0.25m+-1mm"),
 		radius: fl.quantity("radius", units.DimLength, "0m", "inner radius of the tube: 25mm, 0.5in (required for a tube)"),
 	}
 }

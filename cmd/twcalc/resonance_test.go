@@ -209,7 +209,7 @@ func TestResonanceBadInput(t *testing.T) {
 		{[]string{"resonance", "--zones", "0.1m,10mm", "--ends", "closed-open"}, "--zones"},
 		{[]string{"resonance", "--length", "1m", "--radius", "8mm", "--sweep", "pressure:1bar:2bar"}, "--sweep"},
 		{[]string{"resonance", "--length", "1m", "--radius", "8mm", "--sweep", "fraction:0:1:3"}, "--second-gas"},
-		{[]string{"diagnose", "--gas", "air", "--length", "0.147m", "--radius", "8mm", "--measured-frequency", "5000Hz"}, "--measured-frequency"},
+		{[]string{"diagnose", "--gas", "air", "--length", "0.3m", "--radius", "10mm", "--measured-frequency", "5000Hz"}, "--measured-frequency"},
 		{[]string{"diagnose", "--gas", "helium", "--length", "0.5m", "--radius", "8mm", "--measured-frequency", "500Hz", "--find", "fraction"}, "--second-gas"},
 	}
 	for _, c := range cases {
