@@ -66,8 +66,11 @@ type model struct {
 	// reference correlation of Huber et al. (2016) for carbon dioxide.
 	condCO2 bool
 	// Lennard-Jones parameters: collision diameter σ in Å and well depth
-	// ε/k in K (Svehla, NASA TR R-132, 1962). Used for the unlike
-	// interactions in mixtures and as the scaling of transportScaled.
+	// ε/k in K (Svehla, NASA TR R-132, 1962; helium's and neon's read as
+	// quoted from Svehla in the gdtk-uq species database, argon's,
+	// krypton's and xenon's from memory of Svehla's table, which Poling
+	// et al. 2001 Appendix B reproduces). Used for the unlike interactions
+	// in mixtures and as the scaling of transportScaled.
 	sigma, epsK float64
 	// validated temperature range of every model of this species, K
 	tmin, tmax float64
