@@ -2,6 +2,14 @@ package gasprops
 
 // This file holds the species table: molar masses, the models each species
 // uses and their published coefficients.
+//
+// Where the numbers were read: the NASA CEA transport fits and NASA Glenn
+// heat-capacity polynomials as transcribed (with their CEA data-file
+// references) in the public gdtk-uq species database (src/gas/
+// species-database/*.lua); the Lemmon & Jacobsen air coefficients in the
+// source of Debian's python3-iapws 1.5.2 (iapws/humidAir.py); the Huber et
+// al. CO2 coefficients recalled and then confirmed against several public
+// implementations of that paper.
 
 // transportKind says which published model gives a species' viscosity and
 // thermal conductivity.
