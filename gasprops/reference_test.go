@@ -34,11 +34,15 @@ func props(t testing.TB, m Mixture, T, p float64) Properties {
 // pressure limit where the table says P = 0, else 100 kPa (the table states
 // the difference is generally under 2 %). Read from the table as reproduced
 // at scribd.com/document/717361552 ("Viscosity of Gases CRC").
-var crcViscosity = []struct {
+// crcRow is one gas of a handbook table: temperatures in K and values in
+// the table's unit; a zero temperature means no entry.
+type crcRow struct {
 	gas  string
-	temp [5]float64 // K
-	eta  [5]float64 // µPa·s; 0 = no value in the table
-}{
+	temp [5]float64
+	val  [5]float64
+}
+
+var crcViscosity = []crcRow{ // µPa·s
 	{"helium", [5]float64{200, 300, 400, 500, 600}, [5]float64{15.1, 19.9, 24.3, 28.3, 32.2}},
 	{"neon", [5]float64{200, 300, 400, 500, 600}, [5]float64{24.1, 31.9, 38.6, 44.8, 50.6}},
 	{"argon", [5]float64{200, 300, 400, 500, 600}, [5]float64{15.9, 22.7, 28.6, 33.9, 38.8}},
@@ -54,11 +58,7 @@ var crcViscosity = []struct {
 // Conductivity of Gases", values in mW/(m·K) at 200–600 K (P = 0 or
 // 100 kPa, which the table says differ by under 1 %), as reproduced at
 // engineersedge.com/heat_transfer/thermal-conductivity-gases.htm.
-var crcConductivity = []struct {
-	gas    string
-	temp   [5]float64
-	lambda [5]float64 // mW/(m·K); 0 = no value in the table
-}{
+var crcConductivity = []crcRow{ // mW/(m·K)
 	{"helium", [5]float64{200, 300, 400, 500, 600}, [5]float64{119.3, 156.7, 190.6, 222.3, 252.4}},
 	{"neon", [5]float64{200, 300, 400, 500, 600}, [5]float64{37.6, 49.8, 60.3, 69.9, 78.7}},
 	{"argon", [5]float64{200, 300, 400, 500, 600}, [5]float64{12.4, 17.9, 22.6, 26.8, 30.6}},
@@ -78,36 +78,31 @@ func tableTol(v float64) float64 {
 	return 0.02 + half/v
 }
 
-func TestViscosityAgainstCRC(t *testing.T) {
-	t.Parallel()
-	for _, c := range crcViscosity {
+// checkCRC compares one property, scaled to the table's unit, with a
+// handbook table at 1 bar.
+func checkCRC(t *testing.T, what string, rows []crcRow, get func(Properties) float64) {
+	for _, c := range rows {
 		m := Pure(mustLookup(t, c.gas))
 		for i, T := range c.temp {
 			if T == 0 {
 				continue
 			}
-			got := props(t, m, T, 1e5).Viscosity * 1e6
-			if !scalar.EqualWithinRel(got, c.eta[i], tableTol(c.eta[i])) {
-				t.Errorf("%s viscosity at %g K = %.3f µPa·s, CRC table %.1f (%.2f %%)", c.gas, T, got, c.eta[i], 100*(got/c.eta[i]-1))
+			got := get(props(t, m, T, 1e5))
+			if !scalar.EqualWithinRel(got, c.val[i], tableTol(c.val[i])) {
+				t.Errorf("%s %s at %g K = %.3f, CRC table %.1f (%.2f %%)", c.gas, what, T, got, c.val[i], 100*(got/c.val[i]-1))
 			}
 		}
 	}
 }
 
+func TestViscosityAgainstCRC(t *testing.T) {
+	t.Parallel()
+	checkCRC(t, "viscosity (µPa·s)", crcViscosity, func(p Properties) float64 { return p.Viscosity * 1e6 })
+}
+
 func TestConductivityAgainstCRC(t *testing.T) {
 	t.Parallel()
-	for _, c := range crcConductivity {
-		m := Pure(mustLookup(t, c.gas))
-		for i, T := range c.temp {
-			if T == 0 {
-				continue
-			}
-			got := props(t, m, T, 1e5).ThermalConductivity * 1e3
-			if !scalar.EqualWithinRel(got, c.lambda[i], tableTol(c.lambda[i])) {
-				t.Errorf("%s conductivity at %g K = %.3f mW/(m·K), CRC table %.1f (%.2f %%)", c.gas, T, got, c.lambda[i], 100*(got/c.lambda[i]-1))
-			}
-		}
-	}
+	checkCRC(t, "conductivity (mW/(m·K))", crcConductivity, func(p Properties) float64 { return p.ThermalConductivity * 1e3 })
 }
 
 // TestHeliumPetersen checks helium up to 1000 K against the correlations of
