@@ -1,0 +1,59 @@
+package ui
+
+import (
+	"image"
+	"strings"
+	"testing"
+
+	"tubewright/calc/pore"
+	"tubewright/calc/safety"
+	"tubewright/calc/units"
+	"tubewright/gasprops"
+)
+
+// TestPlacementScreen types a stack position and checks kx and the
+// displacement against calc/pore (whose formulas are checked there), and
+// that the hot-parts caution is on screen with the critical temperature
+// difference.
+func TestPlacementScreen(t *testing.T) {
+	env := NewEnv(nil)
+	s := newPlacementScreen(env).(*placementScreen)
+	h := newHarness(t, image.Pt(412, 3000), s.Layout)
+	h.retype("Stack centre, from the closed end (pressure antinode)", "0.3 m", "1.2 m")
+
+	m, _ := gasprops.ParseMixture("helium")
+	p, err := m.Properties(300, 1e6, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want, err := pore.PlaceStack(pore.PlacementInput{SoundSpeed: p.SoundSpeed, Density: p.Density, Gamma: p.Gamma,
+		MeanTemperature: 300, MeanPressure: 1e6, Frequency: 100, Centre: 1.2, Length: 0.08, DriveRatio: 0.03})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, _ := h.shown("kx of the stack centre"); got != units.Format(want.KX, units.DimNone) {
+		t.Errorf("kx shown %q, want %q", got, units.Format(want.KX, units.DimNone))
+	}
+	if got, _ := h.shown("Gas displacement amplitude ξ"); got != mustMM(t, want.Displacement) {
+		t.Errorf("ξ shown %q, want %q", got, mustMM(t, want.Displacement))
+	}
+	if _, ok := h.shown("Critical temperature difference across the stack"); !ok {
+		t.Fatal("no critical temperature difference")
+	}
+	all := nodeText(h.nodes()[0])
+	for _, n := range h.nodes() {
+		all += "\n" + n.Desc.Label
+	}
+	if !strings.Contains(all, safety.CautionHotSurfaces[:30]) {
+		t.Error("the hot-parts caution is not on screen with the critical temperature difference")
+	}
+
+	// a drive ratio of 150 % is refused and nothing stale stays
+	h.retype("Drive ratio |p1|/pm at the pressure antinode", "3 %", "150 %")
+	if f := s.results.Failure(); !strings.Contains(f, "drive ratio") {
+		t.Fatalf("failure for 150 %% drive: %q", f)
+	}
+	if _, ok := h.shown("kx of the stack centre"); ok {
+		t.Fatal("kx still shown after a bad drive ratio")
+	}
+}
