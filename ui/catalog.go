@@ -14,6 +14,8 @@ type Entry struct {
 // per screen; each screen's author adds only their own line.
 var catalog = []Entry{
 	{ID: "gas", Title: "Working gas", Summary: "Density, sound speed, viscosity, conductivity and Prandtl number of a gas or noble-gas mixture at your temperature and pressure", New: newGasScreen},
+	{ID: "resonance", Title: "Tube resonance", Summary: "Frequency from length or length from frequency of a quarter- or half-wave tube, with end corrections, Q and bandwidth", New: newResonanceScreen},
+	{ID: "diagnose", Title: "What the pitch says", Summary: "Gas temperature or mixture fraction from a measured resonance frequency, with its ±", New: newDiagnoseScreen},
 	{ID: "depths", Title: "Penetration depths", Summary: "Thermal and viscous penetration depths at your gas, temperature, pressure and frequency, with the pore sizes they call for", New: newDepthsScreen},
 	{ID: "pores", Title: "Pores and packing", Summary: "Plates, pores, pins, screens, metal wool or honeycomb: porosity, hydraulic radius, Rott's functions and a verdict for a stack or regenerator", New: newPoresScreen},
 	{ID: "placement", Title: "Stack placement", Summary: "Where a short stack sits in the standing wave: heat-flux and loss factors, critical temperature difference, gas displacement and exchanger length", New: newPlacementScreen},

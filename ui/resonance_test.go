@@ -1,0 +1,98 @@
+package ui
+
+import (
+	"image"
+	"os"
+	"strings"
+	"testing"
+
+	"tubewright/calc/resonator"
+	"tubewright/calc/units"
+	"tubewright/gasprops"
+)
+
+// TestScreenshotResonanceTall pictures the whole tube-resonance and
+// diagnosis pages on a tall phone and a desktop window, to look at the
+// results and the plot below the fold (SHOT_DIR to keep the files).
+func TestScreenshotResonanceTall(t *testing.T) {
+	if os.Getenv("SHOT_DIR") == "" {
+		t.Skip("set SHOT_DIR to look at the full pages")
+	}
+	for _, id := range []string{"resonance", "diagnose"} {
+		a := NewApp(nil)
+		a.Open(id)
+		shootApp(t, id+"-tallphone", image.Pt(412, 2900), a)
+	}
+}
+
+// wantTube formats the frequency the resonance screen should show, computed
+// with calc/resonator directly (the screen must add nothing of its own).
+func wantTube(t *testing.T, length, radius float64, uLength float64) string {
+	t.Helper()
+	air, err := gasprops.ParseMixture("air")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: length, Radius: radius},
+		Gas: air, Temperature: 293.15, Pressure: units.StandardAtmosphere, U: resonator.Uncertainty{Length: uLength}}
+	r, err := s.SolveFrequency()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if uLength > 0 {
+		return units.FormatPM(r.Frequency, r.FrequencySigma, units.DimFrequency)
+	}
+	return units.Format(r.Frequency, units.DimFrequency)
+}
+
+// TestResonanceScreenTyping drives the tube-resonance screen through the
+// input router: type a length, see the frequency change to what the
+// calculator gives; a ± on the length shows a ± on the frequency; a zero
+// length is refused under its field with no number shown; the carry button
+// puts the frequency on the Bench. The physics is calc/resonator's (checked
+// there); this checks that the screen passes the typed values through.
+func TestResonanceScreenTyping(t *testing.T) {
+	env := NewEnv(nil)
+	s := newResonanceScreen(env)
+	h := newHarness(t, image.Pt(412, 3200), s.Layout)
+
+	// starting values: 500 mm, 12 mm, air, 20 degC = 293.15 K, 1 atm
+	got, ok := h.shown("Resonance frequency")
+	if want := wantTube(t, 0.5, 0.012, 0); !ok || got != want {
+		t.Fatalf("initial frequency shown %q (found %v), want %q", got, ok, want)
+	}
+	before := got
+
+	h.retype("Tube length", "500 mm", "1 m")
+	got, _ = h.shown("Resonance frequency")
+	if want := wantTube(t, 1, 0.012, 0); got != want || got == before {
+		t.Fatalf("after typing 1 m: shown %q, want %q (was %q)", got, want, before)
+	}
+	if a, _ := h.shown("Answer"); a != got {
+		t.Errorf("headline %q differs from the result row %q", a, got)
+	}
+
+	h.retype("Tube length", "1 m", "1 m ± 2 mm")
+	got, _ = h.shown("Resonance frequency")
+	if want := wantTube(t, 1, 0.012, 0.002); got != want || !strings.Contains(got, "±") {
+		t.Fatalf("with a ± on the length: shown %q, want %q", got, want)
+	}
+
+	h.retype("Tube length", "1 m ± 2 mm", "0 m")
+	if _, ok := h.shown("Resonance frequency"); ok {
+		t.Fatal("a zero length still shows a frequency")
+	}
+	if e := s.(*resonanceScreen).tube.length.ErrorText(); !strings.Contains(e, "length") {
+		t.Fatalf("error under the length field %q does not name the length", e)
+	}
+	if _, ok := h.byDesc("No result"); !ok {
+		t.Fatal("no failure line for a zero length")
+	}
+
+	h.retype("Tube length", "0 m", "2 m")
+	h.tap("Use this frequency on other screens")
+	want := wantTube(t, 2, 0.012, 0)
+	if got := units.Format(env.Bench.Frequency, units.DimFrequency); got != want || env.Bench.FrequencyFrom != "Tube resonance" {
+		t.Fatalf("Bench has %q from %q, want %q from Tube resonance", got, env.Bench.FrequencyFrom, want)
+	}
+}
