@@ -190,11 +190,10 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 	eta, lam := m.mixTransport(t)
 	rho := pa * mm / (R * t)
 	c2 := gamma * R * t / mm
-	if nonIdeal && m.n == 1 {
-		v := &m.comps[0].Species.m.virial
-		if v.kind != virialNone {
-			rho /= 1 + v.b(t)*pa/(R*t)
-			c2 *= 1 + v.acousticVirial(t, gamma)*pa/(R*t)
+	if nonIdeal {
+		if b, d1, d2, ok := m.virialB(t); ok {
+			rho /= 1 + b*pa/(R*t)
+			c2 *= 1 + acousticVirial(t, gamma, b, d1, d2)*pa/(R*t)
 		}
 	}
 	pr := Properties{

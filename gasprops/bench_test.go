@@ -29,6 +29,7 @@ func BenchmarkProperties(b *testing.B) {
 		{"carbon-dioxide", Pure(carbonDioxide), nil, 1e5},
 		{"helium-nonideal", Pure(helium), &Options{NonIdeal: true}, 10e5},
 		{"helium-xenon", heXe, nil, 10e5},
+		{"helium-xenon-nonideal", heXe, &Options{NonIdeal: true}, 10e5},
 		{"five-noble", five, nil, 10e5},
 	}
 	for _, c := range cases {

@@ -90,7 +90,7 @@ func (m *Mixture) checkPressure(t, pa float64, nonIdeal bool, warn []string) ([]
 	switch {
 	case nonIdeal && math.Abs(d) > nonIdealLimit:
 		e := units.NewRangeError("pressure", pa, 0, nonIdealLimit*R*t/math.Abs(b), "Pa")
-		e.Why = "second-virial correction of the " + m.comps[0].Species.m.source
+		e.Why = "second-virial correction for " + m.String()
 		return nil, e
 	case math.Abs(d) > nonIdealWarnAt && !nonIdeal:
 		warn = append(warn, "at this pressure the real gas departs from the ideal gas by about "+

@@ -38,10 +38,11 @@
 //
 // Non-ideal option (Options.NonIdeal): second virial coefficient B(T) for
 // helium (Petersen, Risø Report 224, 1970) and the other gases except
-// hydrogen (Tsonopoulos, AIChE J. 20, 263, 1974); density from
+// hydrogen (Tsonopoulos, AIChE J. 20, 263, 1974); for noble-gas mixtures
+// B = Σ x_i x_j B_ij with Lennard-Jones cross coefficients. Density from
 // Z = 1 + Bp/(RT), sound speed with the second acoustic virial
-// coefficient. Mixtures and hydrogen stay ideal (SecondVirial reports
-// ok = false).
+// coefficient; cp and transport stay ideal. Hydrogen stays ideal
+// (SecondVirial reports ok = false, and the option says so).
 //
 // # Ranges and accuracy
 //

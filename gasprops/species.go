@@ -80,6 +80,10 @@ type model struct {
 	// et al. 2001 Appendix B reproduces). Used for the unlike interactions
 	// in mixtures and as the scaling of transportScaled.
 	sigma, epsK float64
+	// Lennard-Jones parameters fitted to second virial coefficients
+	// (Hirschfelder, Curtiss & Bird 1954, Table I-A, from memory), Å and
+	// K: used only for the cross coefficients B_ij of noble-gas mixtures.
+	vsigma, vepsK float64
 	// validated temperature range of every model of this species, K
 	tmin, tmax float64
 	// source names the models for messages: "helium model (NASA CEA fits)"

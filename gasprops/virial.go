@@ -80,29 +80,58 @@ func init() {
 	nitrogen.m.virial = virialModel{virialTsonopoulos, 126.192, 3.3958e6, 0.0372}
 	air.m.virial = virialModel{virialTsonopoulos, 132.5306, 3.786e6, 0.0335}
 	carbonDioxide.m.virial = virialModel{virialTsonopoulos, 304.1282, 7.3773e6, 0.22394}
+	helium.m.vsigma, helium.m.vepsK = 2.556, 10.22
+	neon.m.vsigma, neon.m.vepsK = 2.749, 35.60
+	argon.m.vsigma, argon.m.vepsK = 3.405, 119.8
+	krypton.m.vsigma, krypton.m.vepsK = 3.60, 171.0
+	xenon.m.vsigma, xenon.m.vepsK = 4.10, 221.0
 	// hydrogen: no correlation offered; Tsonopoulos overestimates B of
 	// this quantum gas by about a third near room temperature.
 }
 
 // SecondVirial returns the second virial coefficient B(T) of the gas in
 // m³/mol, and ok = false when the package has no correlation for it
-// (hydrogen, and mixtures of more than one species: cross coefficients are
-// not modelled). T is in K; outside the species' model range the
-// correlation is extrapolated.
+// (hydrogen, and any mixture containing a gas without one). T is in K;
+// outside a species' model range the correlation is extrapolated.
+//
+// A mixture's coefficient is B = Σ_i Σ_j x_i x_j B_ij (Hirschfelder,
+// Curtiss & Bird 1954, eq. 3.6-7) with the pure B_ii above and the cross
+// B_ij of the Lennard-Jones potential (crossVirial).
 func (m Mixture) SecondVirial(T float64) (B float64, ok bool) {
-	if m.n != 1 || !(T > 0) {
-		return 0, false
+	b, _, _, ok := m.virialB(T)
+	return b, ok
+}
+
+// virialB returns B(T) and its first two temperature derivatives.
+func (m *Mixture) virialB(T float64) (b, d1, d2 float64, ok bool) {
+	if m.n == 0 || !(T > 0) || math.IsInf(T, 1) {
+		return 0, 0, 0, false
 	}
-	v := &m.comps[0].Species.m.virial
-	if v.kind == virialNone {
-		return 0, false
+	for i := 0; i < m.n; i++ {
+		ci := &m.comps[i]
+		v := &ci.Species.m.virial
+		if v.kind == virialNone {
+			return 0, 0, 0, false
+		}
+		bi, bi1, bi2 := v.bd(T)
+		w := ci.X * ci.X
+		b, d1, d2 = b+w*bi, d1+w*bi1, d2+w*bi2
+		for j := i + 1; j < m.n; j++ {
+			cj := &m.comps[j]
+			bij, bij1, bij2, okij := crossVirial(ci.Species, cj.Species, T)
+			if !okij {
+				return 0, 0, 0, false
+			}
+			w := 2 * ci.X * cj.X
+			b, d1, d2 = b+w*bij, d1+w*bij1, d2+w*bij2
+		}
 	}
-	return v.b(T), true
+	return b, d1, d2, true
 }
 
 // Compressibility returns the compressibility factor Z = pV/(nRT) of the
-// gas at temperature T (K) and absolute pressure p (Pa), truncated after
-// the second virial term in pressure form,
+// gas (pure or mixture) at temperature T (K) and absolute pressure p (Pa),
+// truncated after the second virial term in pressure form,
 //
 //	Z = 1 + B p/(R T),
 //
@@ -122,9 +151,9 @@ func (m Mixture) Compressibility(T, p float64) float64 {
 //	β_a = 2B + 2(γ0−1) T dB/dT + ((γ0−1)²/γ0) T² d²B/dT²   (m³/mol)
 //
 // so that c² = (γ0 R T/M)(1 + β_a p/(R T)) to first order in pressure
-// (Trusler, Physical Acoustics and Metrology of Fluids, 1991, ch. 3).
-func (v *virialModel) acousticVirial(T, gamma0 float64) float64 {
-	b0, d1, d2 := v.bd(T)
+// (Trusler, Physical Acoustics and Metrology of Fluids, 1991, ch. 3),
+// from B and its derivatives.
+func acousticVirial(T, gamma0, b0, d1, d2 float64) float64 {
 	g1 := gamma0 - 1
 	return 2*b0 + 2*g1*T*d1 + g1*g1/gamma0*T*T*d2
 }
