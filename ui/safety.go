@@ -1,0 +1,491 @@
+package ui
+
+import (
+	"fmt"
+	"image"
+	"strings"
+	"time"
+
+	"gioui.org/layout"
+	"gioui.org/op"
+	"gioui.org/unit"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/safety"
+	"tubewright/store"
+)
+
+// safetyScreen walks the safety pass before pressurising: one checklist
+// item at a time with its why, the inline calculator where a number
+// decides it, a tick and a note; then a review page that saves the pass in
+// the bench log. The general caution is at the top of every step, and
+// every calculator carries its own caution box beside its numbers.
+type safetyScreen struct {
+	env     *Env
+	page    *Page
+	pass    *safety.Pass
+	step    int // 0..len(items)-1, len(items) = review
+	ticks   []widget.Bool
+	notes   []widget.Editor
+	calcs   []inlineCalc // per item, nil where no number decides it
+	general *Caution
+
+	prev, next, review widget.Clickable
+	jumps              []widget.Clickable
+	save, setAside     widget.Clickable
+	openLog, restart   widget.Clickable
+	rig                widget.Editor
+
+	wall     *wallCalc
+	relief   *reliefCalc
+	test     *testCalc
+	cylinder *cylinderCalc
+	oxygen   *oxygenCalc
+
+	status    string // after a save attempt
+	statusBad bool
+	damaged   bool // the last save met a damaged log
+	saved     bool // the current pass was saved
+	now       func() time.Time
+}
+
+// safetyTitle is the screen's title.
+const safetyTitle = "Safety pass"
+
+// newSafetyScreen builds the safety pass.
+func newSafetyScreen(env *Env) Screen {
+	p := safety.NewPass()
+	n := len(p.Items)
+	s := &safetyScreen{
+		env:     env,
+		page:    NewPage(env),
+		pass:    p,
+		ticks:   make([]widget.Bool, n),
+		notes:   make([]widget.Editor, n),
+		calcs:   make([]inlineCalc, n),
+		jumps:   make([]widget.Clickable, n),
+		general: NewCaution(env, "Before you pressurise", safety.CautionGeneral),
+		now:     time.Now,
+	}
+	s.rig.SingleLine = true
+	for i, it := range p.Items {
+		switch it.Calc {
+		case safety.CalcWallStress:
+			s.wall = newWallCalc(env)
+			s.calcs[i] = s.wall
+		case safety.CalcRelief:
+			s.relief = newReliefCalc(env)
+			s.calcs[i] = s.relief
+		case safety.CalcTestEnergy:
+			s.test = newTestCalc(env)
+			s.calcs[i] = s.test
+		case safety.CalcCylinder:
+			s.cylinder = newCylinderCalc(env)
+			s.calcs[i] = s.cylinder
+		case safety.CalcOxygen:
+			s.oxygen = newOxygenCalc(env)
+			s.calcs[i] = s.oxygen
+		case safety.CalcSound:
+			s.calcs[i] = newSoundCalc(env)
+		}
+	}
+	return s
+}
+
+// Title implements Screen.
+func (s *safetyScreen) Title() string { return safetyTitle }
+
+// items returns the number of checklist items.
+func (s *safetyScreen) items() int { return len(s.pass.Items) }
+
+// goTo shows step i, carrying numbers from earlier items into fields the
+// user has not typed in: the MAWP of the wall item into the relief and
+// test items, the cylinder's release into the oxygen item.
+func (s *safetyScreen) goTo(i int) {
+	s.step = max(0, min(i, s.items()))
+	if s.wall != nil && s.wall.mawpOK {
+		// The vessel's MAWP is its nameplate rating, which the user types;
+		// until then the lower of the design pressure and the shell's code
+		// MAWP stands in, the safe side for the relief check.
+		carry := min(s.wall.mawp, s.wall.design)
+		for _, f := range []*Field{fieldOf(s.relief, "mawp"), fieldOf(s.test, "mawp")} {
+			if f != nil && strings.TrimSpace(f.Text()) == "" {
+				f.SetText(gaugeText(carry))
+			}
+		}
+		if s.relief != nil {
+			s.relief.dirty = true
+		}
+		if s.test != nil {
+			s.test.dirty = true
+		}
+	}
+	if s.cylinder != nil && s.oxygen != nil && s.cylinder.ok && !s.oxygen.releaseTyped {
+		s.oxygen.setRelease(s.cylinder.release)
+	}
+	s.env.Invalidate()
+}
+
+// fieldOf returns the MAWP field of the relief or test calculator.
+func fieldOf(c inlineCalc, which string) *Field {
+	switch c := c.(type) {
+	case *reliefCalc:
+		if c != nil && which == "mawp" {
+			return c.mawp
+		}
+	case *testCalc:
+		if c != nil && which == "mawp" {
+			return c.mawp
+		}
+	}
+	return nil
+}
+
+// update handles the controls of the step on show.
+func (s *safetyScreen) update(gtx layout.Context) {
+	for i := range s.ticks {
+		if s.ticks[i].Update(gtx) {
+			s.pass.Done[i] = s.ticks[i].Value
+			s.saved = false
+		}
+	}
+	for i := range s.notes {
+		for {
+			ev, ok := s.notes[i].Update(gtx)
+			if !ok {
+				break
+			}
+			if _, ok := ev.(widget.ChangeEvent); ok {
+				s.pass.Notes[i] = s.notes[i].Text()
+				s.saved = false
+			}
+		}
+	}
+	if s.step < s.items() {
+		if c := s.calcs[s.step]; c != nil {
+			c.Update(gtx)
+		}
+	}
+	if s.prev.Clicked(gtx) {
+		s.goTo(s.step - 1)
+	}
+	if s.next.Clicked(gtx) {
+		s.goTo(s.step + 1)
+	}
+	if s.review.Clicked(gtx) {
+		s.goTo(s.items())
+	}
+	for i := range s.jumps {
+		if s.jumps[i].Clicked(gtx) {
+			s.goTo(i)
+		}
+	}
+	if s.save.Clicked(gtx) {
+		s.saveTo(false)
+	}
+	if s.setAside.Clicked(gtx) {
+		s.saveTo(true)
+	}
+	if s.openLog.Clicked(gtx) {
+		s.env.Open("benchlog")
+	}
+	if s.restart.Clicked(gtx) {
+		s.reset()
+	}
+}
+
+// reset starts a new pass: ticks and notes cleared, calculators kept.
+func (s *safetyScreen) reset() {
+	s.pass.Reset()
+	for i := range s.ticks {
+		s.ticks[i].Value = false
+		s.notes[i].SetText("")
+	}
+	s.status, s.statusBad, s.damaged, s.saved = "", false, false, false
+	s.goTo(0)
+}
+
+// buildPass turns the current state into a bench-log pass.
+func (s *safetyScreen) buildPass() store.Pass {
+	p := store.Pass{
+		Time:  s.now(),
+		Title: "Safety pass before pressurising",
+		Rig:   strings.TrimSpace(s.rig.Text()),
+	}
+	seen := map[string]bool{safety.CautionGeneral: true}
+	p.Cautions = []string{safety.CautionGeneral}
+	addCaution := func(c string) {
+		if !seen[c] {
+			seen[c] = true
+			p.Cautions = append(p.Cautions, c)
+		}
+	}
+	for i, it := range s.pass.Items {
+		item := store.Item{ID: it.ID, Title: it.Title, Done: s.pass.Done[i], Note: strings.TrimSpace(s.pass.Notes[i])}
+		if c := s.calcs[i]; c != nil {
+			if nums := c.Numbers(); len(nums) > 0 {
+				item.Numbers = nums
+				item.Cautions = c.Cautions()
+			}
+		}
+		for _, c := range it.Cautions {
+			addCaution(c)
+		}
+		p.Items = append(p.Items, item)
+	}
+	return p
+}
+
+// saveTo saves the pass in the bench log. With aside, a damaged log file
+// is first renamed out of the way (the user chose that).
+func (s *safetyScreen) saveTo(aside bool) {
+	b := bookFor(s.env)
+	msg := ""
+	if aside {
+		m, err := b.SetAside(s.now())
+		if err != nil {
+			s.status, s.statusBad = "Could not set the damaged log aside: "+err.Error(), true
+			return
+		}
+		msg = m + " "
+	}
+	p := s.buildPass()
+	if err := b.Append(p); err != nil {
+		s.damaged = isDamaged(err)
+		s.status, s.statusBad = "Not saved: "+err.Error(), true
+		if s.damaged {
+			s.status += ". You can keep the damaged file aside (renamed, not deleted) and save into a new log."
+		}
+		return
+	}
+	s.damaged, s.statusBad, s.saved = false, false, true
+	s.status = msg + fmt.Sprintf("Saved %s with %d of %d items ticked. %s.", p.Time.Format("2006-01-02 15:04"), s.pass.Ticked(), s.items(), b.Where())
+}
+
+// Layout implements Screen.
+func (s *safetyScreen) Layout(gtx layout.Context) layout.Dimensions {
+	s.update(gtx)
+	ws := []layout.Widget{s.general.Layout, s.progress}
+	if s.step >= s.items() {
+		ws = append(ws, s.reviewWidgets()...)
+	} else {
+		ws = append(ws, s.itemWidgets(s.step)...)
+	}
+	ws = append(ws, s.navigation)
+	return s.page.Layout(gtx, ws...)
+}
+
+// progress is the "Item 3 of 11 · 2 ticked" line.
+func (s *safetyScreen) progress(gtx layout.Context) layout.Dimensions {
+	txt := fmt.Sprintf("Item %d of %d · %d ticked", s.step+1, s.items(), s.pass.Ticked())
+	if s.step >= s.items() {
+		txt = fmt.Sprintf("Review · %d of %d ticked", s.pass.Ticked(), s.items())
+	}
+	return Note(s.env, txt)(gtx)
+}
+
+// itemWidgets draws checklist item i.
+func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
+	it := s.pass.Items[i]
+	ws := []layout.Widget{Heading(s.env, it.Title), Para(s.env, it.Why)}
+	if c := s.calcs[i]; c != nil {
+		in := c.Inputs()
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, in) })
+		ws = append(ws, c.Outputs()...)
+	} else if len(it.Cautions) > 0 {
+		ws = append(ws, NewCaution(s.env, "", it.Cautions...).Layout)
+	}
+	ws = append(ws,
+		func(gtx layout.Context) layout.Dimensions {
+			cb := material.CheckBox(s.env.Theme, &s.ticks[i], "Done: "+it.Title)
+			cb.Color = s.env.Colors.Text
+			cb.IconColor = s.env.Colors.Accent
+			return cb.Layout(gtx)
+		},
+		s.noteEditor(i),
+	)
+	return ws
+}
+
+// noteEditor draws the optional note of item i.
+func (s *safetyScreen) noteEditor(i int) layout.Widget {
+	return func(gtx layout.Context) layout.Dimensions {
+		return s.textBox(gtx, &s.notes[i], "Note (optional)", "e.g. relief valve tag, test date, who checked")
+	}
+}
+
+// textBox draws a labelled free-text editor.
+func (s *safetyScreen) textBox(gtx layout.Context, ed *widget.Editor, label, hint string) layout.Dimensions {
+	th, c := s.env.Theme, s.env.Colors
+	gtx.Constraints.Max.X = min(gtx.Constraints.Max.X, gtx.Dp(fieldWidth))
+	gtx.Constraints.Min.X = gtx.Constraints.Max.X
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			l := material.Body2(th, label)
+			l.Font.Weight = 600
+			l.Color = c.Text
+			return l.Layout(gtx)
+		}),
+		layout.Rigid(layout.Spacer{Height: 4}.Layout),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			edge := c.Divider
+			if gtx.Focused(ed) {
+				edge = c.Accent
+			}
+			return background(gtx, c.Surface, edge, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
+				return layout.UniformInset(12).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					e := material.Editor(th, ed, hint)
+					e.Color, e.HintColor = c.Text, c.Muted
+					return Described(label, e.Layout)(gtx)
+				})
+			})
+		}),
+	)
+}
+
+// reviewWidgets draws the review page: every item with its tick, the rig
+// name, the save button and the result of the last save.
+func (s *safetyScreen) reviewWidgets() []layout.Widget {
+	ws := []layout.Widget{Heading(s.env, "Review and save")}
+	if open := s.items() - s.pass.Ticked(); open > 0 {
+		what := fmt.Sprintf("%d items are", open)
+		if open == 1 {
+			what = "1 item is"
+		}
+		ws = append(ws, Para(s.env, what+" not ticked (tap one to go back to it). The pass is saved as it is, with the open items marked; do not pressurise until they are done."))
+	} else {
+		ws = append(ws, Para(s.env, "Every item is ticked. Save the pass to keep a dated record in the bench log."))
+	}
+	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+		return s.textBox(gtx, &s.rig, "Rig name (optional)", "e.g. helium engine, bench 2")
+	})
+	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+		return s.button(gtx, &s.save, "Save to the bench log", true)
+	})
+	if s.status != "" {
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			l := material.Body1(s.env.Theme, s.status)
+			l.Color = s.env.Colors.Text
+			if s.statusBad {
+				l.Color = s.env.Colors.Error
+			}
+			return Described("Save status", l.Layout)(gtx)
+		})
+	}
+	if s.damaged {
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return s.button(gtx, &s.setAside, "Keep the damaged log aside and save", false)
+		})
+	}
+	if s.saved {
+		ws = append(ws,
+			func(gtx layout.Context) layout.Dimensions {
+				return s.button(gtx, &s.openLog, "Open the bench log", false)
+			},
+			func(gtx layout.Context) layout.Dimensions {
+				return s.button(gtx, &s.restart, "Start a new pass", false)
+			},
+		)
+	}
+	for i, it := range s.pass.Items {
+		state := "open"
+		if s.pass.Done[i] {
+			state = "done"
+		}
+		label := fmt.Sprintf("%d. %s · %s", i+1, it.Title, state)
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return s.jumps[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				gtx.Constraints.Min.X = gtx.Constraints.Max.X
+				return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					l := material.Body1(s.env.Theme, label)
+					l.Color = s.env.Colors.Text
+					if !s.pass.Done[i] {
+						l.Color = s.env.Colors.Error
+					}
+					return l.Layout(gtx)
+				})
+			})
+		})
+	}
+	ws = append(ws, Note(s.env, bookFor(s.env).Where()))
+	return ws
+}
+
+// navigation is the Previous / Next (or Review) row.
+func (s *safetyScreen) navigation(gtx layout.Context) layout.Dimensions {
+	var children []layout.FlexChild
+	if s.step > 0 {
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return s.button(gtx, &s.prev, "‹ Previous", false)
+		}), layout.Rigid(layout.Spacer{Width: 12}.Layout))
+	}
+	switch {
+	case s.step < s.items()-1:
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return s.button(gtx, &s.next, "Next ›", true)
+		}), layout.Rigid(layout.Spacer{Width: 12}.Layout), layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return s.button(gtx, &s.review, "Review", false)
+		}))
+	case s.step == s.items()-1:
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return s.button(gtx, &s.next, "Review and save ›", true)
+		}))
+	}
+	return layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)
+}
+
+// button draws a filled (primary) or outlined button.
+func (s *safetyScreen) button(gtx layout.Context, c *widget.Clickable, label string, primary bool) layout.Dimensions {
+	return safetyButton(s.env, gtx, c, label, primary)
+}
+
+// safetyButton draws a filled (primary) or outlined button of the safety
+// screens.
+func safetyButton(env *Env, gtx layout.Context, c *widget.Clickable, label string, primary bool) layout.Dimensions {
+	b := material.Button(env.Theme, c, label)
+	b.TextSize = unit.Sp(16)
+	if !primary {
+		b.Background = env.Colors.Selected
+		b.Color = env.Colors.Text
+	}
+	return b.Layout(gtx)
+}
+
+// gridMinCell is the narrowest column of the inputs grid.
+const gridMinCell = unit.Dp(300)
+
+// grid lays out ws in two columns when the width allows two cells of at
+// least gridMinCell, else in one; rows are as tall as their tallest cell.
+func grid(gtx layout.Context, ws []layout.Widget) layout.Dimensions {
+	gap := gtx.Dp(16)
+	cols := 1
+	if gtx.Constraints.Max.X >= 2*gtx.Dp(gridMinCell)+gap {
+		cols = 2
+	}
+	cellW := (gtx.Constraints.Max.X - (cols-1)*gap) / cols
+	y := 0
+	for row := 0; row*cols < len(ws); row++ {
+		h := 0
+		for col := 0; col < cols; col++ {
+			i := row*cols + col
+			if i >= len(ws) {
+				break
+			}
+			cgtx := gtx
+			cgtx.Constraints = layout.Constraints{Max: image.Pt(cellW, gtx.Constraints.Max.Y)}
+			m := op.Record(gtx.Ops)
+			d := ws[i](cgtx)
+			call := m.Stop()
+			st := op.Offset(image.Pt(col*(cellW+gap), y)).Push(gtx.Ops)
+			call.Add(gtx.Ops)
+			st.Pop()
+			h = max(h, d.Size.Y)
+		}
+		y += h
+		if (row+1)*cols < len(ws) {
+			y += gtx.Dp(12)
+		}
+	}
+	return layout.Dimensions{Size: image.Pt(gtx.Constraints.Max.X, y)}
+}

@@ -1,0 +1,284 @@
+package ui
+
+import (
+	"image"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"tubewright/calc/safety"
+	"tubewright/store"
+)
+
+// tallPhone is a phone's width with room for a whole step, so that tests
+// need not scroll (the list lays out only what is visible).
+var tallPhone = image.Pt(412, 4000)
+
+// hasLabel reports whether some node's label contains text.
+func (h *harness) hasLabel(text string) bool {
+	for _, n := range h.nodes() {
+		if strings.Contains(n.Desc.Label, text) {
+			return true
+		}
+	}
+	return false
+}
+
+// safetyApp returns an app with its bench log at path, showing screen id.
+func safetyApp(t *testing.T, path, id string, size image.Point) (*App, *harness) {
+	t.Helper()
+	a := NewApp(nil)
+	useBookAt(a.Env(), path)
+	a.Open(id)
+	h := newHarness(t, size, a.Layout)
+	h.frames(2)
+	return a, h
+}
+
+// TestSafetyCautionOnEveryStep: the general caution is on every step of the
+// pass and on the review page, and each inline calculator shows its own
+// caution box beside its numbers.
+func TestSafetyCautionOnEveryStep(t *testing.T) {
+	a, h := safetyApp(t, filepath.Join(t.TempDir(), "benchlog.json"), "safety", tallPhone)
+	s := a.Screen("safety").(*safetyScreen)
+	for i := 0; i <= s.items(); i++ {
+		if s.step != i {
+			t.Fatalf("on step %d, want %d", s.step, i)
+		}
+		if !h.hasLabel(safety.CautionGeneral) {
+			t.Errorf("step %d: general caution missing:\n%s", i, h.dump())
+		}
+		if i < s.items() {
+			if c := s.calcs[i]; c != nil {
+				for _, line := range c.Cautions() {
+					if !h.hasLabel(line) {
+						t.Errorf("step %d (%s): caution %q not shown beside the numbers", i, s.pass.Items[i].ID, line[:30])
+					}
+				}
+			}
+			if i == s.items()-1 {
+				h.tap("Review and save ›")
+			} else {
+				h.tap("Next ›")
+			}
+		}
+	}
+}
+
+// TestBenchLogCaution: the bench-log screen shows the general caution when
+// empty, with passes and with a damaged file.
+func TestBenchLogCaution(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "benchlog.json")
+	check := func(state string) {
+		t.Helper()
+		_, h := safetyApp(t, path, "benchlog", image.Pt(412, 915))
+		if !h.hasLabel(safety.CautionGeneral) {
+			t.Errorf("%s: caution missing:\n%s", state, h.dump())
+		}
+	}
+	check("empty")
+	p := store.Pass{Time: time.Date(2026, 12, 1, 21, 0, 0, 0, time.UTC), Items: []store.Item{{ID: "rating", Title: "Vessel rating", Done: true}}, Cautions: []string{safety.CautionGeneral}}
+	if err := store.Append(path, p); err != nil {
+		t.Fatal(err)
+	}
+	check("one pass")
+	if err := os.WriteFile(path, []byte(`{"format":"tubewright-benchlog","vers`), 0o600); err != nil {
+		t.Fatal(err)
+	}
+	check("damaged")
+}
+
+// TestSafetyWalkToSavedLog walks the pass on a phone-width window from the
+// first item to a saved bench-log entry, with numbers from the wall item,
+// then opens the bench log and exports the pass as text.
+func TestSafetyWalkToSavedLog(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "benchlog.json")
+	a, h := safetyApp(t, path, "safety", tallPhone)
+	s := a.Screen("safety").(*safetyScreen)
+	s.now = func() time.Time { return time.Date(2026, 12, 1, 22, 30, 0, 0, time.UTC) }
+
+	// Item 1: tick it.
+	h.tap("Done: Vessel rating and markings known")
+	if !s.pass.Done[0] {
+		t.Fatal("tick on item 1 not recorded")
+	}
+	h.tap("Next ›")
+	// Item 2: the wall calculator needs the allowable stress.
+	h.retype("Allowable stress at the hot-end temperature", "", "138 MPa")
+	got, ok := h.shown("Hoop stress (Lamé, inner surface)")
+	if !ok || got != "26.58 MPa" {
+		// Lamé at 30 barg, 50 mm, 6 mm: 26.58 MPa (calc/safety wall tests).
+		t.Fatalf("hoop stress shown %q (%v); nodes:\n%s", got, ok, h.dump())
+	}
+	if v, _ := h.shown("MAWP of this wall (gauge)"); !strings.Contains(v, "barg") {
+		t.Errorf("MAWP shown as %q, want barg", v)
+	}
+	// Gauge versus absolute: 30 bar absolute loads the wall 1.013 bar less.
+	h.retype("Design pressure", "30 barg", "30 bar")
+	if v, _ := h.shown("Pressure on the wall (gauge)"); v != "28.99 barg" {
+		t.Errorf("30 bar absolute shown as %q on the wall, want 28.99 barg", v)
+	}
+	h.retype("Design pressure", "30 bar", "30 barg")
+	if v, _ := h.shown("Pressure on the wall (gauge)"); v != "30 barg" {
+		t.Errorf("30 barg shown as %q on the wall", v)
+	}
+	h.tap("Done: Wall stress checked at the hot-end temperature")
+	h.tap("Next ›")
+	// Item 3: the MAWP came over from the wall item.
+	if !strings.Contains(s.relief.mawp.Text(), "barg") {
+		t.Errorf("relief MAWP field %q not filled from the wall item", s.relief.mawp.Text())
+	}
+	if v, _ := h.shown("Set pressure is"); v != "at or below the MAWP" {
+		t.Errorf("relief verdict %q", v)
+	}
+	// Tick the rest, with a note on the last item.
+	for i := 2; i < s.items(); i++ {
+		h.tap("Done: " + s.pass.Items[i].Title)
+		if i == s.items()-1 {
+			h.retype("Note (optional)", "", "vent valve opened, gauge at zero")
+			h.tap("Review and save ›")
+		} else {
+			h.tap("Next ›")
+		}
+	}
+	if !s.pass.Complete() {
+		t.Fatalf("ticked %d of %d", s.pass.Ticked(), s.items())
+	}
+	h.tap("Save to the bench log")
+	if st, _ := h.shown("Save status"); !strings.HasPrefix(st, "Saved 2026-12-01 22:30 with 11 of 11") {
+		t.Fatalf("save status %q", st)
+	}
+	l, err := store.Load(path)
+	if err != nil || len(l.Passes) != 1 {
+		t.Fatalf("log after save: %v, %v", l, err)
+	}
+	p := l.Passes[0]
+	if len(p.Items) != 11 || !p.Items[10].Done || p.Items[10].Note != "vent valve opened, gauge at zero" {
+		t.Errorf("saved items %+v", p.Items)
+	}
+	var hoop *store.Number
+	for i, n := range p.Items[1].Numbers {
+		if n.Name == "Hoop stress (Lamé, inner surface)" {
+			hoop = &p.Items[1].Numbers[i]
+		}
+	}
+	if hoop == nil || hoop.Unit != "Pa" || hoop.Shown != "26.58 MPa" || hoop.Value < 26.58e6 || hoop.Value > 26.59e6 {
+		t.Errorf("hoop stress in the log: %+v", hoop)
+	}
+	if len(p.Items[1].Cautions) == 0 || len(p.Cautions) == 0 || p.Cautions[0] != safety.CautionGeneral {
+		t.Errorf("cautions in the log: item %q pass %q", p.Items[1].Cautions, p.Cautions)
+	}
+
+	// The bench log lists it; export writes the text next to the log.
+	h.tap("Open the bench log")
+	if a.Current() != "benchlog" {
+		t.Fatalf("top is %q after Open the bench log", a.Current())
+	}
+	if !h.hasLabel("2026-12-01 22:30 · 11 of 11 ticked") {
+		t.Fatalf("pass not listed:\n%s", h.dump())
+	}
+	h.tap("Export as text")
+	txt := filepath.Join(dir, "benchlog-20261201-223000.txt")
+	b, err := os.ReadFile(txt)
+	if err != nil {
+		t.Fatalf("export: %v\n%s", err, h.dump())
+	}
+	if !strings.Contains(string(b), "[x]") || !strings.Contains(string(b), "26.58 MPa") || !strings.Contains(string(b), "CAUTIONS") {
+		t.Errorf("exported text:\n%s", b)
+	}
+	if st, _ := h.shown("Export status"); st != "Written to "+txt {
+		t.Errorf("export status %q", st)
+	}
+}
+
+// TestSafetySaveKeepsDamagedLog: a damaged log is reported and left
+// untouched until the user chooses to set it aside.
+func TestSafetySaveKeepsDamagedLog(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "benchlog.json")
+	bad := []byte(`{"format":"tubewright-benchlog","version":1,"passes":[{"ti`)
+	if err := os.WriteFile(path, bad, 0o600); err != nil {
+		t.Fatal(err)
+	}
+	a, h := safetyApp(t, path, "safety", tallPhone)
+	s := a.Screen("safety").(*safetyScreen)
+	s.now = func() time.Time { return time.Date(2026, 12, 1, 23, 0, 0, 0, time.UTC) }
+	h.tap("Review")
+	h.tap("Save to the bench log")
+	st, _ := h.shown("Save status")
+	if !strings.Contains(st, "Not saved") || !strings.Contains(st, "damaged") {
+		t.Fatalf("status %q", st)
+	}
+	if b, _ := os.ReadFile(path); string(b) != string(bad) {
+		t.Fatal("the damaged log was changed")
+	}
+	h.tap("Keep the damaged log aside and save")
+	if b, err := os.ReadFile(path + ".damaged-20261201T230000"); err != nil || string(b) != string(bad) {
+		t.Fatalf("set-aside file: %q, %v", b, err)
+	}
+	l, err := store.Load(path)
+	if err != nil || len(l.Passes) != 1 || l.Passes[0].Items[0].Done {
+		t.Fatalf("new log: %+v, %v", l, err)
+	}
+}
+
+// TestScreenshotSafetyStates pictures the pass at the wall-stress item with
+// numbers, the oxygen item, the review after a save, and the bench log
+// with that pass, for people to look at (SHOT_DIR).
+func TestScreenshotSafetyStates(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "benchlog.json")
+	env := NewEnv(nil)
+	useBookAt(env, path)
+	s := newSafetyScreen(env).(*safetyScreen)
+	s.now = func() time.Time { return time.Date(2026, 12, 1, 22, 30, 0, 0, time.UTC) }
+	s.wall.allow.SetText("138 MPa")
+	s.wall.dirty = true
+	s.goTo(1)
+	shoot(t, "safety-wall", env, s)
+	shootTall(t, "safety-wall", env, s)
+	s.goTo(3)
+	shoot(t, "safety-test", env, s)
+	shootTall(t, "safety-test", env, s)
+	s.goTo(6)
+	shootTall(t, "safety-cylinder", env, s)
+	s.goTo(7)
+	shoot(t, "safety-oxygen", env, s)
+	shootTall(t, "safety-oxygen", env, s)
+	s.goTo(8)
+	shootTall(t, "safety-hearing", env, s)
+	for i := range s.ticks {
+		s.ticks[i].Value = i != 4
+		s.pass.Done[i] = i != 4
+	}
+	s.goTo(s.items())
+	s.saveTo(false)
+	if !s.saved {
+		t.Fatalf("save failed: %s", s.status)
+	}
+	shoot(t, "safety-review", env, s)
+	lg := newBenchLogScreen(env)
+	shoot(t, "benchlog-pass", env, lg)
+}
+
+// shootTall pictures s at a phone's width and a long page, to see a whole
+// step at once (only with SHOT_DIR: a picture for people, checked like the
+// others).
+func shootTall(t *testing.T, name string, env *Env, s Screen) {
+	t.Helper()
+	if os.Getenv("SHOT_DIR") == "" {
+		return
+	}
+	t.Run("tall", func(t *testing.T) {
+		a := NewApp(nil)
+		a.env = env
+		env.open = a.Open
+		a.screens[name] = s
+		a.stack = []string{name}
+		shootApp(t, name+"-tallphone", image.Pt(412, 2600), a)
+	})
+}
