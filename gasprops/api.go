@@ -133,11 +133,10 @@ func (m Mixture) Components() []Component { return m.comps[:m.n] }
 // Range returns the temperature range (K) over which every component's
 // model is validated: the intersection of the components' ranges.
 func (m Mixture) Range() (tmin, tmax float64) {
-	tmin, tmax = 0, math.Inf(1)
-	for _, c := range m.comps[:m.n] {
-		tmin = math.Max(tmin, c.Species.m.tmin)
-		tmax = math.Min(tmax, c.Species.m.tmax)
+	if m.n == 0 {
+		return 0, 0
 	}
+	tmin, tmax, _ = m.limits(0)
 	return tmin, tmax
 }
 
