@@ -18,6 +18,8 @@ type placementScreen struct {
 	centre  *Field
 	length  *Field
 	drive   *Field
+	device  *Choice
+	advice  string
 	results *Results
 	rules   []string
 	caution *Caution
@@ -33,6 +35,7 @@ func newPlacementScreen(env *Env) Screen {
 		centre:  NewField(env, "Stack centre, from the closed end (pressure antinode)", units.DimLength, "0.3 m"),
 		length:  NewField(env, "Stack length", units.DimLength, "80 mm"),
 		drive:   NewField(env, "Drive ratio |p1|/pm at the pressure antinode", units.DimNone, "3 %"),
+		device:  NewChoice(env, "Device", []string{"engine", "heat-pump"}, []string{"Engine", "Heat pump or refrigerator"}),
 		results: NewResults(env),
 		caution: NewCaution(env, "Hot parts", safety.CautionHotSurfaces),
 		dirty:   true,
@@ -57,6 +60,7 @@ func (s *placementScreen) compute() {
 	r := s.results
 	r.Reset()
 	s.rules = nil
+	s.advice = ""
 	for _, f := range []*Field{s.centre, s.length, s.drive} {
 		f.SetError(nil)
 	}
@@ -104,6 +108,8 @@ func (s *placementScreen) compute() {
 	r.Warn(pl.Warnings...)
 	r.Warn(st.props.Warnings...)
 	s.rules = pl.Rules
+	dev, _ := pore.ParseDevice(s.device.Selected())
+	s.advice = pore.PositionAdvice(dev, pl)
 }
 
 // Layout implements Screen.
@@ -116,11 +122,18 @@ func (s *placementScreen) Layout(gtx layout.Context) layout.Dimensions {
 			s.dirty = true
 		}
 	}
+	if s.device.Update(gtx) {
+		s.dirty = true
+	}
 	if s.dirty {
 		s.dirty = false
 		s.compute()
 	}
-	ws := []layout.Widget{Heading(s.env, "Stack"), s.centre.Layout, s.length.Layout, s.drive.Layout, s.results.Layout, s.caution.Layout}
+	ws := []layout.Widget{Heading(s.env, "Stack"), s.device.Layout, s.centre.Layout, s.length.Layout, s.drive.Layout, s.caution.Layout}
+	if s.advice != "" {
+		ws = append(ws, Described("Position advice", Para(s.env, s.advice)))
+	}
+	ws = append(ws, s.results.Layout)
 	ws = append(ws, Heading(s.env, "Gas and operating point"))
 	ws = append(ws, s.op.widgets()...)
 	if len(s.rules) > 0 {

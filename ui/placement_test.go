@@ -48,6 +48,15 @@ func TestPlacementScreen(t *testing.T) {
 		t.Error("the hot-parts caution is not on screen with the critical temperature difference")
 	}
 
+	// the advice follows the device chosen with a tap
+	if a, _ := h.shown("Position advice"); a != pore.PositionAdvice(pore.Engine, want) {
+		t.Errorf("engine advice shown %q", a)
+	}
+	h.tap("Heat pump or refrigerator")
+	if a, _ := h.shown("Position advice"); a != pore.PositionAdvice(pore.HeatPump, want) {
+		t.Errorf("heat-pump advice shown %q", a)
+	}
+
 	// a drive ratio of 150 % is refused and nothing stale stays
 	h.retype("Drive ratio |p1|/pm at the pressure antinode", "3 %", "150 %")
 	if f := s.results.Failure(); !strings.Contains(f, "drive ratio") {

@@ -75,3 +75,14 @@ func mustMM(t *testing.T, v float64) string {
 	}
 	return s
 }
+
+// TestScreenshotPoresScreens pictures the pores screen judging woven
+// screens as a regenerator (SHOT_DIR=... to keep the pictures).
+func TestScreenshotPoresScreens(t *testing.T) {
+	env := NewEnv(nil)
+	s := newPoresScreen(env).(*poresScreen)
+	s.shape.Select("screens")
+	s.role.Select("regenerator")
+	s.dirty = true
+	shoot(t, "pores-screens", env, s)
+}

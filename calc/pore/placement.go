@@ -110,10 +110,10 @@ func PlaceStack(in PlacementInput) (Placement, error) {
 	out.ViscousFactor = s * s
 	out.LambdaEighth = out.Wavelength / 8
 	out.Rules = []string{
-		"heat flux along a short stack ∝ sin 2kx, largest at kx = π/4 (λ/8 from the pressure antinode): Swift, JASA 84, 1145 (1988), short-stack boundary-layer analysis",
-		"critical gradient ∇T_crit = (γ-1) T k cot kx for an ideal gas in a standing wave: from Swift (1988), ∇T_crit = T β ω p1/(ρ cp u1)",
-		"viscous loss ∝ |u1|² ∝ sin² kx: standing-wave velocity profile",
-		"short-stack estimates need kΔx ≪ 1; warning above 0.3: common practice, no published source",
+		"heat flux along a short stack goes as sin 2kx, largest at kx = π/4 (λ/8 from the pressure antinode): Swift, JASA 84, 1145 (1988), short-stack boundary-layer analysis",
+		"critical gradient (dT/dx)crit = (γ-1) T k cot kx for an ideal gas in a standing wave: from Swift (1988), (dT/dx)crit = T β ω p1/(ρ cp u1)",
+		"viscous loss goes as |u1|², so as sin² kx: standing-wave velocity profile",
+		"short-stack estimates need kΔx much less than 1; warning above 0.3: common practice, no published source",
 	}
 	if math.Abs(s) < 1e-12 || math.Abs(c) < 1e-12 {
 		return Placement{}, units.NewRangeError("stack centre kx", out.KX, 0, math.Pi/2, "rad")

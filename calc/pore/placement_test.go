@@ -122,3 +122,34 @@ func TestPlacementErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestPositionAdvice: the advice names the region the stack is in and the
+// device's trade-off.
+func TestPositionAdvice(t *testing.T) {
+	t.Parallel()
+	in := airInput()
+	for _, c := range []struct {
+		centre float64
+		d      Device
+		words  []string
+	}{
+		{0.02, Engine, []string{"between the pressure antinode and λ/8", "An engine", "common practice"}},
+		{0.1, HeatPump, []string{"between λ/8 and the velocity antinode", "heat pump", "common practice"}},
+		{0.2, HeatPump, []string{"beyond the velocity antinode"}},
+	} {
+		in.Centre = c.centre
+		pl, err := PlaceStack(in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		a := PositionAdvice(c.d, pl)
+		for _, w := range c.words {
+			if !strings.Contains(a, w) {
+				t.Errorf("x = %g, %v: advice %q lacks %q", c.centre, c.d, a, w)
+			}
+		}
+	}
+	if _, err := ParseDevice("toaster"); err == nil {
+		t.Error("unknown device accepted")
+	}
+}

@@ -15,6 +15,7 @@ func runPlacement(args []string) (*report, error) {
 	centre := fl.quantity("centre", units.DimLength, "", "stack centre, measured from the nearest pressure antinode (a closed end): 20mm")
 	length := fl.quantity("stack-length", units.DimLength, "0m", "stack length along the tube: 20mm")
 	drive := fl.quantity("drive-ratio", units.DimNone, "0", "pressure amplitude at the pressure antinode over the mean pressure: 0.02 or 2%")
+	device := fl.choice("device", []string{"engine", "heat-pump"}, "engine", "what the stack is for, for the position advice (heat-pump includes refrigerators)")
 	fl.describe(`Short-stack standing-wave estimates (Swift, JASA 84, 1145, 1988); see the rules
 in the output. For a full onset calculation use the onset solver.
 
@@ -53,6 +54,8 @@ examples:
 		r.add("displacement_amplitude", pl.Displacement, units.DimLength)
 		r.add("exchanger_length", pl.ExchangerLength, units.DimLength)
 	}
+	dev, _ := pore.ParseDevice(*device)
+	r.addValue("position_advice", pore.PositionAdvice(dev, pl))
 	r.addValue("rules", pl.Rules)
 	for _, w := range pl.Warnings {
 		r.warn(w)

@@ -236,6 +236,9 @@ func TestPlacementCommand(t *testing.T) {
 	if len(out.Cautions) == 0 {
 		t.Error("no caution with the critical temperature difference")
 	}
+	if a := out.text(t, "position_advice"); a != pore.PositionAdvice(pore.Engine, want) {
+		t.Errorf("position advice %q", a)
+	}
 	var o, e bytes.Buffer
 	if code := run([]string{"placement", "--gas", "air", "--temperature", "300K", "--frequency", "578Hz", "--centre", "20mm", "--drive-ratio", "150%"}, &o, &e); code != exitUsage || !strings.Contains(e.String(), "--drive-ratio") {
 		t.Errorf("drive ratio 150%%: exit %d, %q", code, e.String())
