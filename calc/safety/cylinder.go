@@ -45,8 +45,8 @@ type Contents struct {
 //	non-ideal:  Vstd = V (p/(Z T)) (Tstd/pstd),  Z = 1 + B p/(R T)
 //
 // with the second virial coefficient B of the gas model
-// (gasprops.Mixture.Compressibility; pure gases only, and not hydrogen: for
-// those the ideal value is returned with a warning). The reference state
+// (gasprops.Mixture.Compressibility; where the model has no coefficient,
+// e.g. hydrogen, the ideal value is returned with a warning). The reference state
 // itself is taken as ideal. For helium Z > 1, so a cylinder holds less than
 // the ideal estimate (about 10 % less at 200 bar, from memory). Source: the
 // ideal-gas law and the virial equation of state truncated after B (e.g.
