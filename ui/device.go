@@ -1,0 +1,340 @@
+package ui
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"strings"
+
+	"gioui.org/layout"
+	"gioui.org/unit"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/linear"
+	"tubewright/calc/units"
+)
+
+// deviceEditor edits a device as an ordered list of parts on a phone: load
+// an example, add a part of a kind, move it up or down, edit its fields,
+// remove it. It holds the text of every field (as the device file has it)
+// and hands a linear.DeviceFile to the screen; it computes nothing.
+type deviceEditor struct {
+	env      *Env
+	gas      *GasPicker
+	pressure *Field
+	ambient  *Field
+	hot      *Field // the heat pump's "hot" parts, rarely used; optional
+	parts    []*partEditor
+	selected int // index of the expanded part, -1 for none
+	addKind  *Choice
+	add      widget.Clickable
+	examples []widget.Clickable
+	name     string
+	changed  bool
+	strip    *deviceStrip
+}
+
+// kindLabels are the part kinds as people read them, in linear.Kinds order.
+var kindLabels = map[string]string{
+	linear.KindClosedEnd: "Closed end", linear.KindDriver: "Driver", linear.KindTube: "Tube",
+	linear.KindExchanger: "Exchanger", linear.KindStack: "Stack", linear.KindCavity: "Cavity",
+	linear.KindOpenEnd: "Open end",
+}
+
+// newDeviceEditor returns an editor holding the built-in example name.
+func newDeviceEditor(env *Env, example string) *deviceEditor {
+	e := &deviceEditor{
+		env:      env,
+		pressure: NewField(env, "Mean pressure", units.DimPressure, ""),
+		ambient:  NewField(env, "Ambient temperature", units.DimTemperature, ""),
+		hot:      NewField(env, "Hot temperature (start value; optional)", units.DimTemperature, ""),
+		selected: -1,
+		examples: make([]widget.Clickable, len(linear.ExampleNames())),
+		strip:    &deviceStrip{env: env},
+	}
+	e.hot.Hint = "leave empty unless parts at \"hot\" need a value"
+	var addable []string
+	var labels []string
+	for _, k := range linear.Kinds {
+		addable = append(addable, k)
+		labels = append(labels, kindLabels[k])
+	}
+	e.addKind = NewChoice(env, "Kind of part to add", addable, labels)
+	e.addKind.Select(linear.KindTube)
+	if err := e.load(example); err != nil {
+		panic("ui: built-in example " + example + ": " + err.Error())
+	}
+	return e
+}
+
+// load replaces the device with a built-in example.
+func (e *deviceEditor) load(name string) error {
+	b, err := linear.ExampleFile(name)
+	if err != nil {
+		return err
+	}
+	var f linear.DeviceFile
+	if err := jsonDecode(b, &f); err != nil {
+		return err
+	}
+	e.set(&f)
+	return nil
+}
+
+// set fills the editor from a device file (code, not a user change, but
+// the screen must recompute: changed is set).
+func (e *deviceEditor) set(f *linear.DeviceFile) {
+	e.name = f.Name
+	if e.gas == nil {
+		e.gas = NewGasPicker(e.env, f.Gas)
+	} else if err := e.gas.SetText(f.Gas); err != nil {
+		e.gas = NewGasPicker(e.env, f.Gas)
+	}
+	e.pressure.SetText(f.MeanPressure)
+	e.ambient.SetText(f.AmbientTemperature)
+	e.hot.SetText(f.HotTemperature)
+	e.parts = e.parts[:0]
+	for _, p := range f.PartsList {
+		e.parts = append(e.parts, newPartEditor(e.env, p))
+	}
+	e.selected = -1
+	e.changed = true
+}
+
+// File returns the device file the editor shows.
+func (e *deviceEditor) File() *linear.DeviceFile {
+	f := &linear.DeviceFile{
+		Name:               e.name,
+		Gas:                e.gas.Text(),
+		MeanPressure:       e.pressure.Text(),
+		AmbientTemperature: e.ambient.Text(),
+		HotTemperature:     strings.TrimSpace(e.hot.Text()),
+	}
+	for _, p := range e.parts {
+		f.PartsList = append(f.PartsList, p.file())
+	}
+	return f
+}
+
+// Update handles the editor's events and reports whether the device changed.
+func (e *deviceEditor) Update(gtx layout.Context) bool {
+	for i := range e.examples {
+		if e.examples[i].Clicked(gtx) {
+			_ = e.load(linear.ExampleNames()[i])
+		}
+	}
+	if e.gas.Update(gtx) {
+		e.changed = true
+	}
+	for _, f := range []*Field{e.pressure, e.ambient, e.hot} {
+		if f.Update(gtx) {
+			e.changed = true
+		}
+	}
+	e.addKind.Update(gtx)
+	if e.add.Clicked(gtx) {
+		e.insert(e.addKind.Selected())
+	}
+	for i := 0; i < len(e.parts); i++ {
+		p := e.parts[i]
+		switch {
+		case p.up.Clicked(gtx) && i > 0:
+			e.parts[i-1], e.parts[i] = e.parts[i], e.parts[i-1]
+			e.follow(i, i-1)
+			e.changed = true
+		case p.down.Clicked(gtx) && i < len(e.parts)-1:
+			e.parts[i+1], e.parts[i] = e.parts[i], e.parts[i+1]
+			e.follow(i, i+1)
+			e.changed = true
+		case p.edit.Clicked(gtx):
+			if e.selected == i {
+				e.selected = -1
+			} else {
+				e.selected = i
+			}
+		case p.remove.Clicked(gtx):
+			e.parts = append(e.parts[:i], e.parts[i+1:]...)
+			if e.selected == i {
+				e.selected = -1
+			} else if e.selected > i {
+				e.selected--
+			}
+			e.changed = true
+			i--
+			continue
+		}
+		if p.update(gtx) {
+			e.changed = true
+		}
+	}
+	ch := e.changed
+	e.changed = false
+	return ch
+}
+
+// follow keeps the expanded part expanded when it moves from i to j.
+func (e *deviceEditor) follow(i, j int) {
+	switch e.selected {
+	case i:
+		e.selected = j
+	case j:
+		e.selected = i
+	}
+}
+
+// insert adds a part of kind after the expanded part, or before the last
+// part (the far end), and expands it. New parts copy the diameter of their
+// neighbour.
+func (e *deviceEditor) insert(kind string) {
+	at := len(e.parts)
+	if e.selected >= 0 {
+		at = e.selected + 1
+	} else if at > 0 {
+		at--
+	}
+	switch kind {
+	case linear.KindDriver:
+		at = 0
+	case linear.KindOpenEnd:
+		at = len(e.parts)
+	}
+	diameter := "50 mm"
+	for _, j := range []int{at - 1, at} {
+		if j >= 0 && j < len(e.parts) {
+			if d := e.parts[j].text("diameter"); d != "" {
+				diameter = d
+				break
+			}
+		}
+	}
+	p := newPartEditor(e.env, defaultPart(kind, diameter))
+	e.parts = append(e.parts, nil)
+	copy(e.parts[at+1:], e.parts[at:])
+	e.parts[at] = p
+	e.selected = at
+	e.changed = true
+}
+
+// defaultPart returns a new part of kind with plausible starting values
+// (common bench sizes; edit them).
+func defaultPart(kind, diameter string) linear.PartFile {
+	p := linear.PartFile{Kind: kind}
+	switch kind {
+	case linear.KindTube:
+		p.Length, p.Diameter, p.Temperature = "0.5 m", diameter, "ambient"
+	case linear.KindStack:
+		p.Length, p.Diameter, p.Porosity = "50 mm", diameter, "0.7"
+		p.Pores = &linear.PoresFile{Shape: "plates", HalfGap: "0.3 mm", Thickness: "0.2 mm"}
+	case linear.KindExchanger:
+		p.Length, p.Diameter, p.Porosity, p.Temperature = "8 mm", diameter, "0.6", "ambient"
+		p.Pores = &linear.PoresFile{Shape: "plates", HalfGap: "0.5 mm", Thickness: "0.5 mm"}
+	case linear.KindCavity:
+		p.Volume, p.Temperature = "0.5 L", "ambient"
+	case linear.KindDriver:
+		p.Diameter, p.PressureAmplitude, p.Frequency = diameter, "2 kPa", "400 Hz"
+	case linear.KindOpenEnd:
+		p.Flange = "none"
+	}
+	return p
+}
+
+// Layout draws the editor: examples, gas and top-level fields, the strip,
+// the parts and the add row.
+func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.Widget {
+	e.strip.dev = dev
+	th := e.env.Theme
+	ws := []layout.Widget{
+		func(gtx layout.Context) layout.Dimensions {
+			names := linear.ExampleNames()
+			return flow(gtx, gtx.Dp(8), gtx.Dp(8), len(names), func(gtx layout.Context, i int) layout.Dimensions {
+				return smallButton(e.env, gtx, &e.examples[i], "Load "+exampleLabel(names[i])+" example")
+			})
+		},
+		e.strip.Layout,
+		Heading(e.env, "Parts, from the start end"),
+	}
+	for i := range e.parts {
+		i := i
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return e.parts[i].layout(gtx, i, e.selected == i)
+		})
+	}
+	ws = append(ws,
+		e.addKind.Layout,
+		func(gtx layout.Context) layout.Dimensions {
+			b := material.Button(th, &e.add, "Add part")
+			return b.Layout(gtx)
+		},
+		Heading(e.env, "Gas and fill"),
+		e.gas.Layout, e.pressure.Layout, e.ambient.Layout, e.hot.Layout,
+	)
+	return ws
+}
+
+func exampleLabel(name string) string {
+	switch name {
+	case "engine":
+		return "engine"
+	case "heatpump":
+		return "heat-pump"
+	}
+	return name
+}
+
+// smallButton draws a compact button.
+func smallButton(env *Env, gtx layout.Context, c *widget.Clickable, label string) layout.Dimensions {
+	b := material.Button(env.Theme, c, label)
+	b.TextSize = unit.Sp(14)
+	b.Inset = layout.Inset{Top: 6, Bottom: 6, Left: 10, Right: 10}
+	return b.Layout(gtx)
+}
+
+// jsonDecode reads a device file's JSON, refusing unknown fields.
+func jsonDecode(b []byte, v any) error {
+	dec := json.NewDecoder(bytes.NewReader(b))
+	dec.DisallowUnknownFields()
+	return dec.Decode(v)
+}
+
+// summary describes a part in one line: "60 mm long, Ø 60 mm, plates".
+func summary(p linear.PartFile) string {
+	var s []string
+	if p.Length != "" {
+		s = append(s, p.Length+" long")
+	}
+	if p.Diameter != "" {
+		s = append(s, "Ø "+p.Diameter)
+	}
+	if p.Volume != "" {
+		s = append(s, p.Volume)
+	}
+	if p.Pores != nil {
+		s = append(s, p.Pores.Shape)
+	}
+	if p.Temperature != "" {
+		s = append(s, "at "+p.Temperature)
+	}
+	if p.PressureAmplitude != "" {
+		s = append(s, "|p1| "+p.PressureAmplitude)
+	}
+	if p.VolumeVelocityAmplitude != "" {
+		s = append(s, "|U1| "+p.VolumeVelocityAmplitude)
+	}
+	if p.Frequency != "" {
+		s = append(s, p.Frequency)
+	}
+	if p.Flange == "infinite" {
+		s = append(s, "in a wall")
+	}
+	return strings.Join(s, ", ")
+}
+
+// partTitle is "3. Stack" or "3. Stack “label”".
+func partTitle(i int, p linear.PartFile) string {
+	t := fmt.Sprintf("%d. %s", i+1, kindLabels[p.Kind])
+	if p.Label != "" {
+		t += " · " + p.Label
+	}
+	return t
+}

@@ -1,0 +1,216 @@
+package ui
+
+import (
+	"context"
+	"fmt"
+
+	"gioui.org/layout"
+	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/plotter"
+
+	"tubewright/calc/linear"
+	"tubewright/calc/units"
+)
+
+// onsetScreen builds an engine from parts and shows the hot temperature
+// and frequency at which it starts, the profiles along it and the onset
+// temperature against mean pressure. Every valid edit starts a new solve off
+// the UI goroutine; a newer edit cancels the stale one.
+type onsetScreen struct {
+	env     *Env
+	page    *Page
+	editor  *deviceEditor
+	job     *Job[*onsetOutcome]
+	dev     *linear.Device // last valid device
+	results *Results
+	caution *Caution
+	plots   []*Plot
+	status  string
+}
+
+// onsetOutcome is what one solve produces.
+type onsetOutcome struct {
+	dev   *linear.Device
+	onset *linear.OnsetResult
+	sweep []linear.PressurePoint
+}
+
+// newOnsetScreen builds the onset screen with the example engine.
+func newOnsetScreen(env *Env) Screen {
+	s := &onsetScreen{
+		env:     env,
+		page:    NewPage(env),
+		editor:  newDeviceEditor(env, "engine"),
+		job:     NewJob[*onsetOutcome](env.Invalidate),
+		results: NewResults(env),
+		caution: NewCaution(env, "Hot parts, pressure and sound"),
+	}
+	for i := 0; i < 5; i++ {
+		s.plots = append(s.plots, NewPlot(env))
+	}
+	return s
+}
+
+// Title implements Screen.
+func (s *onsetScreen) Title() string { return "Engine onset" }
+
+// Leave cancels a running solve.
+func (s *onsetScreen) Leave() { s.job.Cancel() }
+
+// sweepPressures are the mean pressures of the onset sweep: a quarter to
+// four times the device's, geometric.
+func sweepPressures(pm float64) []float64 { return linear.Grid(pm/4, pm*4, 13, true) }
+
+// solveOnset is the job: onset with profiles, then the pressure sweep, one
+// point at a time so that a cancelled job stops early.
+func solveOnset(ctx context.Context, d *linear.Device) (*onsetOutcome, error) {
+	r, err := linear.Onset(d, nil)
+	if err != nil {
+		return nil, err
+	}
+	out := &onsetOutcome{dev: d, onset: r}
+	set := &linear.Settings{HotGuess: r.HotTemperature, FrequencyGuess: r.Frequency}
+	for _, p := range sweepPressures(d.MeanPressure) {
+		if err := ctx.Err(); err != nil {
+			return nil, err
+		}
+		pt := linear.OnsetVsPressure(d, []float64{p}, set)[0]
+		out.sweep = append(out.sweep, pt)
+	}
+	return out, nil
+}
+
+// start validates the editor's device and starts a solve, or shows why not.
+func (s *onsetScreen) start() {
+	d, err := s.editor.File().Validate()
+	if err != nil {
+		s.job.Cancel()
+		s.results.Reset()
+		s.results.Fail(err)
+		s.status = ""
+		s.clearPlots()
+		return
+	}
+	s.dev = d
+	s.status = "Solving…"
+	s.job.Start(func(ctx context.Context) (*onsetOutcome, error) { return solveOnset(ctx, d) })
+}
+
+func (s *onsetScreen) clearPlots() {
+	for _, p := range s.plots {
+		p.Set(nil)
+	}
+}
+
+// show fills results, cautions and plots from a finished solve.
+func (s *onsetScreen) show(o *onsetOutcome, err error) {
+	r := s.results
+	r.Reset()
+	s.status = ""
+	if err != nil {
+		r.Fail(err)
+		s.clearPlots()
+		s.caution.Lines = nil
+		return
+	}
+	res := o.onset
+	r.AddIn("Hot temperature at onset", res.HotTemperature, "K")
+	if c, err := units.FormatIn(res.HotTemperature, "degC"); err == nil {
+		r.AddNote("= " + c + "; the parts marked hot must reach this before the engine starts")
+	}
+	r.Add("Frequency", res.Frequency, units.DimFrequency)
+	r.Add("Hot / ambient temperature", res.TemperatureRatio, units.DimNone)
+	r.AddText("Newton iterations", fmt.Sprint(res.Iterations))
+	r.Warn(res.Warnings...)
+	s.caution.Lines = []string{
+		"Hot parts: the hot end must reach about " + units.Format(res.HotTemperature, units.DimTemperature) + " before the engine starts. Heaters, exchangers and walls at this temperature burn skin and can ignite nearby material; let them cool before touching.",
+		"Pressure: the device is charged to " + pressureText(o.dev.MeanPressure) + " absolute. The vessel must be rated for it at the hot temperature; use the Safety pass and defer to local pressure-vessel codes and licensed practice.",
+		"Sound: a running engine can be very loud; wear hearing protection near it.",
+		"A linear estimate: heat leaks, streaming and construction change real onset; approach it slowly.",
+	}
+	setProfilePlots(s.plots[:4], &res.Profile)
+	var xy plotter.XYs
+	for _, p := range o.sweep {
+		if p.Err == nil {
+			xy = append(xy, plotter.XY{X: p.Pressure / 1e5, Y: p.HotTemperature})
+		}
+	}
+	s.plots[4].Set(lineXY(xy, "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure"))
+}
+
+// pressureText is "8 bar (800 kPa)"-style text.
+func pressureText(p float64) string {
+	b, err := units.FormatIn(p, "bar")
+	if err != nil {
+		return units.Format(p, units.DimPressure)
+	}
+	return b
+}
+
+// setProfilePlots draws |p1|, |U1|, Tm and acoustic power along x.
+func setProfilePlots(plots []*Plot, pr *linear.Profile) {
+	cols := []struct {
+		y           []float64
+		label, unit string
+	}{
+		{pr.PressureAmp, "|p1|", "Pa"},
+		{pr.FlowAmp, "|U1|", "m³/s"},
+		{pr.Temperature, "Mean temperature Tm", "K"},
+		{pr.AcousticPower, "Acoustic power", "W"},
+	}
+	for i, c := range cols {
+		if i >= len(plots) {
+			break
+		}
+		xy := make(plotter.XYs, len(pr.X))
+		for k := range pr.X {
+			xy[k] = plotter.XY{X: pr.X[k], Y: c.y[k]}
+		}
+		plots[i].Set(lineXY(xy, "Position from the start end", "m", c.label, c.unit, c.label+" along the device"))
+	}
+}
+
+// lineXY is a titled line plot; nil when there are fewer than two points.
+func lineXY(xy plotter.XYs, xl, xu, yl, yu, title string) *plot.Plot {
+	if len(xy) < 2 {
+		return nil
+	}
+	p := NewXYPlot(xl, xu, yl, yu)
+	p.Title.Text = title
+	l, err := plotter.NewLine(xy)
+	if err != nil {
+		return nil
+	}
+	p.Add(l)
+	return p
+}
+
+// Layout implements Screen.
+func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
+	if s.job.Poll() {
+		s.show(s.job.Result())
+	}
+	if s.editor.Update(gtx) {
+		s.start()
+	}
+	ws := []layout.Widget{
+		Para(s.env, "Build the engine from parts, closed end first. The hot temperature and frequency at which it starts are solved with Rott's linear theory after every change."),
+	}
+	ws = append(ws, Heading(s.env, "Onset"))
+	if s.status != "" {
+		ws = append(ws, Note(s.env, s.status))
+	}
+	ws = append(ws, s.results.Layout)
+	if len(s.caution.Lines) > 0 {
+		ws = append(ws, s.caution.Layout)
+	}
+	ws = append(ws, s.editor.Layout(gtx, s.dev)...)
+	ws = append(ws, Heading(s.env, "Along the device at onset"))
+	for _, p := range s.plots[:4] {
+		ws = append(ws, p.Layout)
+	}
+	ws = append(ws, Note(s.env, "Profiles for |p1| = 1 Pa at the start end: the linear theory fixes shapes, not amplitudes."))
+	ws = append(ws, Heading(s.env, "Onset against mean pressure"), s.plots[4].Layout)
+	ws = append(ws, Note(s.env, "Method: Rott's linear wave equations for p1 and U1 with the thermoviscous functions of each part (Swift 2002, ch. 4), integrated part by part; onset is the hot temperature and real frequency that meet the far-end condition."))
+	return s.page.Layout(gtx, ws...)
+}

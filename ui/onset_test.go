@@ -1,0 +1,195 @@
+package ui
+
+import (
+	"image"
+	"os"
+	"strings"
+	"testing"
+	"time"
+
+	"tubewright/calc/linear"
+	"tubewright/calc/units"
+)
+
+// waitSolved runs frames until the screen's job has delivered a result.
+func waitSolved(t *testing.T, h *harness, running func() bool, have func() bool) {
+	t.Helper()
+	deadline := time.Now().Add(20 * time.Second)
+	for time.Now().Before(deadline) {
+		h.frame()
+		if !running() && have() {
+			h.frames(2)
+			return
+		}
+		time.Sleep(5 * time.Millisecond)
+	}
+	t.Fatal("the solve did not finish within 20 s")
+}
+
+// wantOnset is the hot temperature the screen should show for the device
+// in its editor, computed with calc/linear directly.
+func wantOnset(t *testing.T, e *deviceEditor) string {
+	t.Helper()
+	d, err := e.File().Validate()
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := linear.Onset(d, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s, _ := units.FormatIn(r.HotTemperature, "K")
+	return s
+}
+
+// TestOnsetScreenEdits drives the engine screen through the input router:
+// the example solves off the UI goroutine; moving, editing, breaking and
+// removing parts re-solve or report the part and field at fault; adding a
+// part adds it.
+func TestOnsetScreenEdits(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	h := newHarness(t, image.Pt(412, 6000), s.Layout)
+	solved := func() { waitSolved(t, h, s.job.Running, s.job.Has) }
+	solved()
+	row := "Hot temperature at onset"
+	got, ok := s.results.Value(row)
+	if want := wantOnset(t, s.editor); !ok || got != want {
+		t.Fatalf("example engine: %q shows %q, want %q (calc/linear)", row, got, want)
+	}
+	if len(s.caution.Lines) == 0 || !strings.Contains(s.caution.Lines[0], "Hot parts") {
+		t.Errorf("no hot-parts caution beside the onset temperature: %q", s.caution.Lines)
+	}
+	// Open the stack and break its porosity: one message naming part and field.
+	h.click(h.mustDesc("Edit part 4").Desc.Bounds)
+	h.retype("Porosity (open fraction)", "0.76", "1.4")
+	if f := s.results.Failure(); !strings.Contains(f, `part 4 (stack): field "porosity" = 1.4 must be in (0, 1]`) {
+		t.Errorf("porosity 1.4: failure %q", f)
+	}
+	// Mend it: a new solve with the new value.
+	h.retype("Porosity (open fraction)", "1.4", "0.6")
+	solved()
+	got2, _ := s.results.Value(row)
+	if want := wantOnset(t, s.editor); got2 != want || got2 == got {
+		t.Errorf("porosity 0.6: %q, want %q (and not the old %q)", got2, want, got)
+	}
+	// Move part 2 (hot tube) down: part 2 is now the heater.
+	h.click(h.mustDesc("Down part 2").Desc.Bounds)
+	if title := nodeText(h.mustDesc("part 2")); !strings.Contains(title, "Exchanger") {
+		t.Errorf("after Down, part 2 is %q", title)
+	}
+	solved()
+	// Remove the hot tube (now part 3): the device still solves.
+	n := len(s.editor.parts)
+	h.click(h.mustDesc("Remove part 3").Desc.Bounds)
+	if len(s.editor.parts) != n-1 {
+		t.Fatalf("Remove: %d parts, want %d", len(s.editor.parts), n-1)
+	}
+	solved()
+	if f := s.results.Failure(); f != "" {
+		t.Errorf("after removing the hot tube: %q", f)
+	}
+	// Add a cavity: it goes right after the open part (the stack).
+	open := s.editor.selected
+	if open < 0 || s.editor.parts[open].kind != linear.KindStack {
+		t.Fatalf("the stack is not the open part (%d)", open)
+	}
+	h.tap("Cavity")
+	h.tap("Add part")
+	if len(s.editor.parts) != n || s.editor.parts[open+1].kind != linear.KindCavity || s.editor.selected != open+1 {
+		t.Errorf("Add cavity after part %d: kinds %v, open %d", open+1, kinds(s.editor), s.editor.selected)
+	}
+	solved()
+}
+
+func kinds(e *deviceEditor) []string {
+	var k []string
+	for _, p := range e.parts {
+		k = append(k, p.kind)
+	}
+	return k
+}
+
+// TestOnsetScreenStaleSolve: an edit made while a solve runs cancels it;
+// the result shown is the newest device's.
+func TestOnsetScreenStaleSolve(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	h := newHarness(t, image.Pt(412, 6000), s.Layout)
+	if !s.job.Running() {
+		t.Fatal("no solve started for the example")
+	}
+	h.click(h.mustDesc("Edit part 4").Desc.Bounds)
+	h.retype("Length", "60 mm", "45 mm")
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	got, _ := s.results.Value("Hot temperature at onset")
+	if want := wantOnset(t, s.editor); got != want {
+		t.Errorf("shown %q, want %q for the edited device", got, want)
+	}
+}
+
+// TestHeatPumpScreen: the example pump solves; the span shown is the one of
+// calc/linear; a load gives a COP.
+func TestHeatPumpScreen(t *testing.T) {
+	env := NewEnv(nil)
+	s := newHeatPumpScreen(env).(*heatPumpScreen)
+	h := newHarness(t, image.Pt(412, 6000), s.Layout)
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	d, _ := s.editor.File().Validate()
+	r, err := linear.HeatPump(d, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, want := rowValue(s.results, "Temperature span"), units.Format(r.TemperatureSpan, units.DimTemperatureDifference); got != want {
+		t.Errorf("span %q, want %q", got, want)
+	}
+	h.retype("Cooling load at the cold side", "0 W", "100 mW")
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	if v := rowValue(s.results, "COP / Carnot COP"); v == "" || strings.HasPrefix(v, "0 at") {
+		t.Errorf("with a load: COP/Carnot %q", v)
+	}
+	if len(s.caution.Lines) == 0 || !strings.Contains(s.caution.Lines[0], "Sound") {
+		t.Errorf("no sound caution: %q", s.caution.Lines)
+	}
+}
+
+func rowValue(r *Results, label string) string {
+	v, _ := r.Value(label)
+	return v
+}
+
+// TestScreenshotOnsetSolved pictures both screens solved, with one part
+// open, at phone, tablet and desktop sizes and on a tall phone (SHOT_DIR to
+// keep the files).
+func TestScreenshotOnsetSolved(t *testing.T) {
+	for _, id := range []string{"onset", "heatpump"} {
+		env := NewEnv(nil)
+		var s Screen
+		var running, have func() bool
+		var ed *deviceEditor
+		if id == "onset" {
+			o := newOnsetScreen(env).(*onsetScreen)
+			s, running, have, ed = o, o.job.Running, o.job.Has, o.editor
+		} else {
+			p := newHeatPumpScreen(env).(*heatPumpScreen)
+			s, running, have, ed = p, p.job.Running, p.job.Has, p.editor
+		}
+		h := newHarness(t, image.Pt(412, 915), s.Layout)
+		waitSolved(t, h, running, have)
+		ed.selected = 3
+		sizes := shotSizes
+		if os.Getenv("SHOT_DIR") != "" {
+			sizes = append(append([]shotSize(nil), shotSizes...), shotSize{"tallphone", image.Pt(412, 4200)})
+		}
+		for _, sz := range sizes {
+			t.Run(id+"/"+sz.name, func(t *testing.T) {
+				a := NewApp(nil)
+				a.env = env
+				env.open = a.Open
+				a.screens[id] = s
+				a.stack = []string{id}
+				shootApp(t, id+"-solved-"+sz.name, sz.size, a)
+			})
+		}
+	}
+}
