@@ -19,6 +19,8 @@ var catalog = []Entry{
 	{ID: "depths", Title: "Penetration depths", Summary: "Thermal and viscous penetration depths at your gas, temperature, pressure and frequency, with the pore sizes they call for", New: newDepthsScreen},
 	{ID: "pores", Title: "Pores and packing", Summary: "Plates, pores, pins, screens, metal wool or honeycomb: porosity, hydraulic radius, Rott's functions and a verdict for a stack or regenerator", New: newPoresScreen},
 	{ID: "placement", Title: "Stack placement", Summary: "Where a short stack sits in the standing wave: heat-flux and loss factors, critical temperature difference, gas displacement and exchanger length", New: newPlacementScreen},
+	{ID: "onset", Title: "Engine onset", Summary: "Build an engine from parts and find the hot temperature and frequency at which it starts to sing, with profiles and onset against pressure", New: newOnsetScreen},
+	{ID: "heatpump", Title: "Heat pump span", Summary: "Build a loudspeaker-driven heat pump from parts: cold temperature, span, acoustic power and COP, and the best drive frequency", New: newHeatPumpScreen},
 	{ID: "safety", Title: "Safety pass", Summary: "Walk the checks before pressurising: wall stress, relief, test pressure, stored energy, room oxygen, hearing; save the pass in the bench log", New: newSafetyScreen},
 	{ID: "benchlog", Title: "Bench log", Summary: "Saved safety passes with date and time, exported as text", New: newBenchLogScreen},
 }
