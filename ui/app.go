@@ -23,6 +23,9 @@ var Version = "dev"
 // wideAt is the window width from which the catalog stays beside the screen.
 const wideAt = unit.Dp(760)
 
+// sideWidth is the width of the catalog beside the screen on wide windows.
+const sideWidth = unit.Dp(320)
+
 // readable is the widest a screen's column grows on large windows.
 const readable = unit.Dp(760)
 
@@ -173,7 +176,7 @@ func (a *App) Layout(gtx layout.Context) layout.Dimensions {
 				}
 				return a.layoutCatalog(gtx, true)
 			}
-			side := gtx.Dp(320)
+			side := gtx.Dp(sideWidth)
 			return layout.Flex{}.Layout(gtx,
 				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 					gtx.Constraints = layout.Exact(image.Pt(side, gtx.Constraints.Max.Y))

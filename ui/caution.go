@@ -1,7 +1,12 @@
 package ui
 
 import (
+	"image"
+
+	"gioui.org/font"
 	"gioui.org/layout"
+	"gioui.org/op/clip"
+	"gioui.org/op/paint"
 	"gioui.org/unit"
 	"gioui.org/widget/material"
 )
@@ -38,10 +43,15 @@ func (c *Caution) Layout(gtx layout.Context) layout.Dimensions {
 		return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 			children := make([]layout.FlexChild, 0, 1+2*len(c.Lines))
 			children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				l := material.Label(th, unit.Sp(17), "⚠ "+heading)
-				l.Color = col.CautionEdge
-				l.Font.Weight = 700
-				return l.Layout(gtx)
+				return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
+					layout.Rigid(c.mark),
+					layout.Rigid(layout.Spacer{Width: 8}.Layout),
+					layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+						l := material.Label(th, unit.Sp(17), heading)
+						l.Color = col.CautionEdge
+						l.Font.Weight = font.Bold
+						return l.Layout(gtx)
+					}))
 			}))
 			for _, line := range c.Lines {
 				children = append(children,
@@ -56,4 +66,20 @@ func (c *Caution) Layout(gtx layout.Context) layout.Dimensions {
 			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
 		})
 	})
+}
+
+// mark draws the caution sign: an exclamation mark in a filled circle (the
+// embedded fonts have no warning-sign glyph).
+func (c *Caution) mark(gtx layout.Context) layout.Dimensions {
+	d := gtx.Dp(22)
+	size := image.Pt(d, d)
+	paint.FillShape(gtx.Ops, c.env.Colors.CautionEdge, clip.Ellipse{Max: size}.Op(gtx.Ops))
+	gtx.Constraints = layout.Exact(size)
+	layout.Center.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		l := material.Label(c.env.Theme, unit.Sp(15), "!")
+		l.Color = c.env.Colors.CautionBg
+		l.Font.Weight = font.Bold
+		return l.Layout(gtx)
+	})
+	return layout.Dimensions{Size: size}
 }

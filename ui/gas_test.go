@@ -123,3 +123,22 @@ func TestGasScreenTakesBench(t *testing.T) {
 		t.Fatalf("sound speed shown %q, want xenon at 350 K: %q", got, want)
 	}
 }
+
+// TestScreenshotGasStates pictures the gas screen with a helium-xenon
+// mixture, and with a bad pressure, for looking at the error styling.
+func TestScreenshotGasStates(t *testing.T) {
+	env := NewEnv(nil)
+	s := newGasScreen(env).(*gasScreen)
+	if err := s.picker.SetText("helium:0.7,xenon:0.3"); err != nil {
+		t.Fatal(err)
+	}
+	s.press.SetText("10 bar")
+	s.dirty = true
+	shoot(t, "gas-mixture", env, s)
+
+	env = NewEnv(nil)
+	s = newGasScreen(env).(*gasScreen)
+	s.press.SetText("10 bra")
+	s.dirty = true
+	shoot(t, "gas-error", env, s)
+}

@@ -9,6 +9,7 @@ import (
 	"gioui.org/op/paint"
 	"gioui.org/unit"
 	"gonum.org/v1/plot"
+	"gonum.org/v1/plot/font"
 	vgdraw "gonum.org/v1/plot/vg/draw"
 	"gonum.org/v1/plot/vg/vgimg"
 )
@@ -34,11 +35,19 @@ type Plot struct {
 func NewPlot(env *Env) *Plot { return &Plot{env: env} }
 
 // NewXYPlot returns a gonum plot with axis labels that carry their units,
-// e.g. "Frequency (Hz)".
+// e.g. "Frequency (Hz)", in a sans-serif face that sits well beside the
+// app's text.
 func NewXYPlot(xLabel, xUnit, yLabel, yUnit string) *plot.Plot {
 	p := plot.New()
 	p.X.Label.Text = axisLabel(xLabel, xUnit)
 	p.Y.Label.Text = axisLabel(yLabel, yUnit)
+	for _, f := range []*font.Font{
+		&p.Title.TextStyle.Font, &p.Legend.TextStyle.Font,
+		&p.X.Label.TextStyle.Font, &p.Y.Label.TextStyle.Font,
+		&p.X.Tick.Label.Font, &p.Y.Tick.Label.Font,
+	} {
+		f.Variant = "Sans"
+	}
 	return p
 }
 

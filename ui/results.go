@@ -130,7 +130,7 @@ func (r *Results) Layout(gtx layout.Context) layout.Dimensions {
 	if r.failure != "" {
 		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				l := material.Body1(th, "No result. "+r.failure)
+				l := material.Body1(th, "No result: "+r.failure)
 				l.Color = c.Error
 				return Described("No result", l.Layout)(gtx)
 			})

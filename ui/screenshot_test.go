@@ -151,8 +151,9 @@ func shootApp(t *testing.T, file string, size image.Point, a *App) {
 }
 
 // checkShot looks at pixels away from text: the top bar's colour at its left
-// end, a window-background or side-list colour in the bottom-left margin,
-// and enough dark pixels for the text to have been drawn.
+// end, the side list and its divider on wide windows or the page margin on
+// phones at the bottom left, and enough dark pixels for text to have been
+// drawn. Shots are taken at one pixel per dp.
 func checkShot(t *testing.T, a *App, img *image.RGBA) {
 	t.Helper()
 	c := a.env.Colors
@@ -160,7 +161,16 @@ func checkShot(t *testing.T, a *App, img *image.RGBA) {
 	if got := img.RGBAAt(2, 2); !same(got, c.Accent) {
 		t.Errorf("top bar pixel (2,2) = %v, want the accent colour %v", got, c.Accent)
 	}
-	if got := img.RGBAAt(2, b.Max.Y-3); !same(got, c.Background) && !same(got, c.Surface) {
+	if b.Dx() >= int(wideAt) {
+		// The side list's right edge is the app's divider line; at its
+		// left the list (plain or a selected entry).
+		if got := img.RGBAAt(int(sideWidth), b.Max.Y-3); !same(got, c.Divider) {
+			t.Errorf("divider pixel = %v, want %v", got, c.Divider)
+		}
+		if got := img.RGBAAt(2, b.Max.Y-3); !same(got, c.Surface) && !same(got, c.Selected) {
+			t.Errorf("side list pixel = %v, want surface %v or selected %v", got, c.Surface, c.Selected)
+		}
+	} else if got := img.RGBAAt(2, b.Max.Y-3); !same(got, c.Background) && !same(got, c.Surface) {
 		t.Errorf("bottom-left margin pixel = %v, want background %v or surface %v", got, c.Background, c.Surface)
 	}
 	dark := 0
