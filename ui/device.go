@@ -24,12 +24,13 @@ type deviceEditor struct {
 	gas      *GasPicker
 	pressure *Field
 	ambient  *Field
-	hot      *Field // the heat pump's "hot" parts, rarely used; optional
+	hotText  string // the file's "hot_temperature", kept as loaded
 	parts    []*partEditor
 	selected int // index of the expanded part, -1 for none
 	addKind  *Choice
 	add      widget.Clickable
-	examples []widget.Clickable
+	example  string // the built-in example this editor starts from
+	reset    widget.Clickable
 	name     string
 	changed  bool
 	strip    *deviceStrip
@@ -42,18 +43,17 @@ var kindLabels = map[string]string{
 	linear.KindOpenEnd: "Open end",
 }
 
-// newDeviceEditor returns an editor holding the built-in example name.
+// newDeviceEditor returns an editor holding the built-in example name; a
+// button loads it again. The examples are invented demo devices.
 func newDeviceEditor(env *Env, example string) *deviceEditor {
 	e := &deviceEditor{
 		env:      env,
 		pressure: NewField(env, "Mean pressure", units.DimPressure, ""),
 		ambient:  NewField(env, "Ambient temperature", units.DimTemperature, ""),
-		hot:      NewField(env, "Hot temperature (start value; optional)", units.DimTemperature, ""),
 		selected: -1,
-		examples: make([]widget.Clickable, len(linear.ExampleNames())),
+		example:  example,
 		strip:    &deviceStrip{env: env},
 	}
-	e.hot.Hint = "leave empty unless parts at \"hot\" need a value"
 	var addable []string
 	var labels []string
 	for _, k := range linear.Kinds {
@@ -93,7 +93,7 @@ func (e *deviceEditor) set(f *linear.DeviceFile) {
 	}
 	e.pressure.SetText(f.MeanPressure)
 	e.ambient.SetText(f.AmbientTemperature)
-	e.hot.SetText(f.HotTemperature)
+	e.hotText = f.HotTemperature
 	e.parts = e.parts[:0]
 	for _, p := range f.PartsList {
 		e.parts = append(e.parts, newPartEditor(e.env, p))
@@ -109,7 +109,7 @@ func (e *deviceEditor) File() *linear.DeviceFile {
 		Gas:                e.gas.Text(),
 		MeanPressure:       e.pressure.Text(),
 		AmbientTemperature: e.ambient.Text(),
-		HotTemperature:     strings.TrimSpace(e.hot.Text()),
+		HotTemperature:     e.hotText,
 	}
 	for _, p := range e.parts {
 		f.PartsList = append(f.PartsList, p.file())
@@ -119,15 +119,13 @@ func (e *deviceEditor) File() *linear.DeviceFile {
 
 // Update handles the editor's events and reports whether the device changed.
 func (e *deviceEditor) Update(gtx layout.Context) bool {
-	for i := range e.examples {
-		if e.examples[i].Clicked(gtx) {
-			_ = e.load(linear.ExampleNames()[i])
-		}
+	if e.reset.Clicked(gtx) {
+		_ = e.load(e.example)
 	}
 	if e.gas.Update(gtx) {
 		e.changed = true
 	}
-	for _, f := range []*Field{e.pressure, e.ambient, e.hot} {
+	for _, f := range []*Field{e.pressure, e.ambient} {
 		if f.Update(gtx) {
 			e.changed = true
 		}
@@ -246,10 +244,8 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 	th := e.env.Theme
 	ws := []layout.Widget{
 		func(gtx layout.Context) layout.Dimensions {
-			names := linear.ExampleNames()
-			return flow(gtx, gtx.Dp(8), gtx.Dp(8), len(names), func(gtx layout.Context, i int) layout.Dimensions {
-				return smallButton(e.env, gtx, &e.examples[i], "Load "+exampleLabel(names[i])+" example")
-			})
+			gtx.Constraints.Min.X = 0
+			return smallButton(e.env, gtx, &e.reset, "Start again from the "+exampleLabel(e.example)+" example")
 		},
 		e.strip.Layout,
 		Heading(e.env, "Parts, from the start end"),
@@ -267,7 +263,7 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 			return b.Layout(gtx)
 		},
 		Heading(e.env, "Gas and fill"),
-		e.gas.Layout, e.pressure.Layout, e.ambient.Layout, e.hot.Layout,
+		e.gas.Layout, e.pressure.Layout, e.ambient.Layout,
 	)
 	return ws
 }

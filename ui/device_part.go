@@ -245,6 +245,9 @@ func (e *partEditor) layout(gtx layout.Context, i int, open bool) layout.Dimensi
 					return Described("part "+itoa(i+1), l.Layout)(gtx)
 				}),
 				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+					if summary(pf) == "" {
+						return layout.Dimensions{}
+					}
 					l := material.Body2(th, summary(pf))
 					l.Color = c.Muted
 					return l.Layout(gtx)
@@ -260,12 +263,9 @@ func (e *partEditor) layout(gtx layout.Context, i int, open bool) layout.Dimensi
 						l string
 					}{{&e.edit, edit}, {&e.up, "Up"}, {&e.down, "Down"}, {&e.remove, "Remove"}}
 					if e.kind == linear.KindClosedEnd {
-						btns[0].l = "" // nothing to edit
+						btns = btns[1:] // nothing to edit
 					}
 					return flow(gtx, gtx.Dp(6), gtx.Dp(6), len(btns), func(gtx layout.Context, j int) layout.Dimensions {
-						if btns[j].l == "" {
-							return layout.Dimensions{}
-						}
 						return Described(btns[j].l+" part "+itoa(i+1), func(gtx layout.Context) layout.Dimensions {
 							return smallButton(e.env, gtx, btns[j].c, btns[j].l)
 						})(gtx)

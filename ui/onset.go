@@ -57,9 +57,9 @@ func (s *onsetScreen) Title() string { return "Engine onset" }
 // Leave cancels a running solve.
 func (s *onsetScreen) Leave() { s.job.Cancel() }
 
-// sweepPressures are the mean pressures of the onset sweep: a quarter to
+// sweepPressures are the mean pressures of the onset sweep: an eighth to
 // four times the device's, geometric.
-func sweepPressures(pm float64) []float64 { return linear.Grid(pm/4, pm*4, 13, true) }
+func sweepPressures(pm float64) []float64 { return linear.Grid(pm/8, pm*4, 15, true) }
 
 // solveOnset is the job: onset with profiles, then the pressure sweep, one
 // point at a time so that a cancelled job stops early.

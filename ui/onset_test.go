@@ -179,7 +179,7 @@ func TestScreenshotOnsetSolved(t *testing.T) {
 		ed.selected = 3
 		sizes := shotSizes
 		if os.Getenv("SHOT_DIR") != "" {
-			sizes = append(append([]shotSize(nil), shotSizes...), shotSize{"tallphone", image.Pt(412, 4200)})
+			sizes = append(append([]shotSize(nil), shotSizes...), shotSize{"tallphone", image.Pt(412, 5600)})
 		}
 		for _, sz := range sizes {
 			t.Run(id+"/"+sz.name, func(t *testing.T) {
