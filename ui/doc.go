@@ -17,4 +17,29 @@
 //
 // Screens are listed in catalog.go, one line each, and built once by a
 // constructor func(*Env) Screen when first opened.
+//
+// # Adding a screen
+//
+// A screen is a struct made once by its constructor, holding its widgets:
+//
+//	type tubeScreen struct {
+//		env     *Env
+//		page    *Page
+//		length  *Field    // NewField(env, "Tube length", units.DimLength, "147 mm")
+//		ends    *Choice   // NewChoice(env, "Ends", keys, labels)
+//		gas     *GasPicker
+//		results *Results
+//		caution *Caution  // on every screen whose numbers bear on safety
+//		plot    *Plot
+//		solve   *Job[resonator.Result] // for anything slower than a frame
+//	}
+//
+// Its Layout calls Update on each control (which reports a user change),
+// recomputes through the calc packages when something changed (filling
+// Results, setting a field's SetError for a calc.RangeError about it,
+// putting what other screens can use on env.Bench), then lays the widgets
+// out with s.page.Layout(gtx, ...). Enter (optional) runs when the screen
+// comes to the top, e.g. to take env.Bench.Frequency. Tests drive screens
+// through Gio's input router (see harness_test.go: retype, tap, shown) and
+// picture them with shoot (screenshot_test.go).
 package ui
