@@ -36,7 +36,7 @@
 //
 // Its Layout calls Update on each control (which reports a user change),
 // recomputes through the calc packages when something changed (filling
-// Results, setting a field's SetError for a calc.RangeError about it,
+// Results, setting a field's SetError for a units.RangeError about it,
 // putting what other screens can use on env.Bench), then lays the widgets
 // out with s.page.Layout(gtx, ...). Enter (optional) runs when the screen
 // comes to the top, e.g. to take env.Bench.Frequency. Tests drive screens
