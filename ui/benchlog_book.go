@@ -6,7 +6,6 @@ import (
 	"os"
 	"path/filepath"
 	"runtime"
-	"strings"
 	"sync"
 	"time"
 
@@ -141,12 +140,4 @@ func (b *benchBook) Export(p store.Pass) (string, error) {
 func isDamaged(err error) bool {
 	var d *store.DamagedError
 	return errors.As(err, &d)
-}
-
-// firstLine returns s up to its first line break.
-func firstLine(s string) string {
-	if i := strings.IndexByte(s, '\n'); i >= 0 {
-		return s[:i]
-	}
-	return s
 }
