@@ -66,12 +66,7 @@ func (s *diagnoseScreen) Title() string { return "What the pitch says" }
 
 // Enter takes the gas and pressure last used elsewhere.
 func (s *diagnoseScreen) Enter() {
-	b := s.env.Bench
-	if b.Gas != "" && b.Gas != s.picker.Text() && s.picker.SetText(b.Gas) == nil {
-		s.dirty = true
-	}
-	if v, ok := s.press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
-		s.press.SetText(formatPressure(b.Pressure))
+	if takeBench(s.env.Bench, s.picker, nil, s.press) {
 		s.dirty = true
 	}
 }

@@ -158,18 +158,32 @@ func (s *resonanceScreen) Title() string { return "Tube resonance" }
 
 // Enter takes the gas, temperature and pressure last used elsewhere.
 func (s *resonanceScreen) Enter() {
-	b := s.env.Bench
-	if b.Gas != "" && b.Gas != s.picker.Text() && s.picker.SetText(b.Gas) == nil {
+	if takeBench(s.env.Bench, s.picker, s.temp, s.press) {
 		s.dirty = true
 	}
-	if v, ok := s.temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
-		s.temp.SetText(units.Format(b.Temperature, units.DimTemperature))
-		s.dirty = true
+}
+
+// takeBench sets the gas picker and the temperature and pressure fields
+// (each may be nil) from the Bench where it holds other values, and reports
+// whether anything changed.
+func takeBench(b *Bench, picker *GasPicker, temp, press *Field) bool {
+	changed := false
+	if picker != nil && b.Gas != "" && b.Gas != picker.Text() && picker.SetText(b.Gas) == nil {
+		changed = true
 	}
-	if v, ok := s.press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
-		s.press.SetText(formatPressure(b.Pressure))
-		s.dirty = true
+	if temp != nil {
+		if v, ok := temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
+			temp.SetText(units.Format(b.Temperature, units.DimTemperature))
+			changed = true
+		}
 	}
+	if press != nil {
+		if v, ok := press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
+			press.SetText(formatPressure(b.Pressure))
+			changed = true
+		}
+	}
+	return changed
 }
 
 func (s *resonanceScreen) update(gtx layout.Context) {

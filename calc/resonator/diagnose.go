@@ -49,17 +49,7 @@ func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 		t := s.Tube
 		t.Length, t.Radius = x[1], x[2]
 		var warn []string
-		h := func(T float64) float64 {
-			g, err := s.properties(T, x[3])
-			if err != nil {
-				return math.NaN()
-			}
-			r, err := TubeFrequency(t, g)
-			if err != nil {
-				return math.NaN()
-			}
-			return r.Frequency - x[0]
-		}
+		h := func(T float64) float64 { return s.frequencyOf(t, s.Gas, T, x[3]) - x[0] }
 		res, err := numeric.Brent(h, tmin, tmax, &numeric.RootSettings{RelTol: 1e-12})
 		if err != nil {
 			return 0, 0, nil, s.noSolution(x[0], h, tmin, tmax, fmt.Sprintf("gas temperatures %g–%g K", tmin, tmax), err)
@@ -108,17 +98,7 @@ func (s Setup) DiagnoseFraction(first, second *gasprops.Species, fMeas float64) 
 			if err != nil {
 				return math.NaN()
 			}
-			ss := s
-			ss.Gas = mix
-			g, err := ss.properties(x[4], x[3])
-			if err != nil {
-				return math.NaN()
-			}
-			r, err := TubeFrequency(t, g)
-			if err != nil {
-				return math.NaN()
-			}
-			return r.Frequency - x[0]
+			return s.frequencyOf(t, mix, x[4], x[3]) - x[0]
 		}
 		res, err := numeric.Brent(h, 0, 1, &numeric.RootSettings{AbsTol: 1e-12})
 		if err != nil {
@@ -133,6 +113,22 @@ func (s Setup) DiagnoseFraction(first, second *gasprops.Species, fMeas float64) 
 		e.Warnings = append(e.Warnings, "the ± of the mole fraction reaches beyond 0 or 1: the measurement does not pin the mixture down")
 	}
 	return e, err
+}
+
+// frequencyOf returns the resonance frequency of tube t filled with mix at
+// T and p, or NaN where the gas model or the tube refuses the inputs.
+func (s Setup) frequencyOf(t Tube, mix gasprops.Mixture, T, p float64) float64 {
+	ss := s
+	ss.Gas = mix
+	g, err := ss.properties(T, p)
+	if err != nil {
+		return math.NaN()
+	}
+	r, err := TubeFrequency(t, g)
+	if err != nil {
+		return math.NaN()
+	}
+	return r.Frequency
 }
 
 // noSolution builds the error for an inverse problem without a root: a
