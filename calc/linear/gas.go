@@ -52,8 +52,8 @@ func (g MixtureGas) Name() string { return g.Mixture.String() }
 //
 // It is the property model shared by the tests and the independent
 // reference script testdata/gen_onset.py, so that the comparison tests the
-// solver alone. A power law with b ≈ 0.7 is the usual rough fit for
-// helium (from memory; e.g. Swift 2002 quotes such fits for noble gases).
+// solver alone. A power law with b ≈ 0.7 is a rough fit for helium near
+// room temperature and above (from memory, not checked against a table).
 type PowerLawGas struct {
 	Label      string
 	MolarMass  float64 // kg/mol

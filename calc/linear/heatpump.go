@@ -47,7 +47,9 @@ type HeatPumpResult struct {
 // Unknowns: the complex free amplitude at the driver (U1 when the pressure
 // amplitude is given, p1 otherwise) and Tc; residuals: the far-end boundary
 // condition and the mismatch between the integrated Tm at the stack's end
-// and its neighbour's temperature. Damped Newton, as in Onset.
+// and its neighbour's temperature. Damped Newton, as in Onset, started
+// from the linear answer with every part at ambient; when that fails, by
+// continuation in the drive amplitude (a tenth, two tenths, ... of it).
 func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	var in HeatPumpSettings
 	if hs != nil {
@@ -56,7 +58,7 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	set := in.Settings.values()
 	drv := dev.Driver()
 	if drv == nil {
-		return nil, errors.New("heat pump: the first part must be a driver")
+		return nil, &FieldError{Part: 0, Kind: dev.Parts[0].Kind, Field: "kind", Msg: "must be a driver for a heat pump"}
 	}
 	f := in.Frequency
 	if f <= 0 {
@@ -76,22 +78,22 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	for i, s := range m.segs {
 		if s.kind == KindStack {
 			if stack >= 0 {
-				return nil, errors.New("heat pump: the device has more than one stack; the heat pump solve handles one")
+				return nil, &FieldError{Part: i, Kind: KindStack, Msg: "is a second stack; the heat pump solve handles one"}
 			}
 			stack = i
 		}
 	}
 	if stack < 0 {
-		return nil, errors.New("heat pump: the device has no stack")
+		return nil, &FieldError{Part: -1, Msg: "the device has no stack: a heat pump needs one"}
 	}
 	st := &m.segs[stack]
 	coldRight := st.rightRef == TempCold
 	if coldRight == (st.leftRef == TempCold) {
-		return nil, fmt.Errorf("heat pump: exactly one neighbour of the stack (part %d) must be at \"cold\" and the other at \"ambient\" or a value", stack+1)
+		return nil, &FieldError{Part: stack, Kind: KindStack, Msg: "needs exactly one neighbour at \"cold\" (the side it cools) and the other at \"ambient\" or a value"}
 	}
 	if dev.has(TempHot) {
 		if dev.HotTemperature <= 0 {
-			return nil, errors.New("heat pump: parts at \"hot\" need \"hot_temperature\" at the top level")
+			return nil, &FieldError{Part: -1, Field: "hot_temperature", Msg: "is needed: some parts are at \"hot\""}
 		}
 		m.th = dev.HotTemperature
 	}
@@ -102,11 +104,13 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	if !usePressure {
 		amp = complex(drv.VolumeVelocityAmplitude, 0)
 	}
+	ampScale := 1.0 // drive amplitude factor, < 1 during continuation
 	start := func(free complex128) (p0, u0 complex128) {
+		a := amp * complex(ampScale, 0)
 		if usePressure {
-			return amp, free
+			return a, free
 		}
-		return free, amp
+		return free, a
 	}
 	// Start: the linear answer with every part at ambient (two integrations).
 	m.tc, m.runMode = ta, modeLinear
@@ -136,33 +140,56 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	}
 	m.runMode = modeHeatPump
 	load := in.CoolingLoad
-	pb := &newtonProblem{
-		n: 3, x: []float64{real(free), imag(free), ta}, scale: []float64{fs, fs, ta},
-		lo: []float64{-1e3 * fs, -1e3 * fs, 0.05 * ta}, hi: []float64{1e3 * fs, 1e3 * fs, 3 * ta},
-		maxStep: []float64{10 * fs, 10 * fs, 0.1 * ta},
-		tol:     set.Tolerance, maxIter: 2 * set.MaxIterations,
-		f: func(x, r []float64) error {
-			m.tc = x[2]
-			p0, u0 := start(complex(x[0], x[1]))
-			if coldRight {
-				m.h2 = -load
-			} else {
-				m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + load
-			}
-			y, err := m.run(p0, u0, nil)
-			if err != nil {
-				return err
-			}
-			z := m.residual(y)
-			r[0], r[1], r[2] = real(z)/rs, imag(z)/rs, m.stackMis/ta
-			return nil
-		},
+	newProblem := func(x0 []float64) *newtonProblem {
+		return &newtonProblem{
+			n: 3, x: x0, scale: []float64{fs, fs, ta},
+			lo: []float64{-1e3 * fs, -1e3 * fs, 0.05 * ta}, hi: []float64{1e3 * fs, 1e3 * fs, 3 * ta},
+			maxStep: []float64{10 * fs, 10 * fs, 0.1 * ta},
+			tol:     set.Tolerance, maxIter: 2 * set.MaxIterations,
+			f: func(x, r []float64) error {
+				m.tc = x[2]
+				p0, u0 := start(complex(x[0], x[1]))
+				if coldRight {
+					m.h2 = -load
+				} else {
+					m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + load
+				}
+				y, err := m.run(p0, u0, nil)
+				if err != nil {
+					return err
+				}
+				z := m.residual(y)
+				r[0], r[1], r[2] = real(z)/rs, imag(z)/rs, m.stackMis/ta
+				return nil
+			},
+		}
 	}
-	if err := pb.solve(); err != nil {
-		return nil, &ConvergenceError{Solve: "heat pump", Iterations: pb.iterations, Last: pb.x,
+	pb := newProblem([]float64{real(free), imag(free), ta})
+	err = pb.solve()
+	iters, evals := pb.iterations, pb.evaluations
+	if err != nil {
+		// Continuation in the drive amplitude: from a tenth of it, where
+		// the linear start is good, up to the full amplitude, each step
+		// starting from the last answer scaled to the new amplitude.
+		x := []float64{0.1 * real(free), 0.1 * imag(free), ta}
+		for k := 1; k <= 10; k++ {
+			ampScale = float64(k) / 10
+			pb = newProblem(x)
+			err = pb.solve()
+			iters += pb.iterations
+			evals += pb.evaluations
+			if err != nil {
+				break
+			}
+			g := float64(k+1) / float64(k)
+			x = []float64{g * pb.x[0], g * pb.x[1], pb.x[2]}
+		}
+	}
+	if err != nil {
+		return nil, &ConvergenceError{Solve: "heat pump", Iterations: iters, Last: pb.x,
 			Names: []string{"real part of free amplitude", "imaginary part of free amplitude", "cold temperature (K)"}, Why: err.Error()}
 	}
-	res := &HeatPumpResult{Frequency: f, Iterations: pb.iterations, Evaluations: pb.evaluations, CoolingLoad: load}
+	res := &HeatPumpResult{Frequency: f, Iterations: iters, Evaluations: evals, CoolingLoad: load}
 	m.tc = pb.x[2]
 	p0, u0 = start(complex(pb.x[0], pb.x[1]))
 	if coldRight {

@@ -267,3 +267,25 @@ func TestSweeps(t *testing.T) {
 		t.Errorf("span against frequency peaks at the end of the range (index %d)", jmax)
 	}
 }
+
+// TestHeatPumpVolumeVelocityDriver: driving with the volume velocity that
+// the pressure drive produced gives the same state (round trip between the
+// driver's two inputs).
+func TestHeatPumpVolumeVelocityDriver(t *testing.T) {
+	t.Parallel()
+	d, _ := Example("heatpump")
+	r1, err := HeatPump(d, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	d2, _ := Example("heatpump")
+	d2.Parts[0].PressureAmplitude = 0
+	d2.Parts[0].VolumeVelocityAmplitude = r1.DriverFlow
+	r2, err := HeatPump(d2, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !scalar.EqualWithinRel(r2.ColdTemperature, r1.ColdTemperature, 1e-7) || !scalar.EqualWithinRel(r2.DriverPressure, 3000, 1e-6) {
+		t.Errorf("volume-velocity drive: Tc %g K, |p1| %g Pa; pressure drive gave %g K at 3000 Pa", r2.ColdTemperature, r2.DriverPressure, r1.ColdTemperature)
+	}
+}

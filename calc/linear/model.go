@@ -225,7 +225,9 @@ func (m *model) thermoviscous(s *segment, g GasState) (fnu, fk complex128) {
 //	dU1/dx = -iωA (1 + (γ-1) fκ) / (γ pm) p1 + ...       (continuity)
 //
 // (Swift 2002, ch. 4, the momentum and continuity equations written with
-// fν and fκ; from memory, eqs. 4.54 and 4.62-4.70 of that chapter).
+// fν and fκ; the continuity equation's dTm/dx term is added in derivative;
+// equation numbers not checked here, the forms are from memory and agree
+// with the tests' short-stack and Kirchhoff limits).
 func (m *model) coefficients(s *segment, g GasState, fnu, fk complex128) (ca, cb complex128) {
 	iw := complex(0, 1) * m.omega
 	ca = -iw * complex(g.Density/s.gasArea, 0) / (1 - fnu)

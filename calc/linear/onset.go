@@ -1,7 +1,6 @@
 package linear
 
 import (
-	"errors"
 	"fmt"
 	"math"
 )
@@ -98,13 +97,13 @@ var ErrNotConverged = errNotConverged
 func Onset(dev *Device, s *Settings) (*OnsetResult, error) {
 	set := s.values()
 	if !dev.has(TempHot) {
-		return nil, errors.New("onset: no part is at \"hot\": mark the hot exchanger or tube with \"temperature\": \"hot\"")
+		return nil, &FieldError{Part: -1, Msg: "no part is at \"hot\": mark the hot exchanger or tube with \"temperature\": \"hot\" (the onset solve finds that temperature)"}
 	}
 	if !dev.hasKind(KindStack) {
-		return nil, errors.New("onset: the device has no stack")
+		return nil, &FieldError{Part: -1, Msg: "the device has no stack: onset needs one"}
 	}
 	if dev.has(TempCold) {
-		return nil, errors.New("onset: parts at \"cold\" belong to a heat pump; give them \"ambient\" or a value")
+		return nil, &FieldError{Part: -1, Msg: "parts at \"cold\" belong to a heat pump; for onset give them \"ambient\" or a value"}
 	}
 	m, err := newModel(dev, set.Gas, set.RelTol)
 	if err != nil {

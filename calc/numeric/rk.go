@@ -143,7 +143,7 @@ func Integrate(f func(x float64, y, dydx []complex128), x0, x1 float64, y []comp
 // writes the derivative into dydx (len(y) elements) and must not keep the
 // slices. Each step's local error, measured per component as
 // |err_i| / (AbsTol + RelTol·max(|y_i|, |y_new,i|)) in the root-mean-square
-// norm, is kept below 1 (Hairer, Nørsett & Wanner 1993, eq. II.4.11); the
+// norm, is kept below 1 (the usual error norm of Hairer, Nørsett & Wanner 1993, section II.4; from memory); the
 // step is adapted with the usual safety factor 0.9 and exponent 1/5.
 //
 // On failure y holds the state at ODEResult.X and the error wraps

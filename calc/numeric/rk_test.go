@@ -42,7 +42,7 @@ func TestIntegrateExponential(t *testing.T) {
 	}
 }
 
-// TestIntegrateOscillator checks the harmonic oscillator u” = -u as a first
+// TestIntegrateOscillator checks the harmonic oscillator d²u/dx² = -u as a first
 // order system against u = cos x, u' = -sin x (elementary calculus), and the
 // conserved energy u² + u'².
 func TestIntegrateOscillator(t *testing.T) {
