@@ -44,6 +44,20 @@ func (op poreOperating) properties(fl *flags, T, p float64) (gasprops.Properties
 	return props, nil
 }
 
+// depths evaluates the gas at the typed operating point and returns its
+// properties and penetration depths; errors name the flag at fault.
+func (op poreOperating) depths(fl *flags) (props gasprops.Properties, dk, dn float64, err error) {
+	props, err = op.properties(fl, op.temp.Value, op.pres.Value)
+	if err != nil {
+		return props, 0, 0, err
+	}
+	dk, dn, err = pore.PenetrationDepths(props, op.freq.Value)
+	if err != nil {
+		return props, 0, 0, fl.blame(err, "frequency")
+	}
+	return props, dk, dn, nil
+}
+
 // runDepths is `twcalc depths`: the thermal and viscous penetration depths
 // of a gas at a temperature, mean pressure and frequency, and the
 // wavelength. A ± on temperature, pressure or frequency is carried to the
@@ -60,13 +74,9 @@ examples:
 	if err := fl.parse(args); err != nil {
 		return nil, err
 	}
-	props, err := op.properties(fl, op.temp.Value, op.pres.Value)
+	props, dk, dn, err := op.depths(fl)
 	if err != nil {
 		return nil, err
-	}
-	dk, dn, err := pore.PenetrationDepths(props, op.freq.Value)
-	if err != nil {
-		return nil, fl.blame(err, "frequency")
 	}
 	vals := []float64{dk, dn, props.SoundSpeed / op.freq.Value}
 	sig := make([]float64, len(vals))

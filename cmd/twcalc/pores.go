@@ -106,13 +106,9 @@ examples:
 		}
 		return nil, fl.blame(err)
 	}
-	props, err := op.properties(fl, op.temp.Value, op.pres.Value)
+	props, dk, dn, err := op.depths(fl)
 	if err != nil {
 		return nil, err
-	}
-	dk, dn, err := pore.PenetrationDepths(props, op.freq.Value)
-	if err != nil {
-		return nil, fl.blame(err, "frequency")
 	}
 	rl, _ := pore.ParseRole(*role)
 	v, err := pore.Judge(s, rl, dk)
