@@ -117,8 +117,11 @@ type resonanceScreen struct {
 	page    *Page
 	side    *Page
 	head    string // the main answer in one line, shown above the inputs
+	kind    *Choice
 	solve   *Choice
 	tube    *tubeInputs
+	zones   *zoneInputs
+	helm    *helmholtzInputs
 	freq    *Field
 	picker  *GasPicker
 	temp    *Field
@@ -133,11 +136,15 @@ type resonanceScreen struct {
 
 func newResonanceScreen(env *Env) Screen {
 	s := &resonanceScreen{
-		env:     env,
-		page:    NewPage(env),
-		side:    NewPage(env),
+		env:  env,
+		page: NewPage(env),
+		side: NewPage(env),
+		kind: NewChoice(env, "Resonator", []string{"tube", "zones", "helmholtz"},
+			[]string{"Uniform tube", "Hot and cold zones", "Helmholtz resonator"}),
 		solve:   NewChoice(env, "Solve for", []string{"frequency", "length"}, []string{"Frequency from length", "Length from frequency"}),
 		tube:    newTubeInputs(env, "500 mm", "12 mm"),
+		zones:   newZoneInputs(env),
+		helm:    newHelmholtzInputs(env),
 		freq:    NewField(env, "Target frequency", units.DimFrequency, "400 Hz"),
 		picker:  NewGasPicker(env, "air"),
 		temp:    NewField(env, "Mean gas temperature", units.DimTemperature, "20 degC"),
@@ -187,8 +194,11 @@ func takeBench(b *Bench, picker *GasPicker, temp, press *Field) bool {
 }
 
 func (s *resonanceScreen) update(gtx layout.Context) {
-	ch := s.solve.Update(gtx)
+	ch := s.kind.Update(gtx)
+	ch = s.solve.Update(gtx) || ch
 	ch = s.tube.update(gtx) || ch
+	ch = s.zones.update(gtx) || ch
+	ch = s.helm.update(gtx) || ch
 	ch = s.freq.Update(gtx) || ch
 	ch = s.picker.Update(gtx) || ch
 	ch = s.temp.Update(gtx) || ch
@@ -206,16 +216,28 @@ func (s *resonanceScreen) update(gtx layout.Context) {
 	}
 }
 
-// compute solves the tube and fills the results and the plot.
+// compute solves the chosen resonator and fills the results and the plot.
 func (s *resonanceScreen) compute() {
-	r := s.results
-	r.Reset()
+	s.results.Reset()
 	s.last = 0
 	s.head = ""
 	s.plot.Set(nil)
 	s.temp.SetError(nil)
 	s.press.SetError(nil)
 	s.freq.SetError(nil)
+	switch s.kind.Selected() {
+	case "zones":
+		s.computeZones()
+	case "helmholtz":
+		s.computeHelmholtz()
+	default:
+		s.computeTube()
+	}
+}
+
+// computeTube solves the uniform tube.
+func (s *resonanceScreen) computeTube() {
+	r := s.results
 	byLength := s.solve.Selected() == "frequency"
 	tube, lq, rq, terr := s.tube.tube(byLength)
 	mix, gerr := s.picker.Mixture()
@@ -318,23 +340,31 @@ func (s *resonanceScreen) sweepPlot(setup resonator.Setup, T, f float64) *plot.P
 // Layout implements Screen.
 func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	inputs := []layout.Widget{
-		s.solve.Layout,
-		s.tube.ends.Layout,
+	inputs := []layout.Widget{s.kind.Layout}
+	switch s.kind.Selected() {
+	case "zones":
+		inputs = append(inputs, s.tube.ends.Layout)
+		inputs = append(inputs, s.zones.widgets()...)
+		inputs = append(inputs, s.tube.corr.Layout, s.picker.Layout, s.press.Layout)
+	case "helmholtz":
+		inputs = append(inputs, s.helm.volume.Layout, s.helm.neckLength.Layout, s.helm.neckRadius.Layout,
+			s.helm.outer.Layout, s.picker.Layout, s.temp.Layout, s.press.Layout)
+	default:
+		inputs = append(inputs, s.solve.Layout, s.tube.ends.Layout)
+		if s.solve.Selected() == "frequency" {
+			inputs = append(inputs, s.tube.length.Layout)
+		} else {
+			inputs = append(inputs, s.freq.Layout)
+		}
+		inputs = append(inputs,
+			s.tube.radius.Layout,
+			s.tube.corr.Layout,
+			s.tube.mode.Layout,
+			s.picker.Layout,
+			s.temp.Layout,
+			s.press.Layout,
+		)
 	}
-	if s.solve.Selected() == "frequency" {
-		inputs = append(inputs, s.tube.length.Layout)
-	} else {
-		inputs = append(inputs, s.freq.Layout)
-	}
-	inputs = append(inputs,
-		s.tube.radius.Layout,
-		s.tube.corr.Layout,
-		s.tube.mode.Layout,
-		s.picker.Layout,
-		s.temp.Layout,
-		s.press.Layout,
-	)
 	outputs := []layout.Widget{
 		s.results.Layout,
 		func(gtx layout.Context) layout.Dimensions {
@@ -355,16 +385,36 @@ func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 			)
 		},
 		s.plot.Layout,
-		Note(s.env, "Plane waves in a rigid tube. End corrections: Levine & Schwinger (1948) for an unflanged end, "+
-			"Norris & Sheng (1989) for a flanged one, with their dependence on ka. Q from the viscous and thermal boundary "+
-			"layers on the wall (Kirchhoff), the thermal layer on closed end caps and radiation from open ends; the real "+
-			"tube is usually a little lossier. A ± typed on any input is carried to the results to first order."),
+		Note(s.env, s.note()),
 	}
 	label := "Resonance frequency"
-	if s.solve.Selected() == "length" {
+	switch {
+	case s.kind.Selected() == "zones":
+		label = "Lowest mode"
+	case s.kind.Selected() == "tube" && s.solve.Selected() == "length":
 		label = "Tube length"
 	}
 	return splitLayout(gtx, s.env, s.page, s.side, headline(s.env, label, s.head), inputs, outputs)
+}
+
+// note is the assumptions and sources under the results.
+func (s *resonanceScreen) note() string {
+	switch s.kind.Selected() {
+	case "zones":
+		return "Exact plane-wave modes of the zoned tube: pressure and volume velocity are continuous at each joint; " +
+			"each zone has its own sound speed and density from the gas model at its temperature. The travel-time " +
+			"estimate adds up the time sound takes through each zone and ignores the reflections at the joints. " +
+			"Joints between zones are taken as sharp; a real temperature profile is smoother. No losses."
+	case "helmholtz":
+		return "Lumped Helmholtz resonator: the gas in the neck is the mass, the cavity the spring. The neck's inner " +
+			"end opens into the cavity wall and gets the flanged end correction (Norris & Sheng 1989); the outer end " +
+			"gets the one you choose (Levine & Schwinger 1948 for an unflanged end). Valid while the cavity and the " +
+			"neck are small compared with the wavelength."
+	}
+	return "Plane waves in a rigid tube. End corrections: Levine & Schwinger (1948) for an unflanged end, " +
+		"Norris & Sheng (1989) for a flanged one, with their dependence on ka. Q from the viscous and thermal boundary " +
+		"layers on the wall (Kirchhoff), the thermal layer on closed end caps and radiation from open ends; the real " +
+		"tube is usually a little lossier. A ± typed on any input is carried to the results to first order."
 }
 
 // wideMin is the width from which calculator screens put inputs and

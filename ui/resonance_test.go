@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"fmt"
 	"image"
 	"os"
 	"strings"
@@ -94,5 +95,59 @@ func TestResonanceScreenTyping(t *testing.T) {
 	want := wantTube(t, 2, 0.012, 0)
 	if got := units.Format(env.Bench.Frequency, units.DimFrequency); got != want || env.Bench.FrequencyFrom != "Tube resonance" {
 		t.Fatalf("Bench has %q from %q, want %q from Tube resonance", got, env.Bench.FrequencyFrom, want)
+	}
+}
+
+// TestResonanceScreenZonesAndHelmholtz: the zoned tube shows the
+// calculator's modes for the starting zones, and the Helmholtz resonator
+// its frequency; a neck shorter than its radius is refused under the
+// field.
+func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
+	env := NewEnv(nil)
+	s := newResonanceScreen(env)
+	h := newHarness(t, image.Pt(412, 4000), s.Layout)
+	h.tap("Hot and cold zones")
+	air, _ := gasprops.ParseMixture("air")
+	zt := resonator.ZonedTube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Gas: air, Pressure: units.StandardAtmosphere,
+		Zones: []resonator.Zone{{Length: 0.1, Radius: 0.012, Temperature: 600}, {Length: 0.4, Radius: 0.012, Temperature: 293.15}}}
+	want, err := zt.Modes(3)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, m := range want.Modes {
+		got, _ := h.shown(fmt.Sprintf("Mode %d", m.Number))
+		if w := units.Format(m.Frequency, units.DimFrequency); got != w {
+			t.Errorf("mode %d shown %q, want %q", m.Number, got, w)
+		}
+	}
+	h.retype("Zone 1 temperature", "600 K", "700 K")
+	zt.Zones[0].Temperature = 700
+	want, _ = zt.Modes(3)
+	if got, _ := h.shown("Mode 1"); got != units.Format(want.Modes[0].Frequency, units.DimFrequency) {
+		t.Errorf("after 700 K: mode 1 shown %q, want %q", got, units.Format(want.Modes[0].Frequency, units.DimFrequency))
+	}
+
+	h.tap("Helmholtz resonator")
+	g, _ := air.Properties(293.15, units.StandardAtmosphere, nil)
+	hr, _ := resonator.HelmholtzFrequency(resonator.Helmholtz{Volume: 1e-3, NeckLength: 0.05, NeckRadius: 0.01, Outer: resonator.Unflanged}, g)
+	if got, _ := h.shown("Resonance frequency"); got != units.Format(hr.Frequency, units.DimFrequency) {
+		t.Errorf("Helmholtz shown %q, want %q", got, units.Format(hr.Frequency, units.DimFrequency))
+	}
+	h.retype("Neck length", "50 mm", "5 mm")
+	if e := s.(*resonanceScreen).helm.neckRadius.ErrorText(); !strings.Contains(e, "neck radius") {
+		t.Errorf("error under the neck radius %q", e)
+	}
+}
+
+// TestScreenshotResonanceKinds pictures the zoned-tube and Helmholtz forms
+// of the Tube resonance screen at the three sizes (checked like every
+// screenshot; kept as files when SHOT_DIR is set).
+func TestScreenshotResonanceKinds(t *testing.T) {
+	for _, kind := range []string{"zones", "helmholtz"} {
+		env := NewEnv(nil)
+		s := newResonanceScreen(env).(*resonanceScreen)
+		s.kind.Select(kind)
+		s.dirty = true
+		shoot(t, "resonance-"+kind, env, s)
 	}
 }
