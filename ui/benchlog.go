@@ -149,14 +149,7 @@ func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
 			})
 	}
 	if s.status != "" {
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			l := material.Body1(s.env.Theme, s.status)
-			l.Color = s.env.Colors.Text
-			if s.statusBad {
-				l.Color = s.env.Colors.Error
-			}
-			return Described("Export status", l.Layout)(gtx)
-		})
+		ws = append(ws, statusLine(s.env, "Export status", s.status, s.statusBad))
 	}
 	ws = append(ws, Note(s.env, bookFor(s.env).Where()))
 	return s.page.Layout(gtx, ws...)

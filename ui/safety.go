@@ -364,14 +364,7 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 		return s.button(gtx, &s.save, "Save to the bench log", true)
 	})
 	if s.status != "" {
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			l := material.Body1(s.env.Theme, s.status)
-			l.Color = s.env.Colors.Text
-			if s.statusBad {
-				l.Color = s.env.Colors.Error
-			}
-			return Described("Save status", l.Layout)(gtx)
-		})
+		ws = append(ws, statusLine(s.env, "Save status", s.status, s.statusBad))
 	}
 	if s.damaged {
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {

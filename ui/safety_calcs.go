@@ -34,12 +34,15 @@ const pressureHint = "gauge: 30 barg, 435 psig; absolute: 31 bar, 450 psi"
 // calcBase holds what every inline calculator has: its fields (checked
 // for changes each frame), the results card and the caution box.
 type calcBase struct {
-	env     *Env
-	fields  []*Field
-	rec     *record
-	caution *Caution
-	ok      bool
-	dirty   bool
+	env      *Env
+	fields   []*Field
+	extras   []func(gtx layout.Context) bool // other controls: true when changed
+	compute  func()                          // fills rec from the inputs
+	onChange func(f *Field)                  // optional: a field changed by the user
+	rec      *record
+	caution  *Caution
+	ok       bool
+	dirty    bool
 }
 
 func newCalcBase(env *Env, heading string, cautions []string) calcBase {
@@ -54,13 +57,25 @@ func (b *calcBase) field(label string, dim units.Dimension, text, hint string) *
 	return f
 }
 
-// updateFields handles the fields' events and marks the calculator dirty
-// when one changed.
-func (b *calcBase) updateFields(gtx layout.Context) {
+// Update implements inlineCalc: it handles the controls' events and
+// recomputes when one changed.
+func (b *calcBase) Update(gtx layout.Context) {
 	for _, f := range b.fields {
 		if f.Update(gtx) {
 			b.dirty = true
+			if b.onChange != nil {
+				b.onChange(f)
+			}
 		}
+	}
+	for _, x := range b.extras {
+		if x(gtx) {
+			b.dirty = true
+		}
+	}
+	if b.dirty {
+		b.dirty = false
+		b.compute()
 	}
 }
 
@@ -152,6 +167,8 @@ func newWallCalc(env *Env) *wallCalc {
 		labels[i] = f.Label()
 	}
 	c.family = NewChoice(env, "Code family to compare with", keys, labels)
+	c.calcBase.compute = c.compute
+	c.extras = append(c.extras, c.family.Update)
 	return c
 }
 
@@ -163,18 +180,6 @@ func (c *wallCalc) familyOf() safety.CodeFamily {
 		return safety.FamilyOther
 	}
 	return safety.FamilyASME
-}
-
-// Update implements inlineCalc.
-func (c *wallCalc) Update(gtx layout.Context) {
-	c.updateFields(gtx)
-	if c.family.Update(gtx) {
-		c.dirty = true
-	}
-	if c.dirty {
-		c.dirty = false
-		c.compute()
-	}
 }
 
 func (c *wallCalc) compute() {
@@ -247,16 +252,8 @@ func newReliefCalc(env *Env) *reliefCalc {
 	c := &reliefCalc{calcBase: newCalcBase(env, "Relief devices", []string{safety.CautionGeneral, "A relief device must be sized for the worst flow it may have to pass (a failed-open regulator, a fire) and vent somewhere safe; its set pressure alone does not make it adequate."})}
 	c.set = c.field("Relief set pressure", units.DimPressure, "30 barg", pressureHint)
 	c.mawp = c.field("Vessel MAWP", units.DimPressure, "", "from the nameplate; until you type, the lower of the design pressure and the wall's code MAWP; "+pressureHint)
+	c.calcBase.compute = c.compute
 	return c
-}
-
-// Update implements inlineCalc.
-func (c *reliefCalc) Update(gtx layout.Context) {
-	c.updateFields(gtx)
-	if c.dirty {
-		c.dirty = false
-		c.compute()
-	}
 }
 
 func (c *reliefCalc) compute() {
@@ -298,19 +295,9 @@ func newTestCalc(env *Env) *testCalc {
 	c.ratio = c.field("Stress ratio, test to design temperature", units.DimNone, "1", "allowable stress at the test temperature / at the design temperature; 1 if unsure")
 	c.volume = c.field("Gas volume of the rig", units.DimVolume, "5 L", "e.g. 5 L, 0.005 m³, 300 in³")
 	c.gas = NewGasPicker(env, env.Bench.Gas)
+	c.calcBase.compute = c.compute
+	c.extras = append(c.extras, c.gas.Update)
 	return c
-}
-
-// Update implements inlineCalc.
-func (c *testCalc) Update(gtx layout.Context) {
-	c.updateFields(gtx)
-	if c.gas.Update(gtx) {
-		c.dirty = true
-	}
-	if c.dirty {
-		c.dirty = false
-		c.compute()
-	}
 }
 
 func (c *testCalc) compute() {
@@ -374,19 +361,9 @@ func newCylinderCalc(env *Env) *cylinderCalc {
 	c.fill = c.field("Fill pressure", units.DimPressure, "200 bar", "as on the label or gauge; "+pressureHint)
 	c.temp = c.field("Cylinder temperature", units.DimTemperature, "15 degC", "e.g. 15 degC, 288 K")
 	c.gas = NewGasPicker(env, env.Bench.Gas)
+	c.calcBase.compute = c.compute
+	c.extras = append(c.extras, c.gas.Update)
 	return c
-}
-
-// Update implements inlineCalc.
-func (c *cylinderCalc) Update(gtx layout.Context) {
-	c.updateFields(gtx)
-	if c.gas.Update(gtx) {
-		c.dirty = true
-	}
-	if c.dirty {
-		c.dirty = false
-		c.compute()
-	}
 }
 
 func (c *cylinderCalc) compute() {
@@ -441,23 +418,13 @@ func newOxygenCalc(env *Env) *oxygenCalc {
 	c.room = c.field("Room volume", units.DimVolume, "30 m3", "free air volume of the room, e.g. 30 m³, 1000 ft³")
 	c.release = c.field("Gas released", units.DimVolume, "9 m3", "at room conditions: the cylinder's release plus the rig's; e.g. 9 m³")
 	c.vent = c.field("Ventilation", units.DimRate, "0 /h", "fresh-air changes per hour, e.g. 2 /h; 0 when unknown")
-	return c
-}
-
-// Update implements inlineCalc.
-func (c *oxygenCalc) Update(gtx layout.Context) {
-	for _, f := range c.fields {
-		if f.Update(gtx) {
-			c.dirty = true
-			if f == c.release {
-				c.releaseTyped = true
-			}
+	c.calcBase.compute = c.compute
+	c.onChange = func(f *Field) {
+		if f == c.release {
+			c.releaseTyped = true
 		}
 	}
-	if c.dirty {
-		c.dirty = false
-		c.compute()
-	}
+	return c
 }
 
 func (c *oxygenCalc) compute() {
@@ -523,16 +490,8 @@ func newSoundCalc(env *Env) *soundCalc {
 	c := &soundCalc{calcBase: newCalcBase(env, "Hearing", []string{safety.CautionGeneral, safety.CautionHearing})}
 	c.amp = c.field("Pressure amplitude in the resonator", units.DimPressure, "5 kPa", "peak amplitude of the oscillation, e.g. 5 kPa, 0.05 bar")
 	c.ear = c.field("Level measured where people stand", units.DimSoundLevel, "85 dBA", "A-weighted, from a sound level meter, e.g. 85 dBA")
+	c.calcBase.compute = c.compute
 	return c
-}
-
-// Update implements inlineCalc.
-func (c *soundCalc) Update(gtx layout.Context) {
-	c.updateFields(gtx)
-	if c.dirty {
-		c.dirty = false
-		c.compute()
-	}
 }
 
 func (c *soundCalc) compute() {

@@ -5,6 +5,9 @@ import (
 	"math"
 	"strconv"
 
+	"gioui.org/layout"
+	"gioui.org/widget/material"
+
 	"tubewright/calc/safety"
 	"tubewright/calc/units"
 	"tubewright/store"
@@ -103,3 +106,16 @@ func (r *record) text(label, value string) { r.res.AddText(label, value) }
 
 // numbers returns a copy of the recorded numbers.
 func (r *record) numbers() []store.Number { return append([]store.Number(nil), r.nums...) }
+
+// statusLine draws a status sentence (errors in the error colour) as a
+// semantic node described desc.
+func statusLine(env *Env, desc, text string, bad bool) layout.Widget {
+	return func(gtx layout.Context) layout.Dimensions {
+		l := material.Body1(env.Theme, text)
+		l.Color = env.Colors.Text
+		if bad {
+			l.Color = env.Colors.Error
+		}
+		return Described(desc, l.Layout)(gtx)
+	}
+}
