@@ -20,6 +20,7 @@ type onsetScreen struct {
 	env     *Env
 	page    *Page
 	editor  *deviceEditor
+	probe   *Field // a hot temperature at which to show growth or decay
 	job     *Job[*onsetOutcome]
 	dev     *linear.Device // last valid device
 	results *Results
@@ -33,6 +34,9 @@ type onsetOutcome struct {
 	dev   *linear.Device
 	onset *linear.OnsetResult
 	sweep []linear.PressurePoint
+	probe float64            // K, 0 when none
+	mode  *linear.ModeResult // nearest mode at probe
+	merr  error
 }
 
 // newOnsetScreen builds the onset screen with the example engine.
@@ -41,6 +45,7 @@ func newOnsetScreen(env *Env) Screen {
 		env:     env,
 		page:    NewPage(env),
 		editor:  newDeviceEditor(env, "engine"),
+		probe:   NewField(env, "Check a hot temperature below or above onset", units.DimTemperature, "500 K"),
 		job:     NewJob[*onsetOutcome](env.Invalidate),
 		results: NewResults(env),
 		caution: NewCaution(env, "Hot parts, pressure and sound"),
@@ -63,12 +68,15 @@ func sweepPressures(pm float64) []float64 { return linear.Grid(pm/8, pm*4, 15, t
 
 // solveOnset is the job: onset with profiles, then the pressure sweep, one
 // point at a time so that a cancelled job stops early.
-func solveOnset(ctx context.Context, d *linear.Device) (*onsetOutcome, error) {
+func solveOnset(ctx context.Context, d *linear.Device, probe float64) (*onsetOutcome, error) {
 	r, err := linear.Onset(d, nil)
 	if err != nil {
 		return nil, err
 	}
-	out := &onsetOutcome{dev: d, onset: r}
+	out := &onsetOutcome{dev: d, onset: r, probe: probe}
+	if probe > 0 {
+		out.mode, out.merr = linear.Mode(d, probe, &linear.Settings{FrequencyGuess: r.Frequency, NoProfile: true})
+	}
 	set := &linear.Settings{HotGuess: r.HotTemperature, FrequencyGuess: r.Frequency}
 	for _, p := range sweepPressures(d.MeanPressure) {
 		if err := ctx.Err(); err != nil {
@@ -93,7 +101,8 @@ func (s *onsetScreen) start() {
 	}
 	s.dev = d
 	s.status = "Solving…"
-	s.job.Start(func(ctx context.Context) (*onsetOutcome, error) { return solveOnset(ctx, d) })
+	probe, _ := s.probe.Value()
+	s.job.Start(func(ctx context.Context) (*onsetOutcome, error) { return solveOnset(ctx, d, probe) })
 }
 
 func (s *onsetScreen) clearPlots() {
@@ -121,6 +130,20 @@ func (s *onsetScreen) show(o *onsetOutcome, err error) {
 	r.Add("Frequency", res.Frequency, units.DimFrequency)
 	r.Add("Hot / ambient temperature", res.TemperatureRatio, units.DimNone)
 	r.AddText("Newton iterations", fmt.Sprint(res.Iterations))
+	switch {
+	case o.probe <= 0:
+	case o.merr != nil:
+		r.AddText("At "+units.Format(o.probe, units.DimTemperature), "no mode found")
+		r.AddNote(o.merr.Error())
+	default:
+		verdict := "the sound decays"
+		if o.mode.Growing {
+			verdict = "the sound grows"
+		}
+		r.AddText("At "+units.Format(o.probe, units.DimTemperature), verdict)
+		r.AddNote(fmt.Sprintf("nearest mode %s, growth rate %s, Q %s", units.Format(o.mode.Frequency, units.DimFrequency),
+			units.Format(o.mode.GrowthRate, units.DimRate), modeQText(o.mode.Q)))
+	}
 	r.Warn(res.Warnings...)
 	s.caution.Lines = []string{
 		"Hot parts: the hot end must reach about " + units.Format(res.HotTemperature, units.DimTemperature) + " before the engine starts. Heaters, exchangers and walls at this temperature burn skin and can ignite nearby material; let them cool before touching.",
@@ -136,6 +159,14 @@ func (s *onsetScreen) show(o *onsetOutcome, err error) {
 		}
 	}
 	s.plots[4].Set(lineXY(xy, "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure"))
+}
+
+// modeQText formats a quality factor; at onset it is unbounded.
+func modeQText(q float64) string {
+	if q > 1e12 {
+		return "unbounded (at onset)"
+	}
+	return units.Format(q, units.DimNone)
 }
 
 // pressureText is "8 bar (800 kPa)"-style text.
@@ -190,7 +221,11 @@ func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
 	if s.job.Poll() {
 		s.show(s.job.Result())
 	}
-	if s.editor.Update(gtx) {
+	changed := s.editor.Update(gtx)
+	if s.probe.Update(gtx) {
+		changed = true
+	}
+	if changed {
 		s.start()
 	}
 	ws := []layout.Widget{
@@ -204,6 +239,7 @@ func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
 	if len(s.caution.Lines) > 0 {
 		ws = append(ws, s.caution.Layout)
 	}
+	ws = append(ws, s.probe.Layout)
 	ws = append(ws, s.editor.Layout(gtx, s.dev)...)
 	ws = append(ws, Heading(s.env, "Along the device at onset"))
 	for _, p := range s.plots[:4] {

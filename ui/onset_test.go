@@ -193,3 +193,20 @@ func TestScreenshotOnsetSolved(t *testing.T) {
 		}
 	}
 }
+
+// TestOnsetScreenProbe: the growth or decay at a typed hot temperature is
+// the one of linear.Mode (decay below onset, growth above).
+func TestOnsetScreenProbe(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	h := newHarness(t, image.Pt(412, 6000), s.Layout)
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	if v := rowValue(s.results, "At 500 K"); v != "the sound decays" {
+		t.Errorf("at 500 K: %q, want decay (onset of the example is about 711 K)", v)
+	}
+	h.retype("Check a hot temperature below or above onset", "500 K", "800 K")
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	if v := rowValue(s.results, "At 800 K"); v != "the sound grows" {
+		t.Errorf("at 800 K: %q, want growth", v)
+	}
+}
