@@ -190,6 +190,9 @@ func (s *poresScreen) compute() {
 	r.AddText("Rott's fκ", complexText(shape.F(st.dk)))
 	r.AddText("Rott's fν", complexText(shape.F(st.dn)))
 	r.AddNote("Swift's e^{+iωt} convention: Im f < 0")
+	if k := s.shape.Selected(); k == "circular" || k == "rectangular" {
+		r.Warn("porosity is that of the open channel alone (1): the solid between channels is not part of these inputs")
+	}
 	if k := s.shape.Selected(); k == "screens" || k == "fibres" {
 		r.Warn("fκ and fν of screens and fibres are those of a round pore with the same hydraulic radius, an approximation")
 	}

@@ -15,7 +15,8 @@ import (
 // (Swift 2002, ch. 4; from memory, equation numbers not checked here). k is the
 // thermal conductivity, ρ the density, cp the isobaric specific heat and μ
 // the dynamic viscosity, all from p. Inputs must be positive and finite;
-// otherwise the results are NaN: call PenetrationDepths for checked input.
+// otherwise the results are NaN (bad frequency) or NaN/Inf/0 (bad
+// properties): call PenetrationDepths for checked input.
 func Depths(p gasprops.Properties, frequency float64) (deltaKappa, deltaNu float64) {
 	omega := 2 * math.Pi * frequency
 	deltaKappa = math.Sqrt(2 * p.ThermalConductivity / (omega * p.Density * p.IsobaricSpecificHeat))

@@ -60,3 +60,28 @@ func FuzzGeometry(f *testing.F) {
 		}
 	})
 }
+
+// FuzzNames feeds arbitrary text to the parsers of names typed by users:
+// they return a known value or an error, never panic, and a known name
+// round-trips.
+func FuzzNames(f *testing.F) {
+	for _, s := range []string{"steel", "Stainless", " copper ", "gold", "", "stack", "regen", "heat-pump", "\x00"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		if m, err := LookupMaterial(s); err == nil {
+			back, err := LookupMaterial(m.Name)
+			if err != nil || back.Name != m.Name || !(m.Density > 0) {
+				t.Fatalf("%q -> %+v, round trip %+v %v", s, m, back, err)
+			}
+		} else if err.Error() == "" {
+			t.Fatal("empty error")
+		}
+		if r, err := ParseRole(s); err == nil && r != RoleStack && r != RoleRegenerator {
+			t.Fatalf("role %q -> %v", s, r)
+		}
+		if d, err := ParseDevice(s); err == nil && d != Engine && d != HeatPump {
+			t.Fatalf("device %q -> %v", s, d)
+		}
+	})
+}

@@ -141,6 +141,9 @@ examples:
 	if *shape == "screens" || *shape == "fibres" {
 		r.warn("f of screens and fibres is that of a circular pore with the same hydraulic radius, an approximation")
 	}
+	if *shape == "circular" || *shape == "rectangular" || *shape == "wide" {
+		r.warn("porosity is that of the open channel alone (1): the solid between channels is not part of these inputs")
+	}
 	if *shape == "wide" && v.RhOverDelta < 3 {
 		r.warn("the wide-channel (boundary-layer) limit is poor for a hydraulic radius below a few δκ; choose the real shape")
 	}
