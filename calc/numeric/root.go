@@ -189,8 +189,9 @@ func Brent(f func(float64) float64, a, b float64, s *RootSettings) (RootResult, 
 
 // FindBrackets scans [a, b] in n equal sub-intervals and returns, in
 // increasing order of x, every sub-interval [x0, x1] whose end values
-// f(x0), f(x1) have opposite signs (or where f(x1) is exactly zero), ready
-// for Brent. It costs n+1 evaluations of f.
+// f(x0), f(x1) have opposite signs, or where f(x1) is exactly zero (or f(a)
+// for the first one), ready for Brent: each root gives one bracket. It
+// costs n+1 evaluations of f.
 //
 // Poles: a function like tan x changes sign across a pole as well as across
 // a root. A sign change is discarded as a pole when |f| at both ends is
@@ -222,12 +223,14 @@ func FindBrackets(f func(float64) float64, a, b float64, n int) [][2]float64 {
 		fs[i] = f(xs[i])
 	}
 	var out [][2]float64
-	if fs[0] == 0 {
-		out = append(out, [2]float64{xs[0], xs[0]})
-	}
 	for i := 0; i < n; i++ {
 		f0, f1 := fs[i], fs[i+1]
 		if !finite(f0) || !finite(f1) {
+			continue
+		}
+		if i == 0 && f0 == 0 {
+			// a root exactly at a: Brent returns it from the first interval
+			out = append(out, [2]float64{xs[0], xs[1]})
 			continue
 		}
 		if f1 == 0 {

@@ -176,6 +176,14 @@ func TestFindBrackets(t *testing.T) {
 	if len(br) != 1 || br[0][1] != 1 {
 		t.Errorf("x-1 on grid point: brackets %v, want one ending at 1", br)
 	}
+	// a root exactly at a: one bracket that Brent accepts (no empty one)
+	br = FindBrackets(func(x float64) float64 { return x }, 0, 2, 4)
+	if len(br) != 1 || br[0][0] != 0 || br[0][1] <= 0 {
+		t.Fatalf("root at a: brackets %v, want one [0, 0.5]", br)
+	}
+	if r, err := Brent(func(x float64) float64 { return x }, br[0][0], br[0][1], nil); err != nil || r.X != 0 {
+		t.Errorf("root at a: %v, %v", r.X, err)
+	}
 }
 
 func TestRootPanics(t *testing.T) {
