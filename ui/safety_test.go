@@ -263,6 +263,16 @@ func TestScreenshotSafetyStates(t *testing.T) {
 	shoot(t, "safety-review", env, s)
 	lg := newBenchLogScreen(env)
 	shoot(t, "benchlog-pass", env, lg)
+
+	env2 := NewEnv(nil)
+	bad := filepath.Join(dir, "damaged.json")
+	if err := os.WriteFile(bad, []byte(`{"format":"tubewright-benchlog","vers`), 0o600); err != nil {
+		t.Fatal(err)
+	}
+	useBookAt(env2, bad)
+	shoot(t, "benchlog-damaged", env2, newBenchLogScreen(env2))
+	s.goTo(2)
+	shoot(t, "safety-relief", env, s)
 }
 
 // shootTall pictures s at a phone's width and a long page, to see a whole
