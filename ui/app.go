@@ -108,6 +108,7 @@ func (a *App) openRoot(id string) {
 	a.leaveTop()
 	a.stack = append(a.stack[:0], id)
 	a.enterTop()
+	a.env.Invalidate()
 }
 
 // Back pops the top screen and reports whether there was one.
@@ -137,6 +138,16 @@ func (a *App) enterTop() {
 // update handles the app's own events: Back (the Android key, browser
 // history back, Escape on a keyboard, the Back button) and catalog taps.
 func (a *App) update(gtx layout.Context) {
+	if a.back.Clicked(gtx) {
+		a.Back()
+	}
+	for i := range a.entries {
+		if a.entries[i].Clicked(gtx) {
+			a.openRoot(catalog[i].ID)
+		}
+	}
+	// After the taps, so that a screen opened in this frame already claims
+	// Back: the router keeps the filters asked for in the last frame.
 	if len(a.stack) > 0 {
 		// Only claim Back while a screen is open, so that at the catalog
 		// the platform's Back leaves the app as people expect.
@@ -148,14 +159,6 @@ func (a *App) update(gtx layout.Context) {
 			if ke, ok := ev.(key.Event); ok && ke.State == key.Press {
 				a.Back()
 			}
-		}
-	}
-	if a.back.Clicked(gtx) {
-		a.Back()
-	}
-	for i := range a.entries {
-		if a.entries[i].Clicked(gtx) {
-			a.openRoot(catalog[i].ID)
 		}
 	}
 }

@@ -39,6 +39,28 @@ func TestAppNavigation(t *testing.T) {
 		if a.Current() != "" || a.Depth() != 0 {
 			t.Fatalf("%v: Back key left %q on top (depth %d)", size, a.Current(), a.Depth())
 		}
+
+		// The browser asks whether Back was handled right after the tap
+		// that opened a screen, with no frame in between: the frame of
+		// the tap must already claim Back. At the catalog it must not, so
+		// that Back leaves the app.
+		h.clickOnce(h.mustDesc("Working gas").Desc.Bounds)
+		if a.Current() != "gas" {
+			t.Fatalf("%v: tap did not open the gas screen", size)
+		}
+		h.r.Queue(key.Event{Name: key.NameBack, State: key.Press})
+		if _, claimed := h.r.WakeupTime(); !claimed {
+			t.Fatalf("%v: Back not claimed with a screen open", size)
+		}
+		h.frame()
+		if a.Depth() != 0 {
+			t.Fatalf("%v: Back did not pop", size)
+		}
+		h.frame() // the frame Back asked for with Invalidate
+		h.r.Queue(key.Event{Name: key.NameBack, State: key.Press})
+		if _, claimed := h.r.WakeupTime(); claimed {
+			t.Fatalf("%v: Back claimed at the catalog; the platform could not leave the app", size)
+		}
 	}
 }
 

@@ -169,13 +169,20 @@ func (h *harness) dump() string {
 // click presses and releases the primary button at the centre of r, then
 // runs two frames.
 func (h *harness) click(r image.Rectangle) {
+	h.clickOnce(r)
+	h.frame()
+}
+
+// clickOnce is click with a single frame after the release, as a window
+// that draws only when something happens.
+func (h *harness) clickOnce(r image.Rectangle) {
 	c := r.Min.Add(r.Max).Div(2)
 	p := f32.Pt(float32(c.X), float32(c.Y))
 	h.r.Queue(
 		pointer.Event{Kind: pointer.Press, Source: pointer.Mouse, Buttons: pointer.ButtonPrimary, Position: p},
 		pointer.Event{Kind: pointer.Release, Source: pointer.Mouse, Position: p},
 	)
-	h.frames(2)
+	h.frame()
 }
 
 // retype clicks the editor of the field labelled label, replaces its text
