@@ -171,7 +171,8 @@ func kaWarning(ka, fitMax float64) string {
 // an open end, normalised by ρc/S, in the low-frequency limit: (ka)²/4 for
 // an unflanged pipe (Levine & Schwinger 1948) and (ka)²/2 for a flanged one
 // (a piston in a baffle; Kinsler, Frey, Coppens & Sanders, Fundamentals of
-// Acoustics, 4th ed. 2000, section 7.5, low-frequency limit of R1(2ka)).
+// Acoustics, 4th ed. 2000, baffled piston, low-frequency limit of R1(2ka);
+// section cited from memory).
 // NoCorrection is treated as unflanged: the end still radiates.
 func radiationResistance(c EndCorrection, ka float64) float64 {
 	if c == Flanged {

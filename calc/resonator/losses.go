@@ -14,7 +14,7 @@ import (
 //
 // with κ the thermal diffusivity and ν the kinematic viscosity (m²/s),
 // ω = 2πf (G. W. Swift, Thermoacoustics: A Unifying Perspective for Some
-// Engines and Refrigerators, 2002, eqs. 3.9-3.10, from memory).
+// Engines and Refrigerators, 2002, ch. 3; the chapter is cited from memory).
 func Depths(g gasprops.Properties, f float64) (deltaKappa, deltaNu float64) {
 	w := 2 * math.Pi * f
 	return math.Sqrt(2 * g.ThermalDiffusivity / w), math.Sqrt(2 * g.KinematicViscosity / w)

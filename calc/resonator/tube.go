@@ -78,10 +78,10 @@ func (t Tube) check(needLength bool) error {
 //	L_eff = L + δ(ka)·(number of open ends)
 //
 // (Kinsler, Frey, Coppens & Sanders, Fundamentals of Acoustics, 4th ed.
-// 2000, ch. 10, standing waves in pipes). Because δ depends on ka and so on
-// f, the equation is solved with Brent's method. Losses: see
-// KirchhoffAttenuation and Quality. Errors: length, radius not positive,
-// mode outside 1-50, incomplete gas properties.
+// 2000, ch. 10, standing waves in pipes; chapter cited from memory).
+// Because δ depends on ka and so on f, the equation is solved with Brent's
+// method. Losses: see KirchhoffAttenuation and Quality. Errors: length,
+// radius not positive, mode outside 1-50, incomplete gas properties.
 func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
 	if err := t.check(true); err != nil {
 		return Result{}, err

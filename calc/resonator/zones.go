@@ -53,8 +53,8 @@ type ZoneResult struct {
 //	W' = -sin(kℓ)/Z p + cos(kℓ) W,    k = ω/c, Z = ρc/S
 //
 // (Kinsler, Frey, Coppens & Sanders, Fundamentals of Acoustics, 4th ed.
-// 2000, ch. 10, transmission through a duct; continuity of p and U at each
-// joint is built in). A closed end has W = 0, an open end p = 0 at the end
+// 2000, ch. 10, transmission through a duct, cited from memory;
+// continuity of p and U at each joint is built in). A closed end has W = 0, an open end p = 0 at the end
 // of its end correction δ(ka), which is treated as an extension of the end
 // section. The residual at the far end is a smooth function of f without
 // poles; its sign changes are found with numeric.FindBrackets and refined
