@@ -181,6 +181,12 @@ func (s *poresScreen) compute() {
 		return
 	}
 	s.verdict = &v
+	if s.shape.Selected() == "fibres" && s.packing.Selected() == "mass" {
+		if q, err := s.mass.Quantity(); err == nil {
+			d, _ := s.fibreD.Value()
+			r.AddIn("Packed mass for the aim, same volume", q.Value*pore.SolidFractionFor(d, v.TargetRh)/(1-shape.Porosity()), "g")
+		}
+	}
 	r.Add("Hydraulic radius / δκ", v.RhOverDelta, units.DimNone)
 	r.Add("Equivalent plate spacing / δκ (2 r_h/δκ)", v.SpacingOverDelta, units.DimNone)
 	r.Add("Porosity", shape.Porosity(), units.DimNone)

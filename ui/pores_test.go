@@ -2,6 +2,7 @@ package ui
 
 import (
 	"image"
+	"math"
 	"strings"
 	"testing"
 
@@ -65,6 +66,40 @@ func TestPoresScreen(t *testing.T) {
 	if got, _ := h.shown("Porosity"); got != units.Format(fib.Porosity(), units.DimNone) {
 		t.Errorf("metal wool porosity shown %q, want %q", got, units.Format(fib.Porosity(), units.DimNone))
 	}
+	// the mass that hits the aim, fed back, gives the aimed-for r_h
+	role, _ := pore.ParseRole(s.role.Selected()) // regenerator, tapped above
+	v, err := pore.Judge(fib, role, s.results2dk(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	target := 0.03 * pore.SolidFractionFor(25e-6, v.TargetRh) / (1 - fib.Porosity())
+	if got, _ := h.shown("Packed mass for the aim, same volume"); got != mustIn(t, target, "g") {
+		t.Errorf("target mass shown %q, want %q", got, mustIn(t, target, "g"))
+	}
+	back, err := pore.FibresFromMass(25e-6, target, 7900, 50e-6)
+	if err != nil || math.Abs(back.HydraulicRadius()/v.TargetRh-1) > 1e-9 {
+		t.Errorf("target mass %g kg gives r_h %v, aim %g (%v)", target, back.HydraulicRadius(), v.TargetRh, err)
+	}
+}
+
+// results2dk returns δκ at the screen's starting operating point (helium,
+// 300 K, 10 bar, 100 Hz), from the library.
+func (s *poresScreen) results2dk(t *testing.T) float64 {
+	t.Helper()
+	st, err := s.op.evaluate()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return st.dk
+}
+
+func mustIn(t *testing.T, v float64, unit string) string {
+	t.Helper()
+	s, err := units.FormatIn(v, unit)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return s
 }
 
 func mustMM(t *testing.T, v float64) string {

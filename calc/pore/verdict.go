@@ -175,7 +175,7 @@ func suggest(s Shape, t float64) string {
 // from r_h and φ (d = 4 r_h (1-φ)/φ).
 func matrixSuggestion(p *matrix, t float64) string {
 	d := 4 * p.rh * (1 - p.phi) / p.phi
-	phi := 1 - solidFractionFor(d, t)
+	phi := 1 - SolidFractionFor(d, t)
 	if len(p.desc) >= 6 && p.desc[:6] == "woven " {
 		m := meshFor(d, t)
 		if m*d >= 1 {
@@ -190,11 +190,11 @@ func matrixSuggestion(p *matrix, t float64) string {
 
 // solidFractionFor returns the solid fraction of fibres (or screens) of
 // diameter d with hydraulic radius t: from r_h = (1-s)d/(4s), s = d/(d+4t).
-func solidFractionFor(d, t float64) float64 { return d / (d + 4*t) }
+func SolidFractionFor(d, t float64) float64 { return d / (d + 4*t) }
 
 // meshFor returns the mesh count (1/m) of stacked screens of wire d with
 // hydraulic radius t: 1-φ = π m d/4 with φ = 4t/(d+4t).
-func meshFor(d, t float64) float64 { return 4 * solidFractionFor(d, t) / (math.Pi * d) }
+func meshFor(d, t float64) float64 { return 4 * SolidFractionFor(d, t) / (math.Pi * d) }
 
 // pinPitchFor returns the hexagonal pitch for pins of radius ri with
 // hydraulic radius t: r_o² = r_i² + 2 r_i t, pitch = r_o/√(√3/(2π)).

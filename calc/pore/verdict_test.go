@@ -87,7 +87,7 @@ func TestSuggestionRoundTrip(t *testing.T) {
 		s    Shape
 	}{
 		{"screens", must(Screens(meshFor(d, aim), d, 0))},
-		{"fibres", must(Fibres(d, solidFractionFor(d, aim)))},
+		{"fibres", must(Fibres(d, SolidFractionFor(d, aim)))},
 		{"pins", must(Pins(0.1e-3, pinPitchFor(0.1e-3, aim)))},
 		{"honeycomb", must(Honeycomb(cellsFor(0.1e-3, aim), 0.1e-3))},
 	}

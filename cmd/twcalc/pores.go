@@ -138,6 +138,10 @@ examples:
 	r.addValue("rule_of_thumb", v.Rule.Text)
 	r.add("target_hydraulic_radius", v.TargetRh, units.DimLength)
 	r.addValue("suggestion", v.Suggestion)
+	if *shape == "fibres" && fl.given("packed-mass") {
+		// same fibre, same volume: mass scales with the solid fraction
+		r.add("target_packed_mass", mass.Value*pore.SolidFractionFor(fibreD.Value, v.TargetRh)/solidFrac, units.DimMass)
+	}
 	if *shape == "screens" || *shape == "fibres" {
 		r.warn("f of screens and fibres is that of a circular pore with the same hydraulic radius, an approximation")
 	}

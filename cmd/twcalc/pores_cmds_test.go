@@ -167,6 +167,24 @@ func mustPore(s pore.Shape, err error) pore.Shape {
 	return s
 }
 
+// TestPoresTargetMass: packed by mass, the target mass reproduces the
+// aimed-for hydraulic radius when fed back (forward then inverse).
+func TestPoresTargetMass(t *testing.T) {
+	t.Parallel()
+	args := []string{"pores", "--gas", "helium", "--temperature", "300K", "--pressure", "10bar", "--frequency", "100Hz",
+		"--shape", "fibres", "--fibre-diameter", "25um", "--packed-mass", "30g", "--material", "steel", "--packed-volume", "50cm3", "--role", "regenerator"}
+	out := runPoreJSON(t, args...)
+	m := out.num(t, "target_packed_mass", "kg")
+	aim := out.num(t, "target_hydraulic_radius", "m")
+	s, err := pore.FibresFromMass(25e-6, m, 7900, 50e-6)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !scalar.EqualWithinAbsOrRel(s.HydraulicRadius(), aim, 0, 1e-9) {
+		t.Errorf("mass %g kg gives r_h %g, aim %g", m, s.HydraulicRadius(), aim)
+	}
+}
+
 // TestPoresErrors: impossible or missing geometry is a usage error (exit 2)
 // whose one line names the flags.
 func TestPoresErrors(t *testing.T) {
