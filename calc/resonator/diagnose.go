@@ -44,6 +44,9 @@ func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 	if err := s.Tube.check(true); err != nil {
 		return Estimate{}, err
 	}
+	if err := checkPositive("pressure", s.Pressure, "Pa"); err != nil {
+		return Estimate{}, err
+	}
 	tmin, tmax := s.Gas.Range()
 	solve := func(x []float64) (float64, int, []string, error) {
 		t := s.Tube

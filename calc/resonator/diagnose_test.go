@@ -103,4 +103,9 @@ func TestDiagnoseNoSolution(t *testing.T) {
 	if _, err := s.DiagnoseFraction(he, ar, 500); err == nil {
 		t.Error("fraction at 10 K: no error")
 	}
+	s.Pressure = 0
+	var re *units.RangeError
+	if _, err := s.DiagnoseTemperature(500); !errors.As(err, &re) || re.Field != "pressure" {
+		t.Errorf("zero pressure: %v, want a RangeError on the pressure", err)
+	}
 }
