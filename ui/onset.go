@@ -158,7 +158,13 @@ func (s *onsetScreen) show(o *onsetOutcome, err error) {
 			xy = append(xy, plotter.XY{X: p.Pressure / 1e5, Y: p.HotTemperature})
 		}
 	}
-	s.plots[4].Set(lineXY(xy, "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure"))
+	pp := lineXY(xy, "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure")
+	if pp != nil {
+		// Pressures are spaced geometrically: a log axis shows the U.
+		pp.X.Scale = plot.LogScale{}
+		pp.X.Tick.Marker = plot.LogTicks{Prec: -1}
+	}
+	s.plots[4].Set(pp)
 }
 
 // modeQText formats a quality factor; at onset it is unbounded.
