@@ -25,7 +25,7 @@
 //	type tubeScreen struct {
 //		env     *Env
 //		page    *Page
-//		length  *Field    // NewField(env, "Tube length", units.DimLength, "147 mm")
+//		length  *Field    // NewField(env, "Tube length", units.DimLength, "250 mm")
 //		ends    *Choice   // NewChoice(env, "Ends", keys, labels)
 //		gas     *GasPicker
 //		results *Results

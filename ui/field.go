@@ -179,6 +179,12 @@ func (f *Field) update(gtx layout.Context) bool {
 		if !ok {
 			break
 		}
+		if _, ok := ev.(widget.SubmitEvent); ok {
+			// Enter: done with this field; dropping focus also hides a
+			// phone's on-screen keyboard.
+			gtx.Execute(key.FocusCmd{})
+			continue
+		}
 		if _, ok := ev.(widget.ChangeEvent); !ok {
 			continue
 		}
@@ -272,12 +278,12 @@ func (f *Field) hint() string {
 
 // dimHints are the default "what you can type" lines per dimension.
 var dimHints = map[units.Dimension]string{
-	units.DimLength:                "e.g. 147 mm, 14.7 cm, 5.8 in, 0.147 m",
+	units.DimLength:                "e.g. 250 mm, 25 cm, 10 in, 0.25 m",
 	units.DimTemperature:           "e.g. 300 K, 27 degC, 80 degF",
-	units.DimTemperatureDifference: "e.g. 23 K, 23 degC, 41 degF",
+	units.DimTemperatureDifference: "e.g. 40 K, 40 degC, 72 degF",
 	units.DimPressure:              "absolute: 10 bar, 145 psi, 1 MPa; gauge: 9 barg, 130 psig",
 	units.DimStress:                "e.g. 120 MPa, 17 ksi, 120 N/mm²",
-	units.DimFrequency:             "e.g. 578 Hz, 1.2 kHz, 567 Hz ± 8 Hz",
+	units.DimFrequency:             "e.g. 440 Hz, 1.2 kHz, 440 Hz ± 5 Hz",
 	units.DimVolume:                "e.g. 2 L, 2000 cm³, 0.002 m³",
 	units.DimNone:                  "a number, or a percentage such as 30 %",
 }

@@ -5,6 +5,7 @@ import (
 	"strings"
 	"testing"
 
+	"gioui.org/io/key"
 	"gioui.org/layout"
 
 	"tubewright/calc/units"
@@ -53,7 +54,7 @@ func TestFieldUserChangeOnly(t *testing.T) {
 // and it is drawn (found in the semantic tree).
 func TestFieldErrorNamesFieldAndValue(t *testing.T) {
 	env := NewEnv(nil)
-	f := NewField(env, "Tube length", units.DimLength, "147 mm")
+	f := NewField(env, "Tube length", units.DimLength, "250 mm")
 	h := newHarness(t, image.Pt(400, 200), func(gtx layout.Context) layout.Dimensions {
 		f.Update(gtx)
 		return f.Layout(gtx)
@@ -61,9 +62,9 @@ func TestFieldErrorNamesFieldAndValue(t *testing.T) {
 	if f.ErrorText() != "" {
 		t.Fatalf("good input shows an error: %q", f.ErrorText())
 	}
-	h.retype("Tube length", "147 mm", "147 parsec")
+	h.retype("Tube length", "250 mm", "250 parsec")
 	msg := f.ErrorText()
-	if !strings.Contains(msg, "Tube length") || !strings.Contains(msg, "147 parsec") {
+	if !strings.Contains(msg, "Tube length") || !strings.Contains(msg, "250 parsec") {
 		t.Fatalf("error %q should name the field and the input", msg)
 	}
 	if _, err := f.Quantity(); err == nil {
@@ -72,13 +73,13 @@ func TestFieldErrorNamesFieldAndValue(t *testing.T) {
 	if got, _ := h.shown("Tube length error"); got != msg {
 		t.Fatalf("shown error %q, want %q", got, msg)
 	}
-	h.retype("Tube length", "147 parsec", "5.8 in")
+	h.retype("Tube length", "250 parsec", "10 in")
 	if f.ErrorText() != "" {
 		t.Fatalf("error not cleared after a good value: %q", f.ErrorText())
 	}
-	// 5.8 in = 0.14732 m exactly (1 in = 25.4 mm by definition, NIST SP 811, 2008, B.8).
-	if v, _ := f.Value(); v < 0.147319 || v > 0.147321 {
-		t.Fatalf("5.8 in parsed as %v m, want 0.14732", v)
+	// 10 in = 0.254 m exactly (1 in = 25.4 mm by definition, NIST SP 811, 2008, B.8).
+	if v, _ := f.Value(); v < 0.253999 || v > 0.254001 {
+		t.Fatalf("10 in parsed as %v m, want 0.254", v)
 	}
 }
 
@@ -97,5 +98,31 @@ func TestChoiceClick(t *testing.T) {
 	h.tap("Open end")
 	if c.Selected() != "open" || changes != 1 {
 		t.Fatalf("after tap: selected %q with %d changes; want open, 1", c.Selected(), changes)
+	}
+}
+
+// TestFieldEnterDropsFocus checks that Enter in a field ends editing: the
+// field loses focus (a phone then hides its keyboard) and the text stays.
+func TestFieldEnterDropsFocus(t *testing.T) {
+	env := NewEnv(nil)
+	f := NewField(env, "Drive frequency", units.DimFrequency, "600 Hz")
+	var focused bool
+	h := newHarness(t, image.Pt(400, 200), func(gtx layout.Context) layout.Dimensions {
+		f.Update(gtx)
+		d := f.Layout(gtx)
+		focused = gtx.Focused(&f.editor)
+		return d
+	})
+	h.click(h.mustDesc("Drive frequency").Desc.Bounds)
+	if !focused {
+		t.Fatal("tapping the field did not focus it")
+	}
+	h.r.Queue(key.EditEvent{Range: key.Range{Start: 6, End: 6}, Text: "\n"})
+	h.frames(2)
+	if focused {
+		t.Fatal("Enter left the field focused")
+	}
+	if f.Text() != "600 Hz" {
+		t.Fatalf("Enter changed the text to %q", f.Text())
 	}
 }

@@ -69,7 +69,7 @@ func (r *Results) AddIn(label string, v float64, unit string) {
 }
 
 // AddPM appends a row with a value and its standard uncertainty, both SI,
-// e.g. "567 ± 8 Hz". A non-finite uncertainty drops the ± part with a note.
+// e.g. "440 ± 5 Hz". A non-finite uncertainty drops the ± part with a note.
 func (r *Results) AddPM(label string, v, u float64, dim units.Dimension) {
 	switch {
 	case !finite(v):

@@ -14,20 +14,23 @@ import (
 // reason, that values carry their units, and that the rows are drawn.
 func TestResultsNeverShowNaN(t *testing.T) {
 	r := NewResults(NewEnv(nil))
-	r.Add("Frequency", 578.3, units.DimFrequency)
+	r.Add("Frequency", 431.2, units.DimFrequency)
 	r.Add("Broken", math.NaN(), units.DimLength)
 	r.AddIn("Endless length", math.Inf(1), "mm")
-	r.AddPM("Measured", 567, 8, units.DimFrequency)
-	r.AddPM("No sigma", 567, math.NaN(), units.DimFrequency)
-	r.AddIn("Length", 0.147, "mm")
+	r.AddPM("Measured", 440, 5, units.DimFrequency)
+	r.AddPM("No sigma", 440, math.NaN(), units.DimFrequency)
+	r.AddIn("Length", 0.25, "mm")
 	r.Warn("outside the model's range")
+	// The expected texts follow the units package's formatting contract
+	// (SI unit or the chosen one, 4 significant digits); the values are
+	// arbitrary. 0.25 m = 250 mm by definition of the millimetre.
 	cases := []struct{ label, want string }{
-		{"Frequency", "578.3 Hz"},
+		{"Frequency", "431.2 Hz"},
 		{"Broken", "—"},
 		{"Endless length", "—"},
-		{"Measured", units.FormatPM(567, 8, units.DimFrequency)},
-		{"No sigma", "567 Hz"},
-		{"Length", "147 mm"},
+		{"Measured", units.FormatPM(440, 5, units.DimFrequency)},
+		{"No sigma", "440 Hz"},
+		{"Length", "250 mm"},
 	}
 	for _, c := range cases {
 		if got, ok := r.Value(c.label); !ok || got != c.want {

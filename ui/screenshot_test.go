@@ -23,7 +23,7 @@ package ui
 //	func TestScreenshotTubeFilled(t *testing.T) {
 //		env := NewEnv(nil)
 //		s := newTubeScreen(env).(*tubeScreen)
-//		s.length.SetText("147 mm")
+//		s.length.SetText("250 mm")
 //		shoot(t, "tube-filled", env, s)
 //	}
 
