@@ -58,23 +58,23 @@ func TestDepthsScreen(t *testing.T) {
 	}
 
 	// A frequency carried over from another screen is one tap away.
-	env.Bench.SetFrequency(578.2, "Tube resonance")
+	env.Bench.SetFrequency(431.7, "Tube resonance")
 	s.Enter()
 	h.frames(2)
-	h.tap("Use 578.2 Hz from Tube resonance")
-	if txt := s.op.freq.Text(); txt != "578.2 Hz" {
+	h.tap("Use 431.7 Hz from Tube resonance")
+	if txt := s.op.freq.Text(); txt != "431.7 Hz" {
 		t.Fatalf("frequency field reads %q after the tap", txt)
 	}
 	got, _ = h.shown("Thermal penetration depth δκ")
-	if want := wantDepth(t, "helium", 300, 1e6, 578.2, true); got != want {
-		t.Fatalf("δκ at 578.2 Hz shown %q, want %q", got, want)
+	if want := wantDepth(t, "helium", 300, 1e6, 431.7, true); got != want {
+		t.Fatalf("δκ at 431.7 Hz shown %q, want %q", got, want)
 	}
-	if _, ok := h.control("Use 578.2 Hz from Tube resonance"); ok {
+	if _, ok := h.control("Use 431.7 Hz from Tube resonance"); ok {
 		t.Error("the button stays after the frequency was taken")
 	}
 
 	// A bad frequency: error under the field, no stale result.
-	h.retype("Frequency", "578.2 Hz", "-5 Hz")
+	h.retype("Frequency", "431.7 Hz", "-5 Hz")
 	msg, ok := h.shown("Frequency error")
 	if !ok || !strings.Contains(msg, "Frequency") {
 		t.Fatalf("error under the field = %q (found %v)", msg, ok)

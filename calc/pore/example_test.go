@@ -42,14 +42,15 @@ func ExamplePenetrationDepths() {
 	// Output: δκ = 0.1196 mm, δν = 0.1006 mm
 }
 
-// A 20 mm stack centred 20 mm from the closed end of an air-filled tube
-// at 578 Hz, driven at 2 % (numbers hand-checked in placement_test.go).
+// A 20 mm stack centred 25 mm from the closed end of an air-filled tube
+// at 500 Hz, driven at 2 % (python3 as a calculator with the formulas of
+// placement_test.go: kx = 0.22618, ΔT_crit = 94.357 K, ξ = 0.49169 mm).
 func ExamplePlaceStack() {
 	pl, err := pore.PlaceStack(pore.PlacementInput{SoundSpeed: 347.25, Density: 1.1764, Gamma: 1.4,
-		MeanTemperature: 300, MeanPressure: 101325, Frequency: 578, Centre: 0.02, Length: 0.02, DriveRatio: 0.02})
+		MeanTemperature: 300, MeanPressure: 101325, Frequency: 500, Centre: 0.025, Length: 0.02, DriveRatio: 0.02})
 	if err != nil {
 		panic(err)
 	}
 	fmt.Printf("kx = %.4f, ΔT_crit = %.1f K, ξ = %.4f mm\n", pl.KX, pl.CriticalDifference, pl.Displacement*1e3)
-	// Output: kx = 0.2092, ΔT_crit = 118.2 K, ξ = 0.4216 mm
+	// Output: kx = 0.2262, ΔT_crit = 94.4 K, ξ = 0.4917 mm
 }

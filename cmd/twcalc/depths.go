@@ -26,7 +26,7 @@ func declarePoreOperating(fl *flags) poreOperating {
 		gas:      fl.gas("gas", "", "working gas, or a mixture by mole fraction: helium, He, helium:0.7,argon:0.3"),
 		temp:     fl.quantity("temperature", units.DimTemperature, "", "mean gas temperature at the stack: 300K, 27degC, 80degF"),
 		pres:     fl.quantity("pressure", units.DimPressure, "1atm", "mean pressure, absolute (10bar, 145psi) or gauge (30barg)"),
-		freq:     fl.quantity("frequency", units.DimFrequency, "", "operating frequency: 100Hz, 1.2kHz; a ± is carried to the results (567Hz+-8Hz)"),
+		freq:     fl.quantity("frequency", units.DimFrequency, "", "operating frequency: 100Hz, 1.2kHz; a ± is carried to the results (440Hz+-5Hz)"),
 		nonIdeal: fl.boolean("non-ideal", "correct density and sound speed with the second virial coefficient"),
 	}
 }
@@ -70,7 +70,7 @@ Thermoacoustics: A Unifying Perspective (2002), ch. 4.
 
 examples:
   twcalc depths --gas helium --temperature 300K --pressure 10bar --frequency 100Hz
-  twcalc depths --gas air --temperature 20degC --frequency 567Hz+-8Hz --json`)
+  twcalc depths --gas air --temperature 20degC --frequency 440Hz+-5Hz --json`)
 	if err := fl.parse(args); err != nil {
 		return nil, err
 	}

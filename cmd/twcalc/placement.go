@@ -20,7 +20,7 @@ func runPlacement(args []string) (*report, error) {
 in the output. For a full onset calculation use the onset solver.
 
 examples:
-  twcalc placement --gas air --temperature 300K --frequency 578Hz --centre 20mm --stack-length 20mm --drive-ratio 2%
+  twcalc placement --gas air --temperature 300K --frequency 500Hz --centre 25mm --stack-length 20mm --drive-ratio 2%
   twcalc placement --gas helium --temperature 300K --pressure 10bar --frequency 100Hz --centre 0.3m --stack-length 80mm --json`)
 	if err := fl.parse(args); err != nil {
 		return nil, err
