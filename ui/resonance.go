@@ -283,6 +283,9 @@ func (s *resonanceScreen) computeTube() {
 		r.AddPM("Tube length", res.Length, res.LengthSigma, units.DimLength)
 		r.AddIn("Tube length in mm", res.Length, "mm")
 		s.head, _ = r.Value("Tube length")
+		if res.Length < 1 && res.LengthSigma == 0 {
+			s.head, _ = r.Value("Tube length in mm")
+		}
 	}
 	if n := tube.Ends.OpenEnds(); n > 0 {
 		r.AddIn("End correction", res.EndCorrection, "mm")
