@@ -52,12 +52,7 @@ examples:
 		return nil, &usageError{msg: name + ": the first part must be a driver for a heat pump"}
 	}
 	r := newReport()
-	r.input("device", name)
-	if d.Name != "" {
-		r.input("device_name", d.Name)
-	}
-	r.input("gas", d.Gas.String())
-	deviceInputs(r, d)
+	deviceInputs(r, d, name)
 	r.inputQuantity("load", *load, fl.typed("load"))
 	hs := &linear.HeatPumpSettings{Frequency: freq.Value, CoolingLoad: load.Value}
 	if sweep.Set {

@@ -113,12 +113,7 @@ examples:
 	set := &linear.Settings{}
 	set.FrequencyGuess = fguess.Value
 	r := newReport()
-	r.input("device", name)
-	if d.Name != "" {
-		r.input("device_name", d.Name)
-	}
-	r.input("gas", d.Gas.String())
-	deviceInputs(r, d)
+	deviceInputs(r, d, name)
 	switch {
 	case sweep.Set:
 		if below.Value > 0 || *profile {
@@ -200,8 +195,14 @@ func optionalQuantity(name, text string, dim units.Dimension) (units.Quantity, e
 	return q, nil
 }
 
-// deviceInputs records the device's top-level quantities in the report.
-func deviceInputs(r *report, d *linear.Device) {
+// deviceInputs records the device, its name, gas and top-level quantities
+// in the report.
+func deviceInputs(r *report, d *linear.Device, source string) {
+	r.input("device", source)
+	if d.Name != "" {
+		r.input("device_name", d.Name)
+	}
+	r.input("gas", d.Gas.String())
 	r.inputQuantity("mean_pressure", units.Quantity{Value: d.MeanPressure, Dim: units.DimPressure}, strconv.FormatFloat(d.MeanPressure, 'g', -1, 64)+" Pa")
 	r.inputQuantity("ambient_temperature", units.Quantity{Value: d.AmbientTemperature, Dim: units.DimTemperature}, strconv.FormatFloat(d.AmbientTemperature, 'g', -1, 64)+" K")
 }
