@@ -25,6 +25,7 @@ type deviceEditor struct {
 	pressure *Field
 	ambient  *Field
 	hotText  string // the file's "hot_temperature", kept as loaded
+	notes    string // the file's "notes", kept as loaded
 	parts    []*partEditor
 	selected int // index of the expanded part, -1 for none
 	addKind  *Choice
@@ -94,6 +95,7 @@ func (e *deviceEditor) set(f *linear.DeviceFile) {
 	e.pressure.SetText(f.MeanPressure)
 	e.ambient.SetText(f.AmbientTemperature)
 	e.hotText = f.HotTemperature
+	e.notes = f.Notes
 	e.parts = e.parts[:0]
 	for _, p := range f.PartsList {
 		e.parts = append(e.parts, newPartEditor(e.env, p))
@@ -110,6 +112,7 @@ func (e *deviceEditor) File() *linear.DeviceFile {
 		MeanPressure:       e.pressure.Text(),
 		AmbientTemperature: e.ambient.Text(),
 		HotTemperature:     e.hotText,
+		Notes:              e.notes,
 	}
 	for _, p := range e.parts {
 		f.PartsList = append(f.PartsList, p.file())

@@ -150,7 +150,7 @@ func Integrate(f func(x float64, y, dydx []complex128), x0, x1 float64, y []comp
 // ErrMaxSteps, ErrStepTooSmall or ErrNonFinite.
 func (it *Integrator) Integrate(f func(x float64, y, dydx []complex128), x0, x1 float64, y []complex128, s *ODESettings) (ODEResult, error) {
 	if math.IsNaN(x0) || math.IsNaN(x1) || math.IsInf(x0, 0) || math.IsInf(x1, 0) {
-		panic("calc: numeric.Integrate with non-finite limits")
+		panic("numeric: Integrate with non-finite limits")
 	}
 	it.resize(len(y))
 	rtol, atol, h, hmax, maxSteps := DefaultRelTol, DefaultAbsTol, 0.0, math.Abs(x1-x0), DefaultMaxSteps
