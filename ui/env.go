@@ -2,6 +2,7 @@ package ui
 
 import (
 	"math"
+	"sync/atomic"
 
 	"gioui.org/widget/material"
 )
@@ -23,17 +24,32 @@ type Env struct {
 	// frequency from one screen to the next.
 	Bench *Bench
 
-	open func(id string)
+	open   func(id string)
+	notify atomic.Pointer[func()]
 }
 
 // NewEnv returns an Env with the app theme. invalidate may be nil (tests);
 // Open does nothing until an App owns the Env.
 func NewEnv(invalidate func()) *Env {
-	if invalidate == nil {
-		invalidate = func() {}
-	}
 	th, c := NewTheme()
-	return &Env{Theme: th, Colors: c, Invalidate: invalidate, Bench: new(Bench), open: func(string) {}}
+	e := &Env{Theme: th, Colors: c, Bench: new(Bench), open: func(string) {}}
+	e.setInvalidate(invalidate)
+	// Widgets may keep the func value; it always calls the current target.
+	e.Invalidate = func() {
+		if f := e.notify.Load(); f != nil {
+			(*f)()
+		}
+	}
+	return e
+}
+
+// setInvalidate changes what Invalidate calls (nil: nothing). Safe from
+// any goroutine.
+func (e *Env) setInvalidate(f func()) {
+	if f == nil {
+		f = func() {}
+	}
+	e.notify.Store(&f)
 }
 
 // Open shows the screen with the catalog ID id on top of the current one
