@@ -1,6 +1,7 @@
 package linear
 
 import (
+	"errors"
 	"fmt"
 	"math"
 )
@@ -53,7 +54,11 @@ type OnsetResult struct {
 	Evaluations      int     // integrations through the device
 	Converged        bool
 	Profile          Profile // along the device at onset, with p1 = 1 Pa at the start end
-	Warnings         []string
+	// ShortStack is the quick short-stack estimate for the first stack at
+	// the onset frequency (nil when it cannot be made); compare its
+	// CriticalDifference with HotTemperature - ambient.
+	ShortStack *ShortStackResult
+	Warnings   []string
 }
 
 // ConvergenceError reports a solve that did not converge, with its last
@@ -152,7 +157,32 @@ func Onset(dev *Device, s *Settings) (*OnsetResult, error) {
 		}
 	}
 	res.Warnings = m.warnings(res.Frequency, res.HotTemperature)
+	if ss, err := m.shortStack(res.Frequency); err == nil {
+		res.ShortStack = &ss
+	}
 	return res, nil
+}
+
+// shortStack evaluates ShortStack for the first stack at frequency f (Hz):
+// gas at ambient temperature, the stack centre measured from the start end
+// (a closed end, so a pressure antinode), y0 the pores' hydraulic radius.
+func (m *model) shortStack(f float64) (ShortStackResult, error) {
+	for _, s := range m.segs {
+		if s.kind != KindStack {
+			continue
+		}
+		g, err := m.gas.State(m.ta, m.pm)
+		if err != nil {
+			return ShortStackResult{}, err
+		}
+		w := 2 * math.Pi * f
+		return ShortStack(ShortStackInput{
+			Gamma: g.Gamma, Prandtl: g.Prandtl(), MeanTemperature: m.ta, SoundSpeed: g.SoundSpeed,
+			Frequency: f, Position: s.x0 + s.length/2, Length: s.length, HalfGap: s.rh,
+			ThermalDepth: math.Sqrt(2 * g.Conductivity / (g.Density * g.Cp * w)),
+		})
+	}
+	return ShortStackResult{}, errors.New("no stack")
 }
 
 func (d *Device) has(r TempRef) bool {

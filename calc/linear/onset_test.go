@@ -322,3 +322,25 @@ func TestIntegrationPassNoAllocs(t *testing.T) {
 		t.Errorf("%g allocations per integration pass, want 0", n)
 	}
 }
+
+// TestOnsetShortStackEstimate: the quick estimate for the example engine is
+// reported, with its validity numbers, and the full solve needs more than
+// the critical difference (an engine must exceed the critical gradient to
+// pay for its losses: common practice, no published source checked; a
+// check of sign and order only).
+func TestOnsetShortStackEstimate(t *testing.T) {
+	t.Parallel()
+	d, _ := Example("engine")
+	r, err := Onset(d, &Settings{NoProfile: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ss := r.ShortStack
+	if ss == nil {
+		t.Fatal("no short-stack estimate")
+	}
+	span := r.HotTemperature - d.AmbientTemperature
+	if !(ss.CriticalDifference > 0 && ss.CriticalDifference < span) || ss.KDeltaX <= 0 || ss.DepthRatio <= 0 {
+		t.Errorf("short stack %+v against onset span %g K", ss, span)
+	}
+}

@@ -169,6 +169,14 @@ examples:
 	r.add("frequency", res.Frequency, units.DimFrequency)
 	r.add("temperature_ratio", res.TemperatureRatio, units.DimNone)
 	r.addValue("iterations", res.Iterations)
+	if ss := res.ShortStack; ss != nil {
+		r.add("short_stack_critical_difference", ss.CriticalDifference, units.DimTemperatureDifference)
+		r.add("short_stack_k_dx", ss.KDeltaX, units.DimNone)
+		r.add("short_stack_depth_ratio", ss.DepthRatio, units.DimNone)
+		for _, w := range ss.Warnings {
+			r.warn("short-stack estimate: " + w)
+		}
+	}
 	for _, w := range res.Warnings {
 		r.warn(w)
 	}
