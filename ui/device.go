@@ -35,6 +35,7 @@ type deviceEditor struct {
 	name     string
 	changed  bool
 	strip    *deviceStrip
+	saved    deviceFile
 }
 
 // kindLabels are the part kinds as people read them, in linear.Kinds order.
@@ -54,6 +55,7 @@ func newDeviceEditor(env *Env, example string) *deviceEditor {
 		selected: -1,
 		example:  example,
 		strip:    &deviceStrip{env: env},
+		saved:    deviceFile{path: defaultDevicePath(example)},
 	}
 	var addable []string
 	var labels []string
@@ -125,6 +127,7 @@ func (e *deviceEditor) Update(gtx layout.Context) bool {
 	if e.reset.Clicked(gtx) {
 		_ = e.load(e.example)
 	}
+	e.saved.update(gtx, e)
 	if e.gas.Update(gtx) {
 		e.changed = true
 	}
@@ -250,9 +253,12 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 			gtx.Constraints.Min.X = 0
 			return smallButton(e.env, gtx, &e.reset, "Start again from the "+exampleLabel(e.example)+" example")
 		},
+	}
+	ws = append(ws, e.saved.widgets(e.env)...)
+	ws = append(ws,
 		e.strip.Layout,
 		Heading(e.env, "Parts, from the start end"),
-	}
+	)
 	for i := range e.parts {
 		i := i
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {

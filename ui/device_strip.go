@@ -13,7 +13,7 @@ import (
 )
 
 // deviceStrip draws the device to scale as a row of plain shapes: tubes as
-// grey bands, stacks hatched, exchangers coloured by temperature (warm red,
+// grey bands (tinted red when hot, pale blue when cold), stacks hatched, exchangers coloured by temperature (warm red,
 // ambient blue, cold pale blue), cavities as boxes, closed ends as dark
 // bars, a driver as a dark wedge. Length and diameter share one scale.
 type deviceStrip struct {
@@ -24,6 +24,8 @@ type deviceStrip struct {
 // Strip colours (our own).
 var (
 	stripTube     = rgb(0xd9dee4)
+	stripTubeHot  = rgb(0xf2d4d2)
+	stripTubeCold = rgb(0xd6eef8)
 	stripWall     = rgb(0x6b7785)
 	stripStack    = rgb(0xe8d9b5)
 	stripHatch    = rgb(0x8c7a4e)
@@ -92,7 +94,14 @@ func (s *deviceStrip) Layout(gtx layout.Context) layout.Dimensions {
 			rect(x, x+2, 1, stripWall)
 		case linear.KindTube:
 			l := p.Length * scale
-			rect(x, x+l, half, stripTube)
+			fillc := stripTube
+			switch p.Temp {
+			case linear.TempHot:
+				fillc = stripTubeHot
+			case linear.TempCold:
+				fillc = stripTubeCold
+			}
+			rect(x, x+l, half, fillc)
 			paint.FillShape(gtx.Ops, stripWall, clip.Rect(image.Rect(int(x), int(mid-half)-1, int(x+l)+1, int(mid-half)+1)).Op())
 			paint.FillShape(gtx.Ops, stripWall, clip.Rect(image.Rect(int(x), int(mid+half), int(x+l)+1, int(mid+half)+2)).Op())
 			x += l

@@ -210,3 +210,45 @@ func TestOnsetScreenProbe(t *testing.T) {
 		t.Errorf("at 800 K: %q, want growth", v)
 	}
 }
+
+// TestDeviceSaveOpen: Save writes the device atomically and Open reads it
+// back; a damaged file is reported and left as it is, and the editor keeps
+// its device.
+func TestDeviceSaveOpen(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	path := t.TempDir() + "/devices/engine.json"
+	s.editor.saved.path = path
+	h := newHarness(t, image.Pt(412, 6000), s.Layout)
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	h.tap("Save device")
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("Save device: %v (status %q)", err, s.editor.saved.status)
+	}
+	if _, err := linear.ParseDevice(strings.NewReader(string(data))); err != nil {
+		t.Fatalf("saved file does not parse: %v", err)
+	}
+	// Change the device, then open the saved one: the change is undone.
+	h.click(h.mustDesc("Remove part 2").Desc.Bounds)
+	n := len(s.editor.parts)
+	h.tap("Open saved device")
+	if len(s.editor.parts) != n+1 {
+		t.Errorf("Open saved device: %d parts, want %d", len(s.editor.parts), n+1)
+	}
+	// A damaged file: reported, not loaded, not replaced.
+	if err := os.WriteFile(path, []byte(`{"gas": "helium", "parts": [`), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	h.click(h.mustDesc("Remove part 2").Desc.Bounds)
+	h.tap("Open saved device")
+	if st := s.editor.saved.status; !strings.Contains(st, "damaged") || !s.editor.saved.statusIsErr {
+		t.Errorf("damaged file: status %q", st)
+	}
+	if len(s.editor.parts) != n {
+		t.Errorf("damaged file replaced the editor's device (%d parts, want %d)", len(s.editor.parts), n)
+	}
+	if b, _ := os.ReadFile(path); string(b) != `{"gas": "helium", "parts": [` {
+		t.Error("the damaged file was changed")
+	}
+}
