@@ -331,6 +331,9 @@ func (m *model) run(p0, u0 complex128, prof *Profile) ([3]complex128, error) {
 		case KindCavity:
 			T := m.resolve(s.temp, s.tfix)
 			g := m.state(T)
+			if m.err != nil {
+				return m.y, m.wrapErr(s)
+			}
 			y[1] -= complex(0, 1) * m.omega * complex(s.volume/(g.Gamma*m.pm), 0) * y[0]
 			y[2] = complex(T, 0)
 			if prof != nil {
@@ -366,18 +369,16 @@ func (m *model) run(p0, u0 complex128, prof *Profile) ([3]complex128, error) {
 		if err != nil {
 			return m.y, fmt.Errorf("part %d (%s): %w", s.part+1, s.kind, err)
 		}
-		{
-			if m.runMode == modeHeatPump {
-				m.stackMis = real(y[2]) - m.tR
-			}
-			g := m.state(real(y[2]))
-			if m.err != nil {
-				return m.y, m.wrapErr(s)
-			}
-			m.lastState = g
-			m.lastArea = s.gasArea
-			m.lastRadius = 0
+		if m.runMode == modeHeatPump {
+			m.stackMis = real(y[2]) - m.tR
 		}
+		g := m.state(real(y[2]))
+		if m.err != nil {
+			return m.y, m.wrapErr(s)
+		}
+		m.lastState = g
+		m.lastArea = s.gasArea
+		m.lastRadius = 0
 	}
 	return m.y, nil
 }
