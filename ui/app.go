@@ -312,10 +312,13 @@ func (a *App) aboutLine(gtx layout.Context) layout.Dimensions {
 
 // layoutWelcome fills the right pane of a wide window when no screen is open.
 func (a *App) layoutWelcome(gtx layout.Context) layout.Dimensions {
-	return a.welcome.Layout(gtx,
+	ws := []layout.Widget{
 		Heading(a.env, "Pick a calculator"),
 		Para(a.env, "Choose a calculator from the list. Fields accept the units you have at hand: "+
 			"bar, psi or MPa; K, °C or °F (type degC, degF); m, mm or in; Hz or kHz."),
-		a.aboutLine,
-	)
+	}
+	if b := a.env.Bench.Summary(); b != "" {
+		ws = append(ws, Para(a.env, "Carried between screens: "+b+"."))
+	}
+	return a.welcome.Layout(gtx, append(ws, a.aboutLine)...)
 }

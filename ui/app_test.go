@@ -2,6 +2,7 @@ package ui
 
 import (
 	"image"
+	"math"
 	"strings"
 	"testing"
 
@@ -107,5 +108,30 @@ func TestCatalogTable(t *testing.T) {
 		if s := e.New(env); s == nil || s.Title() == "" {
 			t.Errorf("%s: constructor gave no screen or an untitled one", e.ID)
 		}
+	}
+}
+
+// TestBenchCarriesValues checks the Bench setters (finite, positive values
+// only) and its summary text with units. 1 bar = 1e5 Pa by definition (SI
+// Brochure, 9th ed., 2019, Table 8).
+func TestBenchCarriesValues(t *testing.T) {
+	var b Bench
+	if b.Summary() != "" {
+		t.Fatalf("empty bench summary %q", b.Summary())
+	}
+	b.SetGas("helium")
+	b.SetTemperature(300)
+	b.SetPressure(1e6)
+	b.SetFrequency(440, "Tube resonance")
+	for _, bad := range []float64{0, -1, math.NaN(), math.Inf(1)} {
+		b.SetTemperature(bad)
+		b.SetPressure(bad)
+		b.SetFrequency(bad, "nowhere")
+	}
+	if b.Temperature != 300 || b.Pressure != 1e6 || b.Frequency != 440 || b.FrequencyFrom != "Tube resonance" {
+		t.Fatalf("bench kept %+v after bad values", b)
+	}
+	if got, want := b.Summary(), "helium, 300 K, 10 bar, 440 Hz (from Tube resonance)"; got != want {
+		t.Fatalf("summary %q, want %q", got, want)
 	}
 }

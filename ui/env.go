@@ -2,9 +2,12 @@ package ui
 
 import (
 	"math"
+	"strings"
 	"sync/atomic"
 
 	"gioui.org/widget/material"
+
+	"tubewright/calc/units"
 )
 
 // Env is what every screen and widget shares: the theme, a way to ask for a
@@ -108,4 +111,29 @@ func (b *Bench) SetFrequency(hz float64, from string) {
 		b.Frequency = hz
 		b.FrequencyFrom = from
 	}
+}
+
+// Summary describes what the Bench holds for people, e.g. "helium, 300 K,
+// 10 bar, 262.9 Hz (from Engine onset)"; "" when it holds nothing.
+func (b *Bench) Summary() string {
+	var parts []string
+	if b.Gas != "" {
+		parts = append(parts, b.Gas)
+	}
+	if b.Temperature > 0 {
+		parts = append(parts, units.Format(b.Temperature, units.DimTemperature))
+	}
+	if b.Pressure > 0 {
+		if p, err := units.FormatIn(b.Pressure, "bar"); err == nil {
+			parts = append(parts, p)
+		}
+	}
+	if b.Frequency > 0 {
+		f := units.Format(b.Frequency, units.DimFrequency)
+		if b.FrequencyFrom != "" {
+			f += " (from " + b.FrequencyFrom + ")"
+		}
+		parts = append(parts, f)
+	}
+	return strings.Join(parts, ", ")
 }
