@@ -45,6 +45,12 @@ type Field struct {
 	changed  bool
 	codeText string
 	code     bool
+	// parsedAs is the dimension and options of the last parse, so that
+	// changing Dim or Options after NewField re-parses.
+	parsedAs struct {
+		dim units.Dimension
+		opt units.Options
+	}
 }
 
 // NewField returns a field for dimension dim with the given starting text
@@ -83,6 +89,7 @@ func (f *Field) Changed() bool {
 // Quantity returns the parsed value, or the parse error (whose text names
 // the field).
 func (f *Field) Quantity() (units.Quantity, error) {
+	f.fresh()
 	if f.err != nil {
 		return units.Quantity{}, f.err
 	}
@@ -91,6 +98,7 @@ func (f *Field) Quantity() (units.Quantity, error) {
 
 // Value returns the parsed SI value and whether the text parsed.
 func (f *Field) Value() (float64, bool) {
+	f.fresh()
 	if f.err != nil {
 		return 0, false
 	}
@@ -104,6 +112,7 @@ func (f *Field) SetError(err error) { f.extErr = err }
 
 // ErrorText returns the error text shown under the field, or "".
 func (f *Field) ErrorText() string {
+	f.fresh()
 	switch {
 	case f.err != nil:
 		return f.err.Error()
@@ -137,7 +146,15 @@ func (e *FieldError) Error() string {
 // Unwrap returns the parser's error.
 func (e *FieldError) Unwrap() error { return e.Err }
 
+// fresh re-parses when Dim or Options changed since the last parse.
+func (f *Field) fresh() {
+	if f.parsedAs.dim != f.Dim || f.parsedAs.opt != f.Options {
+		f.parse()
+	}
+}
+
 func (f *Field) parse() {
+	f.parsedAs.dim, f.parsedAs.opt = f.Dim, f.Options
 	txt := f.editor.Text()
 	q, err := units.ParseWith(txt, f.Dim, f.Options)
 	if err != nil {

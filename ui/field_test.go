@@ -126,3 +126,16 @@ func TestFieldEnterDropsFocus(t *testing.T) {
 		t.Fatalf("Enter changed the text to %q", f.Text())
 	}
 }
+
+// TestFieldOptionsAfterNew checks that options set after NewField apply to
+// the starting text: a bare number becomes valid once a default unit is set.
+func TestFieldOptionsAfterNew(t *testing.T) {
+	f := NewField(NewEnv(nil), "Temperature", units.DimTemperature, "300")
+	if _, ok := f.Value(); ok {
+		t.Fatal("a bare 300 parsed as a temperature with no default unit")
+	}
+	f.Options.DefaultUnit = "K"
+	if v, ok := f.Value(); !ok || v != 300 {
+		t.Fatalf("with default unit K: %v, %v; want 300 K", v, ok)
+	}
+}
