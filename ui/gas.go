@@ -2,6 +2,7 @@ package ui
 
 import (
 	"errors"
+	"math"
 	"strings"
 
 	"gioui.org/layout"
@@ -63,21 +64,14 @@ func (s *gasScreen) Enter() {
 	}
 }
 
-// near reports whether a and b agree to 1e-9 relative.
+// near reports whether a and b agree to 1e-9 relative (other screens use
+// it too, to see whether a Bench value differs from a field's).
 func near(a, b float64) bool {
-	d := a - b
-	if d < 0 {
-		d = -d
-	}
-	return d <= 1e-9*max(abs(a), abs(b))
+	return math.Abs(a-b) <= 1e-9*max(math.Abs(a), math.Abs(b))
 }
 
-func abs(v float64) float64 {
-	if v < 0 {
-		return -v
-	}
-	return v
-}
+// abs is math.Abs (kept: other screens call it).
+func abs(v float64) float64 { return math.Abs(v) }
 
 // formatPressure writes a pressure in bar for a field's text.
 func formatPressure(pa float64) string {
