@@ -20,8 +20,9 @@ import (
 //	go build -ldflags "-X tubewright/ui.Version=1.2.3" ./cmd/tubewright
 var Version = "dev"
 
-// wideAt is the window width from which the catalog stays beside the screen.
-const wideAt = unit.Dp(760)
+// wideAt is the window width from which the catalog stays beside the screen
+// (a tablet held upright, 768 dp, gets the single column).
+const wideAt = unit.Dp(840)
 
 // sideWidth is the width of the catalog beside the screen on wide windows.
 const sideWidth = unit.Dp(320)
