@@ -18,14 +18,14 @@ type dimInfo struct {
 // exponent ("2e30 m").
 var dims = [...]dimInfo{
 	DimNone:                  {"number", "", true, 1e15, "0.3 or 30 %"},
-	DimLength:                {"length", "m", false, 1e6, "0.147 m or 12 mm"},
+	DimLength:                {"length", "m", false, 1e6, "0.25 m or 12 mm"},
 	DimArea:                  {"area", "m²", false, 1e9, "1.5 cm²"},
 	DimVolume:                {"volume", "m³", false, 1e9, "50 L"},
 	DimTemperature:           {"temperature", "K", false, 1e6, "300 K or 27 °C"},
-	DimTemperatureDifference: {"temperature difference", "K", true, 1e6, "23 K"},
+	DimTemperatureDifference: {"temperature difference", "K", true, 1e6, "40 K"},
 	DimPressure:              {"pressure", "Pa", false, 1e10, "10 bar or 30 barg"},
 	DimStress:                {"stress", "Pa", false, 1e12, "138 MPa"},
-	DimFrequency:             {"frequency", "Hz", false, 1e12, "578 Hz"},
+	DimFrequency:             {"frequency", "Hz", false, 1e12, "440 Hz"},
 	DimRate:                  {"rate", "1/s", false, 1e12, "2 /h"},
 	DimTime:                  {"time", "s", false, 1e12, "10 min"},
 	DimDensity:               {"density", "kg/m³", false, 1e6, "7900 kg/m³"},

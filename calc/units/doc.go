@@ -6,7 +6,7 @@
 //
 //   - Parse and ParseWith read typed input such as "10 bar", "30 barg",
 //     "27 °C", "3/8 in", "0,25 mm", "200 /in", "400 cpsi" or
-//     "567 Hz ± 8 Hz" as a Quantity of a requested Dimension, in SI units,
+//     "440 Hz ± 5 Hz" as a Quantity of a requested Dimension, in SI units,
 //     with an optional uncertainty. Bad input gives a *ParseError that
 //     quotes the input and says what is accepted.
 //   - Format, FormatIn, FormatInDim, FormatGauge, FormatPM and FormatPMIn

@@ -56,7 +56,7 @@ func joinUnit(num, symbol string) string {
 }
 
 // Format writes an SI value of dimension d in d's SI unit with 4
-// significant digits: "578.3 Hz", "101300 Pa", "1.013e7 Pa", "0.147 m".
+// significant digits: "440.3 Hz", "101300 Pa", "1.013e7 Pa", "0.25 m".
 // Plain notation is used for 1e-3 ≤ |v| < 1e6, a short exponent outside.
 // NaN and ±Inf give "—".
 func Format(v float64, d Dimension) string {
@@ -123,7 +123,7 @@ func formatDef(v float64, def *unitDef, atm float64) string {
 }
 
 // FormatPM writes a value and its standard uncertainty u (both SI) in d's
-// SI unit: "567 ± 8 Hz", "0.147 ± 0.0012 m". The uncertainty keeps two
+// SI unit: "440 ± 5 Hz", "0.2500 ± 0.0012 m". The uncertainty keeps two
 // significant digits when its first digit is 1 or 2, one otherwise, and
 // the value is rounded to the same decimal place (common practice in
 // reporting measurements; see JCGM 100:2008 (GUM) 7.2.6, which asks for at

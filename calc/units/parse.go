@@ -7,7 +7,7 @@ import (
 )
 
 // This file reads what people type at the bench: "10 bar", "30 barg",
-// "27 °C", "3/8 in", "0,25 mm", "567 Hz ± 8 Hz".
+// "27 °C", "3/8 in", "0,25 mm", "440 Hz ± 5 Hz".
 
 // Parse reads s as a quantity of dimension dim and returns it in SI units
 // with the default Options. See ParseWith.
@@ -19,7 +19,7 @@ func Parse(s string, dim Dimension) (Quantity, error) {
 //
 // The input is a number, an optional unit and an optional uncertainty after
 // "±", "+-" or "+/-": "10 bar", "10bar", "1 1/2 in", "0,25 mm", "2e-3 m",
-// "567 ± 8 Hz", "0.25 m ± 1 mm", "20 °C ± 2 K", "578 Hz ± 1 %". A number
+// "440 ± 5 Hz", "0.25 m ± 1 mm", "20 °C ± 2 K", "440 Hz ± 1 %". A number
 // may use a decimal point or a decimal comma (not both; a comma followed
 // by exactly three digits, as in "1,500", is refused as ambiguous), an
 // exponent, and for inch sizes a fraction ("3/8", "1 1/2", "1-1/2", "1½").
@@ -118,7 +118,7 @@ func (p *parser) parse() (Quantity, error) {
 	var unc piece
 	if hasPM {
 		if strings.TrimSpace(us) == "" {
-			return Quantity{}, p.fail("has nothing after ±; write e.g. 567 ± 8 Hz", nil)
+			return Quantity{}, p.fail("has nothing after ±; write e.g. 440 ± 5 Hz", nil)
 		}
 		if unc, err = p.readPiece(us); err != nil {
 			return Quantity{}, err

@@ -17,10 +17,10 @@
 //
 // A value with a unit is read by the project's units package and may be
 // written in any common unit, with or without a space: 300K, 27degC, 80degF;
-// 10bar, 145psi, 1.2MPa; 14.7cm, 3/8in, 0.5"; 1.2kHz. Quote a value that
+// 10bar, 145psi, 1.2MPa; 12.5cm, 3/8in, 0.5"; 1.2kHz. Quote a value that
 // contains a space: --temperature "27 degC". Pressures are absolute; a gauge
 // unit (barg, psig) adds the standard atmosphere, 101325 Pa. A measured value
-// may carry its uncertainty, "567Hz+-8Hz" or "567 Hz ± 8 Hz", which commands
+// may carry its uncertainty, "440Hz+-5Hz" or "440 Hz ± 5 Hz", which commands
 // that support it carry through to their results. A working gas is a name or
 // symbol (helium, He) or a mixture by mole fraction, helium:0.7,argon:0.3;
 // fractions that do not sum to 1 within 1 % are refused.

@@ -134,7 +134,7 @@ func (fl *flags) define(d *flagDef) *flagDef {
 
 // quantity declares a flag holding a physical quantity of dimension dim, in
 // any unit units.Parse accepts ("300K", "27 degC", "10bar", "30barg", "3/8 in"),
-// optionally with an uncertainty ("567Hz+-8Hz", "567 Hz ± 8 Hz"). def is the
+// optionally with an uncertainty ("440Hz+-5Hz", "440 Hz ± 5 Hz"). def is the
 // default text; def "" makes the flag required. Pressures come back absolute.
 func (fl *flags) quantity(name string, dim units.Dimension, def, usage string) *units.Quantity {
 	return fl.quantityWith(name, dim, def, usage, units.Options{})

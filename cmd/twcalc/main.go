@@ -116,7 +116,7 @@ func listCommands(cmds []command, w io.Writer) {
 	}
 	tw.Flush()
 	fmt.Fprintln(w, "")
-	fmt.Fprintln(w, "Values take any common unit: 300K, 27degC, 10bar, 30barg, 145psi, 14.7cm, 3/8in.")
+	fmt.Fprintln(w, "Values take any common unit: 300K, 27degC, 10bar, 30barg, 145psi, 12.5cm, 3/8in.")
 	fmt.Fprintln(w, "Quote values with spaces: --temperature \"27 degC\". --json prints one JSON object.")
 }
 
