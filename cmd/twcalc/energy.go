@@ -36,7 +36,7 @@ examples:
 	}
 	r := newReport()
 	fl.echo(r)
-	r.input("pressure_absolute", pres.Value)
+	r.inputSI("pressure_absolute", pres.Value, units.DimPressure)
 	r.add("stored_energy", e.Isentropic, units.DimEnergy)
 	r.add("brode_energy", e.Brode, units.DimEnergy)
 	r.add("tnt_equivalent", e.TNTMass, units.DimMass)

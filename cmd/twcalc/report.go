@@ -102,11 +102,61 @@ func (r *report) inputQuantity(name string, q units.Quantity, typed string) {
 	r.put(&r.inputs, "input", name, v, shown)
 }
 
-// resultJSON is the JSON form of one numeric result.
+// inputSI records an input the command derived rather than read, a number
+// in the SI unit of dim: JSON {"value":V,"unit":"SI unit"}.
+func (r *report) inputSI(name string, v float64, dim units.Dimension) {
+	if !finite(v) {
+		r.fail("internal: input %s is not finite", name)
+		return
+	}
+	r.put(&r.inputs, "input", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, shownSI(v, 0, dim))
+}
+
+// resultJSON is the JSON form of one numeric result. Basis is "gauge" for a
+// pressure measured above the atmosphere and empty otherwise.
 type resultJSON struct {
 	Value       float64  `json:"value"`
 	Unit        string   `json:"unit"`
 	Uncertainty *float64 `json:"uncertainty,omitempty"`
+	Basis       string   `json:"basis,omitempty"`
+}
+
+// benchUnits is the unit the table adds in brackets after an SI value, for
+// people who think in bar, MPa, mm, litres or °C at the bench.
+var benchUnits = map[units.Dimension]string{
+	units.DimPressure:    "bar",
+	units.DimStress:      "MPa",
+	units.DimTemperature: "degC",
+	units.DimVolume:      "L",
+	units.DimEnergy:      "kJ",
+}
+
+// shownSI formats v (or v ± u when u > 0) in the SI unit of dim and, where
+// the bench uses another unit, again in that unit in brackets:
+// "800000 Pa (8 bar)", "710.7 K (437.6 °C)", "2.439e-4 m (0.2439 mm)".
+func shownSI(v, u float64, dim units.Dimension) string {
+	si := units.Format(v, dim)
+	if u > 0 {
+		si = units.FormatPM(v, u, dim)
+	}
+	unit, ok := benchUnits[dim]
+	if dim == units.DimLength && math.Abs(v) < 1 && v != 0 {
+		unit, ok = "mm", true
+	}
+	if !ok {
+		return si
+	}
+	var alt string
+	var err error
+	if u > 0 {
+		alt, err = units.FormatPMIn(v, u, dim, unit)
+	} else {
+		alt, err = units.FormatInDim(v, dim, unit)
+	}
+	if err != nil || strings.ReplaceAll(alt, " ", "") == strings.ReplaceAll(si, " ", "") {
+		return si
+	}
+	return si + " (" + alt + ")"
 }
 
 // add records result name with SI value v of dimension dim.
@@ -115,7 +165,22 @@ func (r *report) add(name string, v float64, dim units.Dimension) {
 		r.fail("internal: result %s is not finite", name)
 		return
 	}
-	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, units.Format(v, dim))
+	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, shownSI(v, 0, dim))
+}
+
+// addGauge records result name, a pressure in Pa above the atmosphere:
+// JSON {"value":V,"unit":"Pa","basis":"gauge"}; the table says "gauge" and
+// repeats the value in barg.
+func (r *report) addGauge(name string, v float64) {
+	if !finite(v) {
+		r.fail("internal: result %s is not finite", name)
+		return
+	}
+	shown := units.Format(v, units.DimPressure) + " gauge"
+	if b, err := units.FormatInDim(v, units.DimPressure, "bar"); err == nil {
+		shown += " (" + b + "g)"
+	}
+	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(units.DimPressure), Basis: "gauge"}, shown)
 }
 
 // addPM records result name with SI value v and standard uncertainty u;
@@ -129,7 +194,7 @@ func (r *report) addPM(name string, v, u float64, dim units.Dimension) {
 		r.add(name, v, dim)
 		return
 	}
-	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim), Uncertainty: &u}, units.FormatPM(v, u, dim))
+	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim), Uncertainty: &u}, shownSI(v, u, dim))
 }
 
 // addValue records a result that is not a number with a unit (a verdict, a

@@ -67,3 +67,48 @@ func TestReportZeroUncertainty(t *testing.T) {
 		t.Errorf("empty warnings/cautions not written as []: %s", b.String())
 	}
 }
+
+// TestReportBenchUnits: the table repeats SI values in the units of the
+// bench, and a gauge pressure says so in both forms. Conversion factors are
+// the SI definitions (1 bar = 1e5 Pa, 1 MPa = 1e6 Pa, 0 °C = 273.15 K; BIPM SI
+// Brochure 2019).
+func TestReportBenchUnits(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		name  string
+		build func(r *report)
+		table string // expected in the table line
+		json  string // expected in the JSON
+	}{
+		{"pressure in bar", func(r *report) { r.add("p", 8e5, units.DimPressure) }, "800000 Pa (8 bar)", `"unit":"Pa"`},
+		{"stress in MPa", func(r *report) { r.add("s", 2.658e7, units.DimStress) }, "(26.58 MPa)", `"unit":"Pa"`},
+		{"temperature in degC", func(r *report) { r.add("t", 373.15, units.DimTemperature) }, "373.1 K (100 °C)", `"unit":"K"`},
+		{"small length in mm", func(r *report) { r.add("l", 2.5e-4, units.DimLength) }, "(0.25 mm)", `"unit":"m"`},
+		{"long length stays in m", func(r *report) { r.add("l", 2.5, units.DimLength) }, "l  2.5 m\n", `"unit":"m"`},
+		{"gauge pressure", func(r *report) { r.addGauge("g", 3e6) }, "3e6 Pa gauge (30 barg)", `"basis":"gauge"`},
+		{"derived input", func(r *report) { r.inputSI("i", 1e6, units.DimPressure) }, "1e6 Pa (10 bar)", `"unit":"Pa"`},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			t.Parallel()
+			r := newReport()
+			c.build(r)
+			if r.err != nil {
+				t.Fatal(r.err)
+			}
+			var text, js bytes.Buffer
+			if err := r.writeText(&text); err != nil {
+				t.Fatal(err)
+			}
+			if err := r.writeJSON(&js); err != nil {
+				t.Fatal(err)
+			}
+			if !strings.Contains(text.String(), c.table) {
+				t.Errorf("table %q does not contain %q", text.String(), c.table)
+			}
+			if !strings.Contains(strings.Join(strings.Fields(js.String()), ""), c.json) {
+				t.Errorf("JSON %s does not contain %s", js.String(), c.json)
+			}
+		})
+	}
+}

@@ -42,7 +42,7 @@ examples:
 	}
 	r := newReport()
 	fl.echo(r)
-	r.input("pressure_gauge", float64(P))
+	r.inputSI("pressure_gauge", float64(P), units.DimStress)
 	r.addValue("pressure_basis", "gauge: pressures below are above the atmosphere (101325 Pa)")
 	r.add("hoop_stress", lame.Hoop, units.DimStress)
 	r.add("longitudinal_stress", lame.Longitudinal, units.DimStress)
@@ -80,7 +80,7 @@ examples:
 		}
 		mawp = s.MAWP
 		r.add("minimum_wall_thickness", s.MinThickness, units.DimLength)
-		r.add("max_allowable_pressure", float64(s.MAWP), units.DimPressure)
+		r.addGauge("max_allowable_pressure", float64(s.MAWP))
 		r.addValue("wall_adequate", s.WallEnough)
 		r.addValue("thickness_clause", s.ClauseThickCircum+" / "+s.ClauseThickLong)
 		r.addValue("pressure_clause", s.ClauseMAWPCircum+" / "+s.ClauseMAWPLong)
@@ -100,11 +100,11 @@ examples:
 			return nil, fl.blame(err)
 		}
 		if fam == safety.FamilyASME {
-			r.add("hydrostatic_test_pressure", float64(tp.ASMEHydrostatic), units.DimPressure)
-			r.add("pneumatic_test_pressure", float64(tp.ASMEPneumatic), units.DimPressure)
+			r.addGauge("hydrostatic_test_pressure", float64(tp.ASMEHydrostatic))
+			r.addGauge("pneumatic_test_pressure", float64(tp.ASMEPneumatic))
 			r.addValue("test_pressure_basis", "ASME VIII-1 UG-99(b) 1.3 × MAWP × stress ratio; UG-100(b) 1.1 × MAWP × stress ratio; gauge")
 		} else {
-			r.add("eu_test_pressure", float64(tp.EUHydrostatic), units.DimPressure)
+			r.addGauge("eu_test_pressure", float64(tp.EUHydrostatic))
 			r.addValue("test_pressure_basis", "PED 2014/68/EU Annex I 7.4: max(1.25 × PS × stress ratio, 1.43 × PS), PS = the entered pressure; gauge")
 		}
 		cautions = append(cautions, tp.Cautions[1:]...)
