@@ -6,7 +6,6 @@ import (
 	"os"
 	"path/filepath"
 	"runtime"
-	"sync"
 	"time"
 
 	"tubewright/store"
@@ -16,45 +15,32 @@ import (
 // file on desktop (os.UserConfigDir()/tubewright/benchlog.json), or memory
 // only where there is no file system (the browser build) or no config
 // folder. The safety screen saves into it and the bench-log screen lists
-// it; both reach the same book through bookFor(env).
+// it; both reach the same book through bookFor(env), which keeps it in
+// the Env.
 type benchBook struct {
 	path string     // "" means memory only
 	mem  *store.Log // the log in memory-only mode
 	why  string     // why the book is in memory, for the screen's note
 }
 
-// books holds the book of each Env. It lives outside Env because Env is
-// the app shell's type; one entry per App, touched on the UI goroutine
-// (the mutex only guards against tests running in parallel).
-var (
-	booksMu sync.Mutex
-	books   = map[*Env]*benchBook{}
-)
-
 // bookFor returns env's bench log book, opening the default place on
-// first use.
+// first use. Called on the UI goroutine only.
 func bookFor(env *Env) *benchBook {
-	booksMu.Lock()
-	defer booksMu.Unlock()
-	if b, ok := books[env]; ok {
-		return b
+	if env.book == nil {
+		env.book = defaultBook()
 	}
-	b := defaultBook()
-	books[env] = b
-	return b
+	return env.book
 }
 
 // useBookAt makes env's book the file path ("" for memory only). Tests use
 // it with t.TempDir(); call it before the screens are first laid out.
 func useBookAt(env *Env, path string) *benchBook {
-	booksMu.Lock()
-	defer booksMu.Unlock()
 	b := &benchBook{path: path}
 	if path == "" {
 		b.mem = store.NewLog()
 		b.why = "This build keeps the bench log in memory only"
 	}
-	books[env] = b
+	env.book = b
 	return b
 }
 

@@ -29,6 +29,8 @@ type Env struct {
 
 	open   func(id string)
 	notify atomic.Pointer[func()]
+	book   *benchBook // the bench log of the safety screens; see bookFor
+
 }
 
 // NewEnv returns an Env with the app theme. invalidate may be nil (tests);
