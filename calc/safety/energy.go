@@ -9,10 +9,13 @@ import (
 )
 
 // TNTSpecificEnergy is the energy equivalent of TNT used for the TNT
-// equivalent mass, J/kg: the conventional value 4.184 MJ/kg, the same
-// convention that defines the "ton of TNT" as 4.184 × 10⁹ J (B. N. Taylor
-// and A. Thompson, NIST Special Publication 811, Guide for the Use of the
-// International System of Units, 2008, Appendix B.8, from memory).
+// equivalent mass, J/kg: the conventional value 4.184 MJ/kg (one
+// kilocalorie per gram), the convention that defines the "ton of TNT" as
+// 4.184 × 10⁹ J (listed as such in B. N. Taylor and A. Thompson, NIST
+// Special Publication 811, 2008, Appendix B.8: from memory, the listing
+// not seen here). ASME PCC-2-2008, Article 5.1, Mandatory Appendix II,
+// eq. (II-3), divides by 4 266 920 J/kg instead, so its TNT mass for the
+// same energy is 1.9 % smaller; results here state the constant used.
 const TNTSpecificEnergy = 4.184e6
 
 // StoredEnergy is the energy a gas charge could release if its vessel
@@ -35,11 +38,13 @@ type StoredEnergy struct {
 //	Brode:       E = (p − pa) V/(γ−1)
 //
 // The isentropic value is the work the gas can do expanding adiabatically
-// and reversibly to pa (the form used for pneumatic test energy, e.g. ASME
-// PCC-2, Article 501, Mandatory Appendix II, from memory); Brode's value is
-// the energy to raise the pressure of the gas at constant volume and is
-// always larger (H. L. Brode, "Blast wave from a spherical charge", Physics
-// of Fluids 2, 217, 1959, from memory). Both assume an ideal gas.
+// and reversibly to pa: D. A. Crowl, Understanding Explosions, AIChE/CCPS,
+// 2003, Appendix B, eq. (B-2); the same form is ASME PCC-2-2008, Article
+// 5.1, Mandatory Appendix II, eq. (II-1), for pneumatic test energy. Brode's
+// value is the energy to raise the pressure of the gas at constant volume
+// from pa to p, Crowl eq. (B-1), after H. L. Brode, "Blast wave from a
+// spherical charge", Physics of Fluids 2, 217, 1959; it is always larger.
+// Both assume an ideal gas.
 //
 // Errors: p ≤ pa (nothing stored), V ≤ 0, gamma ≤ 1 (*units.RangeError).
 func ExpansionEnergy(p, pa units.Pressure, V, gamma float64) (StoredEnergy, error) {
@@ -78,8 +83,9 @@ func ExpansionEnergy(p, pa units.Pressure, V, gamma float64) (StoredEnergy, erro
 // 5/3). The returned warnings hold the gas model's and, when the gas
 // departs from the ideal gas by more than 2 % (Z from
 // gasprops.Mixture.Compressibility), a note that the formulas assume an
-// ideal gas. Gas-model errors (temperature out of range) are returned
-// unchanged.
+// ideal gas. The cautions include GasCautions(m) (hydrogen burns; carbon
+// dioxide is toxic). Gas-model errors (temperature out of range) are
+// returned unchanged.
 func GasExpansionEnergy(m gasprops.Mixture, T units.Temperature, p, pa units.Pressure, V float64) (StoredEnergy, []string, error) {
 	if !finite(float64(p)) || p <= 0 {
 		return StoredEnergy{}, nil, units.NewRangeError("pressure (absolute)", float64(p), 0, math.Inf(1), "Pa")
@@ -93,6 +99,9 @@ func GasExpansionEnergy(m gasprops.Mixture, T units.Temperature, p, pa units.Pre
 		warns = append(warns, fmt.Sprintf("the energy formulas assume an ideal gas (here Z = %.3f)", z))
 	}
 	s, err := ExpansionEnergy(p, pa, V, props.Gamma)
+	if err == nil {
+		s.Cautions = append(s.Cautions, GasCautions(m)...)
+	}
 	return s, warns, err
 }
 

@@ -13,8 +13,11 @@ import (
 const AirOxygen = 0.209
 
 // OxygenDeficient is the threshold below which air is oxygen-deficient,
-// 19.5 % by volume: US OSHA 29 CFR 1910.134(b), definition of
-// "oxygen deficient atmosphere".
+// 19.5 % by volume: US OSHA 29 CFR 1910.134, which "considers any
+// atmosphere with an oxygen level below 19.5 percent to be oxygen-deficient
+// and immediately dangerous to life or health" (paragraph (d)(2)(iii), in
+// OSHA's interpretation letter of 2 April 2007 to FirePASS Corporation);
+// the same 19.5 % is the definition in 1910.134(b) (wording from memory).
 const OxygenDeficient = 0.195
 
 // RoomModel is how released gas and room air are assumed to mix.
@@ -90,18 +93,21 @@ type Oxygen struct {
 //	sealed:       x = 0.209 Vroom/(Vroom + Vrel)
 //
 // and the largest release keeping x ≥ 0.195 (solve each for Vrel). The
-// well-mixed result is the dilution equation of a stirred volume with
-// outflow, dC/dV = −C/Vroom (ACGIH, Industrial Ventilation: A Manual of
-// Recommended Practice, dilution ventilation chapter, from memory); the
-// other two follow from conservation of the room's air (displacement: the
-// air left is Vroom − Vrel; sealed: the air stays and the total becomes
-// Vroom + Vrel). The same three estimates appear in industrial gas safety
-// guidance on oxygen-deficient atmospheres (e.g. the BCGA guidance note
-// on reduced oxygen atmospheres, from memory).
+// displacement form is the one university safety offices use for a full
+// release, %O2 = 100 × 0.2095 (Vr − Vg)/Vr, with the 19.5 % minimum
+// recommended by the BCGA (University of Nottingham Safety Office, oxygen
+// depletion calculator, nottingham.ac.uk/safetyCalculators; we take
+// 20.9 %, see AirOxygen). The well-mixed result is the room purge
+// (dilution) equation ln(C_end/C_start) = −Q t/V of industrial hygiene,
+// with the released gas as the purge volume Q t; the sealed result follows
+// from conservation of the room's air (the air stays, the total becomes
+// Vroom + Vrel). The sealed and well-mixed forms are derived here, not
+// quoted from a guidance note.
 //
 // With a ventilation rate n (air changes per second, ≥ 0; 0 for none) the
-// oxygen deficit decays as exp(−n t) in a well-mixed room (same dilution
-// equation), so the time back to 19.5 % is
+// oxygen deficit decays as exp(−n t) in a well-mixed room (the room purge
+// equation D_t = (V/Q) ln(C_initial/C_ending), e.g. as written on
+// tickerdossier.com/wiki/dilution-equation), so the time back to 19.5 % is
 //
 //	t = ln((0.209 − x)/(0.209 − 0.195)) / n.
 //

@@ -7,9 +7,12 @@ import "fmt"
 type Relief struct {
 	Set  GaugePressure // set pressure, gauge, Pa
 	MAWP GaugePressure // gauge, Pa
-	// OK is Set ≤ MAWP: a single relief device opens at or below the MAWP
-	// (ASME BPVC Section VIII Division 1, UG-134(a) (2019 and earlier
-	// numbering; from memory)).
+	// OK is Set ≤ MAWP: "When a single pressure relief device is used,
+	// the set pressure marked on the device shall not exceed the maximum
+	// allowable working pressure of the vessel" (ASME BPVC Section VIII
+	// Division 1, UG-134(a), as quoted on prochemic.com, "Set pressure –
+	// ASME – PED", 2023). Several devices may be set higher under the
+	// same paragraph; that case is not covered here.
 	OK       bool
 	Message  string
 	Cautions []string

@@ -108,11 +108,17 @@ const (
 //
 // The required thickness is the greater of the two, plus c; the MAWP is the
 // lesser. One joint efficiency is used for both joints. Units: Pa and m.
-// Sources: ASME BPVC Section VIII Division 1, UG-27(c) and Mandatory
-// Appendix 1-2 (formulas and limits as quoted in public summaries; the
-// 1-2 logarithmic form from memory). Earlier editions wrote 1-2(a)(1) as
-// t = R(√Z − 1), Z = (S E + P)/(S E − P); the two differ by well under 1 %
-// where 1-2 applies at ordinary pressures.
+// Sources: ASME BPVC Section VIII Division 1, UG-27(c)(1) and (c)(2)
+// (formulas as reproduced in the table "General Vessel Formulas" of the
+// 1983 edition, and with their limits P ≤ 0.385 S E and P ≤ 1.25 S E on
+// engineersedge.com, "Thin Wall Pressure Vessels ASME Equation"); Mandatory
+// Appendix 1, 1-2(a)(1) and (a)(2), formulas (1) to (4) and the rule that
+// they apply "when the thickness ... exceeds one-half of the inside radius,
+// or when P exceeds 0.385SE" (1.25SE for (a)(2)), as reproduced from a
+// recent edition (scribd.com document 217723344, "Mandatory Appendices").
+// Earlier editions wrote 1-2(a)(1) as t = R(√Z − 1), Z = (S E + P)/(S E − P)
+// (from memory); the two differ by well under 1 % where 1-2 applies at
+// ordinary pressures.
 //
 // Between P = 0.385 S E and S E ln 1.5 ≈ 0.405 S E the two sets overlap:
 // Appendix 1-2 gives a thickness under R/2 for which UG-27 gives a MAWP

@@ -31,14 +31,21 @@ type LimitCheck struct {
 }
 
 // Occupational noise limits compared with (dB). EU Directive 2003/10/EC
-// (noise), Article 3: exposure limit values L_EX,8h = 87 dB(A) and
-// p_peak = 200 Pa (140 dB(C)); upper exposure action values 85 dB(A) and
-// 140 Pa (137 dB(C)); lower exposure action values 80 dB(A) and 112 Pa
-// (135 dB(C)). US OSHA 29 CFR 1910.95: permissible exposure 90 dBA over
-// 8 hours (Table G-16, 5 dB exchange rate), action level 85 dBA 8-hour
-// time-weighted average (1910.95(c)), impulsive or impact noise not to
-// exceed 140 dB peak (1910.95(b)(1) footnote). All from memory of the
-// published texts.
+// (noise), Article 3(1): "(a) exposure limit values: L_EX,8h = 87 dB(A) and
+// p_peak = 200 Pa ... (b) upper exposure action values: L_EX,8h = 85 dB(A)
+// and p_peak = 140 Pa ... (c) lower exposure action values: L_EX,8h =
+// 80 dB(A) and p_peak = 112 Pa" (text of Article 3 as reproduced by CEJN,
+// "Directive 2003/10/EC – Noise"); the directive's footnotes give the peak
+// values as 140, 137 and 135 dB(C) re 20 µPa (as listed by Placid
+// Instruments, "Noise at work: a practical guide to EU Directive
+// 2003/10/EC"; 20 log10(200/20e-6) = 140 checks the first). US OSHA
+// 29 CFR 1910.95: Table G-16, 90 dBA for 8 hours down to 115 dBA for
+// 1/4 hour (osha.gov text of 1910.95); the 85 dBA 8-hour time-weighted
+// average that starts monitoring and the hearing conservation programme
+// (1910.95(c), (d); as summarised by Harvard EHS, "Noise"); impulsive or
+// impact noise not to exceed 140 dB peak sound pressure level (Table G-16
+// footnote, as quoted in the same wording by the Wyoming mine rule and
+// secondary summaries; the osha.gov excerpt seen here stops before it).
 var occupationalLimits = []LimitCheck{
 	{Name: "EU 2003/10/EC lower exposure action value", Level: 80, Metric: "8-hour daily exposure, dB(A)", Uses: "rms"},
 	{Name: "EU 2003/10/EC upper exposure action value", Level: 85, Metric: "8-hour daily exposure, dB(A)", Uses: "rms"},
@@ -104,7 +111,9 @@ func AmplitudeOfSPL(L float64) float64 {
 // limit value, which takes hearing protection into account; the upper
 // action value 85 dB(A) already requires protection to be worn. Sources:
 // 29 CFR 1910.95 Appendix A (formula T = 8/2^((L−90)/5)); Directive
-// 2003/10/EC Annex I (L_EX,8h definition); both from memory.
+// 2003/10/EC Article 2 (L_EX,8h definition, from memory). The OSHA form
+// reproduces Table G-16a of 1910.95 Appendix A (osha.gov): 95 dB 4 h,
+// 100 dB 2 h, 115 dB 0.25 h, 87 dB 12.1 h.
 func PermittedHours(L float64) (osha, eu float64) {
 	osha = 8 / math.Pow(2, (L-90)/5)
 	eu = 8 * math.Pow(10, (87-L)/10)

@@ -72,7 +72,8 @@ func TestLevelLimits(t *testing.T) {
 func TestPermittedHours(t *testing.T) {
 	t.Parallel()
 	// OSHA 1910.95 Table G-16: 90 dBA 8 h, 95 dBA 4 h, 100 dBA 2 h,
-	// 115 dBA 0.25 h (from memory of the table).
+	// 115 dBA 0.25 h (osha.gov text of 1910.95 and of Appendix A,
+	// Table G-16a).
 	// EU: L_EX,8h = 87 dB(A) at 87 dB(A) for 8 h, 90 dB(A) about 4 h
 	// (equal energy, 3 dB halving).
 	cases := []struct{ L, osha, eu float64 }{
@@ -86,5 +87,19 @@ func TestPermittedHours(t *testing.T) {
 		o, e := PermittedHours(c.L)
 		near(t, "OSHA", o, c.osha, 1e-12)
 		near(t, "EU", e, c.eu, 1e-12)
+	}
+	// OSHA 1910.95 Appendix A, Table G-16a, reference durations T (hours)
+	// as printed (osha.gov, "Appendix A to § 1910.95 - Noise Exposure
+	// Computation"), to the digits printed: the formula must round to them.
+	table := []struct{ L, T, halfDigit float64 }{
+		{80, 32, 0.5}, {85, 16, 0.5}, {87, 12.1, 0.05}, {91, 7.0, 0.05},
+		{92, 6.1, 0.05}, {97, 3.0, 0.05}, {106, 0.87, 0.005},
+		{110, 0.5, 0.05}, {120, 0.125, 0.0005}, {130, 0.031, 0.0005},
+	}
+	for _, r := range table {
+		o, _ := PermittedHours(r.L)
+		if math.Abs(o-r.T) > r.halfDigit {
+			t.Errorf("OSHA %g dBA: %.4g h, Table G-16a prints %g h", r.L, o, r.T)
+		}
 	}
 }

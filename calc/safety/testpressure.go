@@ -30,12 +30,25 @@ type TestPressures struct {
 //	ASME VIII-1 UG-100(b), pneumatic:   PT = 1.1 × MAWP × LSR
 //	PED 2014/68/EU Annex I 7.4:          PT = max(1.25 × PS × ratio, 1.43 × PS)
 //
-// Sources: ASME BPVC Section VIII Division 1 (2019), UG-99(b) and UG-100(b)
-// (factors as quoted in public summaries of the code; earlier editions used
-// 1.5 and 1.25); Directive 2014/68/EU, Annex I, section 7.4 (from memory:
-// "the greater of the maximum loading at PS and TS multiplied by 1.25, or
-// PS multiplied by 1.43"; applying the stress ratio to the 1.25 term is our
-// reading of "taking into account ... the maximum allowable temperature").
+// Sources: ASME BPVC Section VIII Division 1, UG-99(b): "a hydrostatic
+// test pressure that at every point in the vessel is at least equal to 1.3
+// times the maximum allowable working pressure" times the lowest stress
+// ratio (text quoted on eng-tips.com thread 434704 and in an inspector's
+// course notes, scribd.com document 466399145); UG-100(b): "at least equal
+// to 1.1 times the maximum allowable working pressure multiplied by the
+// lowest stress ratio (LSR)" (text reproduced on scribd.com document
+// 419491368). Editions before the 1999 addenda used 1.5 and 1.25 (an older
+// UG-100(b) text with 1.25 is reproduced on scribd.com document 373548581).
+// Pressure equipment directive, Annex I, section 7.4: "no less than: that
+// corresponding to the maximum loading to which the pressure equipment may
+// be subject in service taking into account its maximum allowable pressure
+// and its maximum allowable temperature, multiplied by the coefficient
+// 1,25, or the maximum allowable pressure multiplied by the coefficient
+// 1,43, whichever is the greater" (the 97/23/EC text as quoted on
+// simpliengineering.com, "How was PED 97/23/EC test pressure coefficient
+// 1.43 derived"; that 2014/68/EU Annex I 7.4 keeps the same words is from
+// memory). Applying the stress ratio to the 1.25 term is our reading of
+// "taking into account ... its maximum allowable temperature".
 //
 // Errors: mawp < 0 or stressRatio ≤ 0 (*units.RangeError).
 func ReferenceTestPressures(mawp GaugePressure, stressRatio float64) (TestPressures, error) {

@@ -12,8 +12,11 @@ func TestReferenceTestPressures(t *testing.T) {
 		// Hand calculation: MAWP 40 bar, stress ratio 1.
 		// UG-99(b) 1.3 × 40 = 52 bar; UG-100(b) 1.1 × 40 = 44 bar;
 		// PED Annex I 7.4 max(1.25 × 40, 1.43 × 40) = 57.2 bar
-		// (ASME BPVC VIII-1 UG-99(b), UG-100(b); Directive 2014/68/EU
-		// Annex I 7.4, from memory).
+		// (ASME BPVC VIII-1 UG-99(b) "at least equal to 1.3 times the
+		// maximum allowable working pressure" × LSR, UG-100(b) "1.1 times";
+		// pressure equipment directive Annex I 7.4, coefficients 1,25 and
+		// 1,43, "whichever is the greater"; texts and where they were read
+		// in ReferenceTestPressures' doc).
 		{"ratio 1", 40e5, 1, 52e5, 44e5, 57.2e5},
 		// Stress ratio 1.2 (vessel rated hot, tested cold): 62.4, 52.8 and
 		// max(60, 57.2) = 60 bar.

@@ -39,8 +39,9 @@ type WallStress struct {
 // The mean radius is used because it agrees with Lamé's peak (inner
 // surface) hoop stress to first order in t/r; Barlow's formula written with
 // the outside diameter, P Do/(2t), gives a slightly larger value.
-// Source: W. C. Young and R. G. Budynas, Roark's Formulas for Stress and
-// Strain, 7th ed., 2002, Table 13.1 case 1 (from memory).
+// Source: the membrane equilibrium of a closed cylinder, as in W. C. Young
+// and R. G. Budynas, Roark's Formulas for Stress and Strain, 7th ed., 2002,
+// Table 13.1 case 1 (table number from memory).
 //
 // Valid for t ≪ r: t ≥ ri is an error, t > ri/10 adds a warning that the
 // thick-wall (Lamé) result should be used.
@@ -79,10 +80,13 @@ func ThinWallStress(p GaugePressure, ri, t, allowable float64) (WallStress, erro
 //	σz = P ri² / (ro² − ri²)          (closed ends, away from them)
 //
 // compared with the allowable stress S (Pa). Valid for any wall thickness
-// within linear elasticity. Source: S. P. Timoshenko and J. N. Goodier,
-// Theory of Elasticity, 3rd ed., 1970, §28 (thick-walled cylinder), and
-// Roark's Formulas for Stress and Strain, 7th ed., 2002, Table 13.5 case 1
-// (both from memory).
+// within linear elasticity. Source: Lamé's solution
+// σθ(r) = (a² pi − b² po)/(b² − a²) + a² b² (pi − po)/((b² − a²) r²), here at
+// r = a with po = 0 (as written in "Lame's Equations for Thick-Walled
+// Cylinder Stress Analysis", industrialmonitordirect.com); the axial stress
+// is the end load P π ri² over the wall area π (ro² − ri²). Textbook
+// treatment: S. P. Timoshenko and J. N. Goodier, Theory of Elasticity, 3rd
+// ed., 1970, §28 (section number from memory).
 func ThickWallStress(p GaugePressure, ri, t, allowable float64) (WallStress, error) {
 	if err := wallInputs(p, ri, t, allowable); err != nil {
 		return WallStress{}, err

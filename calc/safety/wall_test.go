@@ -8,9 +8,10 @@ import (
 
 func TestThinWallWorked(t *testing.T) {
 	t.Parallel()
-	// Hand calculation from the thin-wall membrane formulas (Roark's
-	// Formulas for Stress and Strain, 7th ed., 2002, Table 13.1, from
-	// memory): P = 3 MPa, ri = 50 mm, t = 4 mm, mean radius 52 mm:
+	// Hand calculation from the thin-wall membrane formulas (equilibrium of
+	// half the shell; Roark's Formulas for Stress and Strain, 7th ed., 2002,
+	// Table 13.1, table number from memory): P = 3 MPa, ri = 50 mm,
+	// t = 4 mm, mean radius 52 mm:
 	// σθ = 3e6 × 0.052 / 0.004 = 39.0 MPa, σz = 19.5 MPa, σr = −3 MPa.
 	w, err := ThinWallStress(3e6, 0.050, 0.004, 130e6)
 	if err != nil {
@@ -35,8 +36,10 @@ func TestLameWorked(t *testing.T) {
 		hoop, long, intens float64
 		tol                float64
 	}{
-		// Hand calculation of Lamé's inner-surface stresses (Timoshenko and
-		// Goodier, Theory of Elasticity, 1970, §28, from memory):
+		// Hand calculation of Lamé's inner-surface stresses,
+		// σθ(a) = p (a² + b²)/(b² − a²) from σθ(r) = a² p/(b² − a²) +
+		// a² b² p/((b² − a²) r²) ("Lame's Equations for Thick-Walled
+		// Cylinder Stress Analysis", industrialmonitordirect.com):
 		// ro = 56 mm, ro² − ri² = 6.36e-4 m², ro² + ri² = 5.636e-3 m²:
 		// σθ = 3e6 × 5.636e-3/6.36e-4 = 26.5849 MPa,
 		// σz = 3e6 × 2.5e-3/6.36e-4 = 11.7925 MPa.

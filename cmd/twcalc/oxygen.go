@@ -59,7 +59,12 @@ examples:
 		for _, w := range c.Warnings {
 			r.warn(w)
 		}
-		cautions = append(cautions, safety.CautionCylinder)
+		cautions = append(cautions, c.Cautions...)
+		for _, comp := range gas.Components() {
+			if comp.Species.Name == "air" {
+				r.warn("air holds oxygen: the oxygen figures treat the released gas as oxygen-free, so they overstate the loss")
+			}
+		}
 		total += v
 	}
 	m := map[string]safety.RoomModel{"displacement": safety.Displacement, "mixed": safety.WellMixed, "sealed": safety.Sealed}[*model]
@@ -90,8 +95,12 @@ examples:
 			r.add("oxygen_fraction_"+other.Key(), oo.Fraction, units.DimNone)
 		}
 	}
+	seen := map[string]bool{}
 	for _, c := range append(o.Cautions, cautions...) {
-		r.caution(c)
+		if !seen[c] { // the cylinder repeats the general and asphyxiation cautions
+			seen[c] = true
+			r.caution(c)
+		}
 	}
 	return r, nil
 }

@@ -76,6 +76,9 @@ func TestVesselCommand(t *testing.T) {
 	approx(t, "minimum_wall_thickness", o.num(t, "minimum_wall_thickness"), 1.101321586e-3, 1e-9)
 	approx(t, "max_allowable_pressure", o.num(t, "max_allowable_pressure"), 15.44776119e6, 1e-9)
 	approx(t, "hydrostatic_test_pressure", o.num(t, "hydrostatic_test_pressure"), 1.3*15.44776119e6, 1e-9)
+	// Thin-wall hoop stress on the mean radius 53 mm: 3e6 × 0.053/0.006 =
+	// 26.5 MPa, over 138 MPa = 0.1920290 (hand calculation).
+	approx(t, "thin_wall_hoop_stress_ratio", o.num(t, "thin_wall_hoop_stress_ratio"), 26.5e6/138e6, 1e-12)
 	if u := o.Results["hoop_stress"].Unit; u != "Pa" {
 		t.Errorf("hoop_stress unit %q", u)
 	}
@@ -138,6 +141,32 @@ func TestOxygenCommand(t *testing.T) {
 	if o.num(t, "oxygen_fraction") >= 0.195 {
 		t.Error("a full 50 L cylinder in 30 m³ should be oxygen-deficient")
 	}
+	// A hydrogen cylinder carries the fire caution, once; helium does not.
+	h := runSafetyJSON(t, "oxygen", "--release-from-cylinder", "10L", "--fill-pressure", "150bar", "--gas", "hydrogen", "--room", "30m3")
+	if n := countOf(h.Cautions, safety.CautionFlammable); n != 1 {
+		t.Errorf("hydrogen: fire caution %d times in %q", n, h.Cautions)
+	}
+	if n := countOf(h.Cautions, safety.CautionGeneral); n != 1 {
+		t.Errorf("hydrogen: general caution %d times", n)
+	}
+	if countOf(o.Cautions, safety.CautionFlammable) != 0 {
+		t.Error("helium given the hydrogen caution")
+	}
+	// Air holds oxygen: said in a warning.
+	a := runSafetyJSON(t, "oxygen", "--release-from-cylinder", "10L", "--fill-pressure", "150bar", "--gas", "air", "--room", "30m3")
+	if !strings.Contains(strings.Join(a.Warnings, "\n"), "air holds oxygen") {
+		t.Errorf("air: warnings %q", a.Warnings)
+	}
+}
+
+func countOf(list []string, s string) int {
+	n := 0
+	for _, x := range list {
+		if x == s {
+			n++
+		}
+	}
+	return n
 }
 
 func TestSPLCommand(t *testing.T) {
@@ -170,6 +199,8 @@ func TestSafetyCommandsRejectImpossibleInput(t *testing.T) {
 		{[]string{"energy", "--gas", "helium", "--pressure", "1atm", "--volume", "50L"}, "no energy is stored"},
 		{[]string{"spl", "--amplitude", "0Pa"}, "pressure amplitude 0 Pa"},
 		{[]string{"spl", "--amplitude", "1barg"}, "neither gauge nor absolute"},
+		{[]string{"spl", "--amplitude", "-3Pa"}, "--amplitude \"-3Pa\": is negative"},
+		{[]string{"spl", "--amplitude=-3Pa"}, "is negative"},
 	}
 	for _, c := range cases {
 		var o, e bytes.Buffer

@@ -3,6 +3,7 @@ package main
 import (
 	"errors"
 	"fmt"
+	"strings"
 
 	"tubewright/calc/safety"
 	"tubewright/calc/units"
@@ -21,6 +22,9 @@ stand. No frequency weighting is applied to the amplitude.
 examples:
   twcalc spl --amplitude 10kPa
   twcalc spl --amplitude 2kPa --at-ear 92dBA --json`)
+	if v, ok := negativeValue(args, "amplitude"); ok {
+		return nil, badInput("amplitude", v, errors.New("is negative: an amplitude is the size of the pressure swing, give it as a positive number, e.g. 10kPa"))
+	}
 	if err := fl.parse(args); err != nil {
 		return nil, err
 	}
@@ -57,4 +61,34 @@ examples:
 		r.caution(c)
 	}
 	return r, nil
+}
+
+// negativeValue returns the text given to --name (or -name, with "=" or as
+// the next argument) when it starts with a minus sign. The units parser
+// reads a negative pressure as "below vacuum", which is the wrong message
+// for an amplitude.
+func negativeValue(args []string, name string) (string, bool) {
+	for i, a := range args {
+		if a == "--" {
+			break
+		}
+		var v string
+		switch {
+		case a == "--"+name || a == "-"+name:
+			if i+1 >= len(args) {
+				return "", false
+			}
+			v = args[i+1]
+		case strings.HasPrefix(a, "--"+name+"="):
+			v = strings.TrimPrefix(a, "--"+name+"=")
+		case strings.HasPrefix(a, "-"+name+"="):
+			v = strings.TrimPrefix(a, "-"+name+"=")
+		default:
+			continue
+		}
+		if strings.HasPrefix(strings.TrimSpace(v), "-") {
+			return v, true
+		}
+	}
+	return "", false
 }

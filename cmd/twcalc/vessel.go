@@ -57,6 +57,7 @@ examples:
 	if err == nil {
 		r.add("thin_wall_hoop_stress", thin.Hoop, units.DimStress)
 		r.add("thin_wall_longitudinal_stress", thin.Longitudinal, units.DimStress)
+		r.add("thin_wall_hoop_stress_ratio", thin.HoopRatio, units.DimNone)
 		for _, w := range thin.Warnings {
 			if strings.Contains(w, "thin-wall") { // the over-allowable warning came with Lamé's
 				r.warn(w)
