@@ -3,20 +3,40 @@ package resonator
 import (
 	"errors"
 	"math"
+	"strconv"
 
 	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
 
-// checkPositive returns a RangeError unless v is finite and > 0.
+// checkPositive returns a *positiveError (which is a *units.RangeError
+// for errors.As) unless v is finite and > 0.
 func checkPositive(field string, v float64, unit string) error {
 	if !(v > 0) || math.IsInf(v, 0) {
-		e := units.NewRangeError(field, v, 0, math.Inf(1), unit)
-		e.Why = "must be positive"
-		return e
+		return &positiveError{units.NewRangeError(field, v, 0, math.Inf(1), unit)}
 	}
 	return nil
 }
+
+// positiveError is a *units.RangeError for a value that must be positive
+// and finite. Its message says so plainly ("length 0 m must be greater
+// than zero") instead of the RangeError's "must be at least 0 m", which
+// reads as if 0 m were allowed.
+type positiveError struct{ *units.RangeError }
+
+func (e *positiveError) Error() string {
+	r := e.RangeError
+	v := strconv.FormatFloat(r.Value, 'g', 4, 64)
+	if math.IsNaN(r.Value) || math.IsInf(r.Value, 0) {
+		return r.Field + " " + v + " is not a finite number"
+	}
+	if r.Unit != "" {
+		v += " " + r.Unit
+	}
+	return r.Field + " " + v + " must be greater than zero"
+}
+
+func (e *positiveError) Unwrap() error { return e.RangeError }
 
 // checkRange returns a RangeError unless lo <= v <= hi.
 func checkRange(field string, v, lo, hi float64, unit string) error {

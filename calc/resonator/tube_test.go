@@ -243,6 +243,18 @@ func TestTubeBadInput(t *testing.T) {
 			t.Errorf("%s: field %q, want %q (%v)", c.name, re.Field, c.field, err)
 		}
 	}
+	// A value that must be positive says so, not "must be at least 0 m"
+	// (which reads as if zero were allowed).
+	for _, c := range []struct {
+		v    float64
+		want string
+	}{{0, "length 0 m must be greater than zero"}, {-0.1, "length -0.1 m must be greater than zero"}, {math.Inf(1), "length +Inf is not a finite number"}} {
+		s := ok
+		s.Length = c.v
+		if _, err := s.SolveFrequency(); err == nil || err.Error() != c.want {
+			t.Errorf("length %g: message %q, want %q", c.v, err, c.want)
+		}
+	}
 	// a target frequency that no length reaches: end corrections longer
 	// than a quarter wavelength
 	_, err := ok.SolveLength(30000)

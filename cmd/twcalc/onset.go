@@ -57,14 +57,20 @@ func solveError(err error) error {
 }
 
 // onsetCautions are printed with every onset result: the hot temperature
-// is a number people act on at the bench.
-func onsetCautions(r *report, d *linear.Device, hot float64, atOnset bool) {
+// is a number people act on at the bench. pressure is the highest mean
+// pressure the result is for (Pa): the device's own, or the top of a
+// pressure sweep (sweep true).
+func onsetCautions(r *report, hot, pressure float64, atOnset, sweep bool) {
+	charged := "the device is charged to %s absolute"
+	if sweep {
+		charged = "the sweep goes up to %s absolute"
+	}
 	what := "the hot end must reach about %s before the engine starts"
 	if !atOnset {
 		what = "the hot parts are at %s"
 	}
 	r.caution(fmt.Sprintf("Hot parts: "+what+"; heaters, exchangers and tube walls at this temperature burn skin and can ignite nearby material. Let parts cool before touching; follow your lab's hot-work rules.", inUnit(hot, units.DimTemperature, "degC")))
-	r.caution(fmt.Sprintf("Pressure: the device is charged to %s absolute; the vessel must be rated for it at the hot temperature (see twcalc vessel). Defer to local pressure-vessel codes and licensed practice.", inUnit(d.MeanPressure, units.DimPressure, "bar")))
+	r.caution(fmt.Sprintf("Pressure: "+charged+"; the vessel must be rated for it at the hot temperature (see twcalc vessel). Defer to local pressure-vessel codes and licensed practice.", inUnit(pressure, units.DimPressure, "bar")))
 	r.caution("Sound: a running engine can be very loud; wear hearing protection near an open end.")
 	r.caution("This is a linear estimate: real onset also depends on heat leaks, streaming and construction details; approach it slowly.")
 }
@@ -126,7 +132,7 @@ examples:
 		}
 		pts := linear.OnsetVsPressure(d, sweep.values(), set)
 		var rows [][]float64
-		maxHot := 0.0
+		maxHot, maxP := 0.0, 0.0
 		for _, p := range pts {
 			if p.Err != nil {
 				r.warn(fmt.Sprintf("%s: %v", units.Format(p.Pressure, units.DimPressure), p.Err))
@@ -134,12 +140,13 @@ examples:
 			}
 			rows = append(rows, []float64{p.Pressure, p.HotTemperature, p.Frequency})
 			maxHot = max(maxHot, p.HotTemperature)
+			maxP = max(maxP, p.Pressure)
 		}
 		if len(rows) == 0 {
 			return nil, errors.New("onset: no point of the sweep converged")
 		}
 		r.table([]string{"mean_pressure_Pa", "hot_temperature_K", "frequency_Hz"}, rows)
-		onsetCautions(r, d, maxHot, true)
+		onsetCautions(r, maxHot, maxP, true, true)
 		return r, nil
 	case below.Value > 0:
 		m, err := linear.Mode(d, below.Value, set)
@@ -158,7 +165,7 @@ examples:
 		}
 		r.addValue("mode", verdict)
 		r.addValue("iterations", m.Iterations)
-		onsetCautions(r, d, below.Value, false)
+		onsetCautions(r, below.Value, d.MeanPressure, false, false)
 		return r, nil
 	}
 	res, err := linear.Onset(d, set)
@@ -183,7 +190,7 @@ examples:
 	if *profile {
 		r.table(profileHeader, profileRows(&res.Profile))
 	}
-	onsetCautions(r, d, res.HotTemperature, true)
+	onsetCautions(r, res.HotTemperature, d.MeanPressure, true, false)
 	return r, nil
 }
 

@@ -89,6 +89,16 @@ func TestOnsetCommandModeAndSweep(t *testing.T) {
 	if rep.Table.Rows[3][0] != 20e5 {
 		t.Errorf("last pressure %g Pa, want 2e6", rep.Table.Rows[3][0])
 	}
+	// the pressure caution names the top of the sweep, not the file's 8 bar
+	found := false
+	for _, c := range rep.Cautions {
+		if strings.HasPrefix(c, "Pressure:") {
+			found = strings.Contains(c, "(20 bar)") && !strings.Contains(c, "(8 bar)")
+		}
+	}
+	if !found {
+		t.Errorf("no pressure caution naming the sweep's 20 bar in %q", rep.Cautions)
+	}
 }
 
 // TestHeatPumpCommandJSON: the JSON keys of twcalc heatpump.

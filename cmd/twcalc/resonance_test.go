@@ -21,6 +21,7 @@ type resultEntry struct {
 type jsonReport struct {
 	Results  map[string]resultEntry `json:"results"`
 	Warnings []string               `json:"warnings"`
+	Cautions []string               `json:"cautions"`
 	Table    *struct {
 		Columns []string    `json:"columns"`
 		Rows    [][]float64 `json:"rows"`
