@@ -37,7 +37,8 @@
 // polyatomic gases are refused.
 //
 // Non-ideal option (Options.NonIdeal): second virial coefficient B(T) for
-// helium (Petersen, Risø Report 224, 1970) and the other gases except
+// helium (a fit to the ab initio B(T) of NIST SRD 134, Hurly & Moldover,
+// J. Res. NIST 105, 667, 2000) and the other gases except
 // hydrogen (Tsonopoulos, AIChE J. 20, 263, 1974); for noble-gas mixtures
 // B = Σ x_i x_j B_ij with Lennard-Jones cross coefficients. Density from
 // Z = 1 + Bp/(RT), sound speed with the second acoustic virial
@@ -46,16 +47,20 @@
 //
 // # Ranges and accuracy
 //
-// Validated ranges (Species.Range, Mixture.Range): 200–5000 K for the
-// gases with CEA fits, 200–3000 K for xenon, 200–2000 K for air and
+// Validated ranges (Species.Range, Mixture.Range): 100–5000 K for helium
+// (below 200 K its viscosity and conductivity interpolate the NIST SRD 134
+// table of Hurly & Moldover 2000), 200–5000 K for the other gases with CEA
+// fits, 200–3000 K for xenon, 200–2000 K for air and
 // 200–1100 K for carbon dioxide. Up to 20 % beyond a bound the result
 // carries a warning; further out Properties returns a *units.RangeError.
 // The tests compare viscosity and conductivity with the CRC Handbook
-// tables at 200–600 K within 2 % (plus half the last printed digit), ideal
-// sound speed within 0.1 %, and air with python3-iapws.
+// tables at 200–600 K within 2 % (plus half the last printed digit),
+// helium with NIST SRD 134 at 100–1000 K within 0.5 %, ideal sound speed
+// within 0.1 %, and air with python3-iapws.
 //
 // A state where a component's partial pressure reaches its vapour
 // pressure (Lee–Kesler) is refused: carbon dioxide, xenon and krypton can
-// condense in the range of use. Below 200 K (cryogenic helium, as in
-// pulse-tube coolers) the package has no validated model.
+// condense in the range of use. Below 100 K (the cold end of many
+// pulse-tube coolers) the package has no validated helium model, and below
+// 200 K none for the other gases.
 package gasprops

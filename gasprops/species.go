@@ -68,8 +68,11 @@ type model struct {
 	cp        [2]nasa9 // unused for monatomic gases (cp = 5R/2)
 	cpParts   []airPart
 	transport transportKind
-	visc      [2]ceaFit
-	cond      [2]ceaFit
+	// low: below the CEA fits' 200 K, helium's transport comes from the
+	// NIST SRD 134 table (heliumLowEval).
+	low  bool
+	visc [2]ceaFit
+	cond [2]ceaFit
 	// condCO2 replaces the CEA conductivity fit by the dilute-gas
 	// reference correlation of Huber et al. (2016) for carbon dioxide.
 	condCO2 bool
@@ -110,8 +113,9 @@ var (
 		cond: [2]ceaFit{
 			{200, 1000, 0.75007833, 36.577987, -2363.66, 2.9766475},
 			{1000, 5000, 0.83319259, 221.57417, -53304.53, 2.2684592}},
-		sigma: 2.551, epsK: 10.22, tmin: 200, tmax: 5000,
-		source: "helium model (NASA CEA transport fits)",
+		low:   true,
+		sigma: 2.551, epsK: 10.22, tmin: 100, tmax: 5000,
+		source: "helium model (NASA CEA transport fits; NIST SRD 134 below 200 K)",
 	}}
 	neon = &Species{Name: "neon", Symbol: "Ne", MolarMass: 20.1797e-3, m: model{
 		monatomic: true, noble: true, transport: transportCEA,

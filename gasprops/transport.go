@@ -87,12 +87,44 @@ func ratiosAB(ts, lt, o22 float64) (a, b float64) {
 	return o22 / o11, (5*o12 - 4*o13) / o11
 }
 
+// Helium below 200 K, where the NASA CEA fits end: the dilute-gas values
+// of NIST Standard Reference Database 134, helium-4 table (the ab initio
+// values of Hurly & Moldover, J. Res. NIST 105, 667, 2000; 0.1 % stated
+// uncertainty, printed to three or four digits), at 100–180 K. Viscosity
+// in µPa·s, conductivity in mW/(m·K).
+var (
+	heliumLowT   = [5]float64{100, 120, 140, 160, 180}
+	heliumLowEta = [5]float64{9.6, 10.8, 11.9, 13.0, 14.1}
+	heliumLowLam = [5]float64{74.8, 84.4, 93.4, 102.1, 110.4}
+)
+
+// heliumLowEval interpolates a helium property below 200 K as a power law
+// between neighbouring rows of the SRD 134 table (ln v linear in ln T),
+// joining the CEA fit's value vTop at 200 K so that the model is
+// continuous there (the fit and the table differ by 0.2–0.3 % at 200 K).
+// Below 100 K it extends the first segment's power law.
+func heliumLowEval(v *[5]float64, T, vTop float64) float64 {
+	i := 0
+	for i < len(heliumLowT)-1 && T > heliumLowT[i+1] {
+		i++
+	}
+	t0, v0 := heliumLowT[i], v[i]
+	t1, v1 := 200.0, vTop
+	if i < len(heliumLowT)-1 {
+		t1, v1 = heliumLowT[i+1], v[i+1]
+	}
+	return v0 * math.Exp(math.Log(v1/v0)*math.Log(T/t0)/math.Log(t1/t0))
+}
+
 // viscosity returns the dilute-gas dynamic viscosity of the pure species in
 // Pa·s.
 func (sp *Species) viscosity(T float64) float64 {
 	m := &sp.m
 	switch m.transport {
 	case transportCEA:
+		if m.low && T < m.visc[0].tlo {
+			return heliumLowEval(&heliumLowEta, T, ceaEval(&m.visc, m.visc[0].tlo)*1e-1) * 1e-6
+		}
 		return ceaEval(&m.visc, T) * 1e-7
 	case transportAirLJ:
 		return airViscosity0(T)
@@ -112,6 +144,9 @@ func (sp *Species) conductivity(T float64) float64 {
 	case transportCEA:
 		if m.condCO2 {
 			return co2Conductivity0(T)
+		}
+		if m.low && T < m.cond[0].tlo {
+			return heliumLowEval(&heliumLowLam, T, ceaEval(&m.cond, m.cond[0].tlo)*1e-1) * 1e-3
 		}
 		return ceaEval(&m.cond, T) * 1e-4
 	case transportAirLJ:
