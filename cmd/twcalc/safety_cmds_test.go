@@ -87,6 +87,26 @@ func TestVesselCommand(t *testing.T) {
 	approx(t, "hoop difference", o.num(t, "hoop_stress")-a.num(t, "hoop_stress"), 101325*0.005636/0.000636, 1e-9)
 	// The MAWP depends on the wall only, not on how the pressure was typed.
 	approx(t, "same MAWP", a.num(t, "max_allowable_pressure"), o.num(t, "max_allowable_pressure"), 1e-15)
+	// Without --mawp the test pressures rest on the shell's MAWP, with a
+	// warning that the vessel's MAWP is the lowest of its parts.
+	if !strings.Contains(strings.Join(o.Warnings, "\n"), "give it with --mawp") {
+		t.Errorf("no warning about the shell-only MAWP: %q", o.Warnings)
+	}
+	// With the vessel's marked MAWP, 40 bar gauge: UG-99(b) 1.3 × 40 =
+	// 52 bar, UG-100(b) 1.1 × 40 = 44 bar (hand calculation); a relief set
+	// at 42 bar gauge is above it (UG-134(a): a single device "shall not
+	// exceed the maximum allowable working pressure").
+	m := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--mawp", "40barg", "--relief-set", "42barg")
+	approx(t, "mawp_used", m.num(t, "mawp_used"), 40e5, 1e-12)
+	approx(t, "hydrostatic with --mawp", m.num(t, "hydrostatic_test_pressure"), 52e5, 1e-12)
+	approx(t, "pneumatic with --mawp", m.num(t, "pneumatic_test_pressure"), 44e5, 1e-12)
+	if string(m.Results["relief_at_or_below_mawp"].Value) != "false" {
+		t.Errorf("relief 42 barg over MAWP 40 barg: %s", m.Results["relief_at_or_below_mawp"].Value)
+	}
+	ok := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--mawp", "40barg", "--relief-set", "40barg")
+	if string(ok.Results["relief_at_or_below_mawp"].Value) != "true" {
+		t.Errorf("relief at the MAWP: %s", ok.Results["relief_at_or_below_mawp"].Value)
+	}
 	// Other code families: no invented formula, the reference instead.
 	eu := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--code-family", "eu")
 	if _, ok := eu.Results["minimum_wall_thickness"]; ok {
@@ -193,6 +213,8 @@ func TestSafetyCommandsRejectImpossibleInput(t *testing.T) {
 		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "0"}, "joint efficiency 0"},
 		{[]string{"vessel", "--pressure", "0.5bar", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "below the atmosphere"},
 		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "0mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "inner radius 0 m"},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--mawp", "0.5bar"}, "--mawp \"0.5bar\""},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--relief-set", "0.5bar"}, "--relief-set \"0.5bar\""},
 		{[]string{"oxygen", "--release", "40m3", "--room", "30m3"}, "release volume 40 m³ is outside the valid range 0–30 m³"},
 		{[]string{"oxygen", "--room", "30m3"}, "give --release"},
 		{[]string{"oxygen", "--release-from-cylinder", "50L", "--room", "30m3"}, "--fill-pressure is required"},

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"strings"
 
@@ -23,12 +24,15 @@ func runVessel(args []string) (*report, error) {
 	corr := fl.quantity("corrosion-allowance", units.DimLength, "0mm", "corrosion allowance added to the required wall")
 	ratio := fl.float("stress-ratio", 1, 0.01, 100, "allowable stress at test temperature / at design temperature, for the test pressures")
 	family := fl.choice("code-family", []string{"asme", "eu", "other"}, "asme", "code family to compare with; formulas only for asme, the others show their reference")
+	marked := fl.quantity("mawp", units.DimPressure, "0barg", "maximum allowable working pressure of the whole vessel, the lowest of all its parts: 40barg; the test pressures and the relief check use it instead of the shell's")
+	relief := fl.quantity("relief-set", units.DimPressure, "0barg", "set pressure of the relief valve or bursting disc: 33barg; compared with the MAWP")
 	fl.describe(`Pressures: a gauge unit (barg, psig) is above the atmosphere (101325 Pa);
 bar, psi, MPa are absolute and are converted to gauge. Results are gauge.
 
 examples:
   twcalc vessel --pressure 30barg --inner-radius 50mm --wall-thickness 6mm --allowable-stress 138MPa --joint-efficiency 1
-  twcalc vessel --pressure 435psig --inner-radius 2in --wall-thickness 0.25in --allowable-stress 20ksi --json`)
+  twcalc vessel --pressure 435psig --inner-radius 2in --wall-thickness 0.25in --allowable-stress 20ksi --json
+  twcalc vessel --pressure 30barg --inner-radius 50mm --wall-thickness 6mm --allowable-stress 138MPa --mawp 40barg --relief-set 38barg`)
 	if err := fl.parse(args); err != nil {
 		return nil, err
 	}
@@ -94,6 +98,41 @@ examples:
 		r.addValue("code_reference", fam.ShellReference())
 		mawp = P
 		r.warn("no wall-thickness formula for " + fam.Label() + ": minimum_wall_thickness and max_allowable_pressure are given for the ASME family only")
+	}
+	if fl.given("mawp") {
+		m := safety.GaugeOf(*marked, 0)
+		if m <= 0 {
+			return nil, badInput("mawp", fl.typed("mawp"), fmt.Errorf("is %s gauge; a maximum allowable working pressure is above the atmosphere", units.Format(float64(m), units.DimPressure)))
+		}
+		if fam == safety.FamilyASME && m > mawp {
+			r.warn(fmt.Sprintf("the entered MAWP (%s gauge) is above the %s gauge that this shell wall allows by UG-27", units.Format(float64(m), units.DimPressure), units.Format(float64(mawp), units.DimPressure)))
+		}
+		mawp = m
+		r.addGauge("mawp_used", float64(mawp))
+		r.addValue("mawp_basis", "entered with --mawp")
+	} else if fam == safety.FamilyASME && mawp > 0 {
+		r.addGauge("mawp_used", float64(mawp))
+		r.addValue("mawp_basis", "the shell wall alone (UG-27)")
+		r.warn("the test pressures use the MAWP of this shell wall alone; the vessel's MAWP is the lowest of all its parts (heads, flanges, windows, feedthroughs, driver housing): give it with --mawp")
+	}
+	if fl.given("relief-set") {
+		set := safety.GaugeOf(*relief, 0)
+		if set <= 0 {
+			return nil, badInput("relief-set", fl.typed("relief-set"), fmt.Errorf("is %s gauge; a relief device opens above the atmosphere", units.Format(float64(set), units.DimPressure)))
+		}
+		if mawp <= 0 {
+			return nil, badInput("relief-set", fl.typed("relief-set"), errors.New("has no MAWP to compare with: give --mawp"))
+		}
+		rc, err := safety.CheckRelief(set, mawp)
+		if err != nil {
+			return nil, fl.blame(err, "relief-set", "mawp")
+		}
+		r.addGauge("relief_set_pressure", float64(rc.Set))
+		r.addValue("relief_at_or_below_mawp", rc.OK)
+		r.addValue("relief_check", rc.Message)
+		if !rc.OK {
+			r.warn(rc.Message)
+		}
 	}
 	if mawp > 0 {
 		tp, err := safety.ReferenceTestPressures(mawp, *ratio)
