@@ -39,7 +39,9 @@ R = 8.314462618  # CODATA 2018
 
 # Power-law gases. Reference values at 300 K are from memory (close to
 # handbook values for helium and argon near room temperature); the exponent
-# b is a rough fit. Both the script and the Go test use exactly these.
+# b is a rough fit. Both the script and the Go test use exactly these, so
+# they are shared inputs, not reference values: their accuracy does not
+# affect the comparison.
 HELIUM = dict(name="helium", label="helium (power law)", M=4.002602e-3, gamma=5.0 / 3.0, T0=300.0,
               mu0=19.9e-6, k0=0.155, b=0.68)
 ARGON = dict(name="argon", label="argon (power law)", M=39.948e-3, gamma=5.0 / 3.0, T0=300.0,
