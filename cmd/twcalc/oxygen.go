@@ -3,6 +3,7 @@ package main
 import (
 	"errors"
 	"fmt"
+	"strings"
 
 	"tubewright/calc/safety"
 	"tubewright/calc/units"
@@ -18,22 +19,27 @@ func runOxygen(args []string) (*report, error) {
 	rel := fl.quantity("release", units.DimVolume, "0m3", "volume of gas released, at room conditions: 9m3")
 	cyl := fl.quantity("release-from-cylinder", units.DimVolume, "0L", "water capacity of a cylinder emptied into the room: 50L")
 	fill := fl.quantity("fill-pressure", units.DimPressure, "0bar", "cylinder fill pressure: 200bar (absolute) or 200barg; required with --release-from-cylinder")
-	gas := fl.gas("gas", "helium", "gas in the cylinder, for its non-ideal correction")
+	vessel := fl.quantity("release-from-vessel", units.DimVolume, "0L", "gas volume of the rig's vessel emptied into the room: 50L")
+	vpres := fl.quantity("vessel-pressure", units.DimPressure, "0bar", "charge pressure of the vessel: 30barg (gauge) or 31bar (absolute); required with --release-from-vessel")
+	vtemp := fl.quantity("vessel-temperature", units.DimTemperature, "20degC", "mean gas temperature in the vessel")
+	gas := fl.gas("gas", "helium", "gas in the cylinder and the vessel, for its non-ideal correction")
 	ftemp := fl.quantity("fill-temperature", units.DimTemperature, "15degC", "temperature of the cylinder")
 	rtemp := fl.quantity("room-temperature", units.DimTemperature, "20degC", "temperature of the room")
 	model := fl.choice("model", []string{"displacement", "mixed", "sealed"}, "displacement", "how gas and air mix: displacement (air pushed out, worst case), mixed (well mixed, mixture flows out), sealed (nothing leaves)")
 	vent := fl.quantity("ventilation", units.DimRate, "0/h", "fresh-air rate in air changes per hour, for the recovery time: 2/h")
-	fl.describe(`Releases from --release and --release-from-cylinder are added. Oxygen is
-compared with 19.5 %, the oxygen-deficient threshold of US OSHA 29 CFR 1910.134.
+	fl.describe(`Releases from --release, --release-from-cylinder and --release-from-vessel
+are added. Oxygen is compared with 19.5 %, the oxygen-deficient threshold of
+US OSHA 29 CFR 1910.134.
 
 examples:
   twcalc oxygen --release 9m3 --room 30m3 --model mixed --ventilation 2/h
-  twcalc oxygen --release-from-cylinder 50L --fill-pressure 200bar --gas helium --room 30m3 --json`)
+  twcalc oxygen --release-from-cylinder 50L --fill-pressure 200bar --gas helium --room 30m3 --json
+  twcalc oxygen --release-from-vessel 50L --vessel-pressure 30barg --release-from-cylinder 50L --fill-pressure 200bar --room 30m3`)
 	if err := fl.parse(args); err != nil {
 		return nil, err
 	}
-	if !fl.given("release") && !fl.given("release-from-cylinder") {
-		return nil, &usageError{msg: "give --release VOLUME or --release-from-cylinder VOLUME --fill-pressure PRESSURE (see \"twcalc oxygen -h\")"}
+	if !fl.given("release") && !fl.given("release-from-cylinder") && !fl.given("release-from-vessel") {
+		return nil, &usageError{msg: "give --release VOLUME, --release-from-cylinder VOLUME --fill-pressure PRESSURE or --release-from-vessel VOLUME --vessel-pressure PRESSURE (see \"twcalc oxygen -h\")"}
 	}
 	r := newReport()
 	fl.echo(r)
@@ -60,12 +66,44 @@ examples:
 			r.warn(w)
 		}
 		cautions = append(cautions, c.Cautions...)
+		total += v
+	}
+	if fl.given("release-from-vessel") {
+		if !fl.given("vessel-pressure") {
+			return nil, &usageError{msg: "--vessel-pressure is required with --release-from-vessel: the vessel's charge pressure, e.g. 30barg"}
+		}
+		pa := units.Pressure(units.StandardAtmosphere)
+		if vpres.Value < float64(pa) {
+			return nil, badInput("vessel-pressure", fl.typed("vessel-pressure"), fmt.Errorf("is %s absolute, below the atmosphere: no gas would leave the vessel", units.Format(vpres.Value, units.DimPressure)))
+		}
+		if vessel.Value <= 0 {
+			return nil, badInput("release-from-vessel", fl.typed("release-from-vessel"), errors.New("must be a volume above zero, e.g. 50L"))
+		}
+		// CylinderContents gives the compressibility Z of the charge and
+		// checks the temperature against the gas model's range.
+		c, err := safety.CylinderContents(*gas, vessel.Value, units.Pressure(vpres.Value), units.Temperature(vtemp.Value), safety.StandardISO13443)
+		if err != nil {
+			return nil, vesselBlame(fl, err)
+		}
+		v, err := safety.ReleaseVolume(vessel.Value, units.Pressure(vpres.Value), units.Temperature(vtemp.Value), c.Z, pa, units.Temperature(rtemp.Value))
+		if err != nil {
+			return nil, vesselBlame(fl, err)
+		}
+		r.add("vessel_release", v, units.DimVolume)
+		if !fl.given("release-from-cylinder") {
+			for _, w := range c.Warnings {
+				r.warn(w)
+			}
+		}
+		cautions = append(cautions, safety.GasCautions(*gas)...)
+		total += v
+	}
+	if fl.given("release-from-cylinder") || fl.given("release-from-vessel") {
 		for _, comp := range gas.Components() {
 			if comp.Species.Name == "air" {
 				r.warn("air holds oxygen: the oxygen figures treat the released gas as oxygen-free, so they overstate the loss")
 			}
 		}
-		total += v
 	}
 	m := map[string]safety.RoomModel{"displacement": safety.Displacement, "mixed": safety.WellMixed, "sealed": safety.Sealed}[*model]
 	o, err := safety.RoomOxygen(m, total, room.Value, vent.Value)
@@ -103,4 +141,23 @@ examples:
 		}
 	}
 	return r, nil
+}
+
+// vesselBlame names the --release-from-vessel flag that a range error from
+// the contents and release formulas (whose fields speak of a cylinder's
+// fill) belongs to.
+func vesselBlame(fl *flags, err error) error {
+	field, ok := rangeField(err)
+	if !ok {
+		return err
+	}
+	switch {
+	case strings.Contains(field, "pressure"):
+		return badInput("vessel-pressure", fl.typed("vessel-pressure"), err)
+	case strings.Contains(field, "room"):
+		return fl.blame(err, "room-temperature")
+	case strings.Contains(field, "temperature"):
+		return badInput("vessel-temperature", fl.typed("vessel-temperature"), err)
+	}
+	return badInput("release-from-vessel", fl.typed("release-from-vessel"), err)
 }

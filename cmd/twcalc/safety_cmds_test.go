@@ -161,6 +161,18 @@ func TestOxygenCommand(t *testing.T) {
 	if o.num(t, "oxygen_fraction") >= 0.195 {
 		t.Error("a full 50 L cylinder in 30 m³ should be oxygen-deficient")
 	}
+	// The rig's vessel: 50 L of helium at 30 bar gauge and 20 °C into a room
+	// at 101 325 Pa and 20 °C. Z of helium-4 at 30 bar: 1.0147 at 15 °C and
+	// 1.0129 at 50 °C in the table "Z de l'hélium 4"
+	// (solar.energy.free.fr/sld015.htm, source not named), so 1.01444 at
+	// 20 °C by linear interpolation; the gas that leaves is
+	// 0.05 × (3 101 325/1.01444 − 101 325)/101 325 = 1.45860 m³ (hand
+	// calculation). The tolerance covers the gas model's Z (1.0151).
+	v := runSafetyJSON(t, "oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "30barg", "--room", "30m3")
+	approx(t, "vessel_release", v.num(t, "vessel_release"), 1.45860, 1e-3)
+	// Vessel and cylinder releases add up.
+	both := runSafetyJSON(t, "oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "30barg", "--release-from-cylinder", "50L", "--fill-pressure", "200bar", "--room", "30m3")
+	approx(t, "vessel + cylinder", both.num(t, "release_volume"), v.num(t, "vessel_release")+o.num(t, "cylinder_release"), 1e-12)
 	// A hydrogen cylinder carries the fire caution, once; helium does not.
 	h := runSafetyJSON(t, "oxygen", "--release-from-cylinder", "10L", "--fill-pressure", "150bar", "--gas", "hydrogen", "--room", "30m3")
 	if n := countOf(h.Cautions, safety.CautionFlammable); n != 1 {
@@ -218,6 +230,9 @@ func TestSafetyCommandsRejectImpossibleInput(t *testing.T) {
 		{[]string{"oxygen", "--release", "40m3", "--room", "30m3"}, "release volume 40 m³ is outside the valid range 0–30 m³"},
 		{[]string{"oxygen", "--room", "30m3"}, "give --release"},
 		{[]string{"oxygen", "--release-from-cylinder", "50L", "--room", "30m3"}, "--fill-pressure is required"},
+		{[]string{"oxygen", "--release-from-vessel", "50L", "--room", "30m3"}, "--vessel-pressure is required"},
+		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "0.5bar", "--room", "30m3"}, "--vessel-pressure \"0.5bar\": is 50000 Pa absolute, below the atmosphere"},
+		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "30barg", "--vessel-temperature", "5K", "--room", "30m3"}, "--vessel-temperature \"5K\""},
 		{[]string{"energy", "--gas", "helium", "--pressure", "1atm", "--volume", "50L"}, "no energy is stored"},
 		{[]string{"spl", "--amplitude", "0Pa"}, "pressure amplitude 0 Pa"},
 		{[]string{"spl", "--amplitude", "1barg"}, "neither gauge nor absolute"},
