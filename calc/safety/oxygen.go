@@ -81,7 +81,12 @@ type Oxygen struct {
 	// Ventilated false when no ventilation rate was given.
 	RecoveryTime float64
 	Ventilated   bool
-	Cautions     []string
+	// SealedRise is, for the sealed model, the rise of the room pressure,
+	// Pa: the atmosphere times Vrel/Vroom (isothermal ideal gas); 0 for the
+	// other models.
+	SealedRise float64
+	Warnings   []string // limits of the model met by this input
+	Cautions   []string
 }
 
 // RoomOxygen returns the oxygen fraction in a room of volume room (m³)
@@ -110,6 +115,10 @@ type Oxygen struct {
 // tickerdossier.com/wiki/dilution-equation), so the time back to 19.5 % is
 //
 //	t = ln((0.209 − x)/(0.209 − 0.195)) / n.
+//
+// In the sealed model the room pressure rises by pa Vrel/Vroom (the room's
+// air and the release share the room at one temperature; pa = 101 325 Pa),
+// which Oxygen.SealedRise reports with a warning: no real room holds that.
 //
 // Errors: room ≤ 0, release < 0, release ≥ room for displacement (the room
 // would hold no air), n < 0 (*units.RangeError).
@@ -140,6 +149,10 @@ func RoomOxygen(model RoomModel, release, room, n float64) (Oxygen, error) {
 	case Sealed:
 		o.Fraction = AirOxygen / (1 + r)
 		o.MaxRelease = room * (AirOxygen/OxygenDeficient - 1)
+		o.SealedRise = units.StandardAtmosphere * r
+		if r > 0 {
+			o.Warnings = append(o.Warnings, fmt.Sprintf("a sealed room would rise in pressure by %.3g kPa; real rooms leak, and this model gives the highest oxygen of the three", o.SealedRise/1e3))
+		}
 	default:
 		panic(fmt.Sprintf("calc: unknown room model %d", int(model)))
 	}

@@ -41,6 +41,16 @@ func TestRoomOxygenWorked(t *testing.T) {
 		if len(o.Cautions) < 2 || o.Cautions[1] != CautionAsphyxiation {
 			t.Errorf("%s: asphyxiation caution missing", c.model.Key())
 		}
+		// Only the sealed model raises the room pressure: 9/30 of the
+		// atmosphere, 0.3 × 101 325 = 30 397.5 Pa (hand calculation).
+		if c.model == Sealed {
+			near(t, "sealed rise", o.SealedRise, 30397.5, 1e-12)
+			if len(o.Warnings) != 1 {
+				t.Errorf("sealed: warnings %q", o.Warnings)
+			}
+		} else if o.SealedRise != 0 || len(o.Warnings) != 0 {
+			t.Errorf("%s: rise %g, warnings %q", c.model.Key(), o.SealedRise, o.Warnings)
+		}
 		// At exactly the largest release the oxygen is 19.5 %.
 		at, err := RoomOxygen(c.model, o.MaxRelease, 30, 0)
 		if err != nil {

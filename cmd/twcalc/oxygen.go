@@ -120,6 +120,9 @@ examples:
 	r.addValue("oxygen_deficient", o.Deficient)
 	r.add("threshold", safety.OxygenDeficient, units.DimNone)
 	r.add("max_release", o.MaxRelease, units.DimVolume)
+	for _, w := range o.Warnings {
+		r.warn(w)
+	}
 	if o.Ventilated {
 		r.add("recovery_time", o.RecoveryTime, units.DimTime)
 	} else if o.Deficient {
