@@ -124,6 +124,12 @@ const (
 // Appendix 1-2 gives a thickness under R/2 for which UG-27 gives a MAWP
 // below P. Both are reported as the code writes them.
 //
+// When a wall is given, a warning reminds that it must be the thinnest
+// wall: pipe ordered by nominal wall may be supplied 12.5 % thinner
+// (UG-16(d) and the pipe specifications, as explained in "ASME UG-16 plate
+// vs pipe tolerance calculations for shell thickness",
+// industrialmonitordirect.com).
+//
 // Errors: P < 0, R ≤ 0, S ≤ 0, E outside (0, 1], c < 0 and wall ≤ c (when
 // a wall is given) are *units.RangeError. Wall = 0 means "no wall given": the MAWP
 // fields are then zero.
@@ -172,6 +178,7 @@ func ASMEShell(in ShellInput) (Shell, error) {
 		s.MAWPLong, s.ClauseMAWPLong = GaugePressure(pl), cl
 		s.MAWP = GaugePressure(math.Min(pc, pl))
 		s.WallEnough = in.Wall >= s.MinThickness
+		s.Warnings = append(s.Warnings, "the MAWP is for the wall as entered: enter the thinnest wall, not the nominal one; pipe ordered by nominal wall may be 12.5 % thinner (UG-16(d))")
 		if !s.WallEnough {
 			s.Warnings = append(s.Warnings, fmt.Sprintf("the wall is thinner than the required %.4g m", s.MinThickness))
 		}

@@ -2,6 +2,7 @@ package safety
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -90,6 +91,9 @@ func TestASMEShellWorked(t *testing.T) {
 			}
 		} else if s.MAWP != 0 {
 			t.Errorf("%s: MAWP %g without a wall", c.name, s.MAWP)
+		}
+		if c.in.Wall > 0 && !strings.Contains(strings.Join(s.Warnings, "\n"), "12.5 % thinner") {
+			t.Errorf("%s: no reminder that the wall must be the thinnest: %q", c.name, s.Warnings)
 		}
 		if s.Family != FamilyASME {
 			t.Errorf("%s: family %v", c.name, s.Family)
