@@ -27,7 +27,9 @@ func NewRangeError(field string, value, min, max float64, unit string) *RangeErr
 
 // Error reads like "temperature 15 K is outside the valid range 20–3000 K
 // (helium model)", or for one-sided ranges "length -0.005 m must be at least
-// 0 m". Numbers have 4 significant digits.
+// 0 m". A value exactly on a bound was refused, so that bound is open: "gap
+// 0 m must be greater than zero", "solid fraction 1 must be less than 1
+// (valid range 0–1, ends excluded)". Numbers have 4 significant digits.
 func (e *RangeError) Error() string {
 	field := e.Field
 	if field == "" {
@@ -38,12 +40,30 @@ func (e *RangeError) Error() string {
 	b.WriteByte(' ')
 	b.WriteString(e.withUnit(e.Value))
 	lo, hi := !math.IsInf(e.Min, -1) && !math.IsNaN(e.Min), !math.IsInf(e.Max, 1) && !math.IsNaN(e.Max)
+	// A value sitting on a bound was refused, so that bound is open: say
+	// "greater than" or "less than" rather than "at least 0 m" or "outside
+	// 0–1", which read as if the value typed were allowed.
 	switch {
+	case lo && hi && e.Value == e.Min:
+		b.WriteString(" must be greater than ")
+		b.WriteString(e.withUnit(e.Min))
+		b.WriteString(" (valid range ")
+		b.WriteString(e.rangeText())
+		b.WriteString(", ends excluded)")
+	case lo && hi && e.Value == e.Max:
+		b.WriteString(" must be less than ")
+		b.WriteString(e.withUnit(e.Max))
+		b.WriteString(" (valid range ")
+		b.WriteString(e.rangeText())
+		b.WriteString(", ends excluded)")
 	case lo && hi:
 		b.WriteString(" is outside the valid range ")
-		b.WriteString(formatNumber(e.Min, 4))
-		b.WriteString("–")
-		b.WriteString(e.withUnit(e.Max))
+		b.WriteString(e.rangeText())
+	case lo && e.Value == 0 && e.Min == 0:
+		b.WriteString(" must be greater than zero")
+	case lo && e.Value == e.Min:
+		b.WriteString(" must be greater than ")
+		b.WriteString(e.withUnit(e.Min))
 	case lo:
 		b.WriteString(" must be at least ")
 		b.WriteString(e.withUnit(e.Min))
@@ -59,6 +79,11 @@ func (e *RangeError) Error() string {
 		b.WriteByte(')')
 	}
 	return b.String()
+}
+
+// rangeText writes the bounds as "0–1" or "20–3000 K".
+func (e *RangeError) rangeText() string {
+	return formatNumber(e.Min, 4) + "–" + e.withUnit(e.Max)
 }
 
 func (e *RangeError) withUnit(v float64) string {

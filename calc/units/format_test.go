@@ -227,6 +227,12 @@ func TestRangeError(t *testing.T) {
 		{&RangeError{Field: "temperature", Value: 15, Min: 20, Max: 3000, Unit: "K", Why: "helium model"},
 			"temperature 15 K is outside the valid range 20–3000 K (helium model)"},
 		{NewRangeError("length", -0.005, 0, math.Inf(1), "m"), "length -0.005 m must be at least 0 m"},
+		// a value on a bound was refused, so the bound is open (common
+		// practice in wording, no published source)
+		{NewRangeError("plate half gap", 0, 0, math.Inf(1), "m"), "plate half gap 0 m must be greater than zero"},
+		{NewRangeError("pressure", 1, 1, math.Inf(1), "Pa"), "pressure 1 Pa must be greater than 1 Pa"},
+		{NewRangeError("solid fraction", 1, 0, 1, ""), "solid fraction 1 must be less than 1 (valid range 0–1, ends excluded)"},
+		{NewRangeError("porosity", 0, 0, 1, ""), "porosity 0 must be greater than 0 (valid range 0–1, ends excluded)"},
 		{NewRangeError("mole fraction", 1.2, math.Inf(-1), 1, ""), "mole fraction 1.2 must be at most 1"},
 		{NewRangeError("pressure", 123456789, 0, 1e8, "Pa"), "pressure 1.235e8 Pa is outside the valid range 0–1e8 Pa"},
 		{NewRangeError("", 2, math.Inf(-1), math.Inf(1), "m"), "value 2 m is not a finite number"},
