@@ -31,7 +31,14 @@ type HeatPumpResult struct {
 	Iterations      int
 	Evaluations     int
 	Profile         Profile
-	Warnings        []string
+	// ShortStack is the quick short-stack estimate for the stack at the
+	// drive frequency (nil when it cannot be formed): its ZeroLoadSpan is
+	// the short-stack zero-load span, its GradientRatio Γ the solved span
+	// over the critical one, with the validity numbers kΔx and δκ/y0. The
+	// stack's place in the standing wave is measured from the far end when
+	// that is closed, else from the driver.
+	ShortStack *ShortStackResult
+	Warnings   []string
 }
 
 // HeatPump finds the mean-temperature profile through the device's one
@@ -216,6 +223,10 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 		res.COPRelative = res.COP / res.CarnotCOP
 	}
 	res.Warnings = m.warnings(f, ta)
+	last := dev.Parts[len(dev.Parts)-1].Kind
+	if ss, err := m.shortStack(f, res.TemperatureSpan, last == KindClosedEnd); err == nil {
+		res.ShortStack = &ss
+	}
 	if res.TemperatureSpan < 0 {
 		res.Warnings = append(res.Warnings, "the cold side ends up warmer than ambient: the stack pumps heat the other way at this frequency and position")
 	}

@@ -318,3 +318,52 @@ func TestPropagateMatchesIntegrator(t *testing.T) {
 		}
 	}
 }
+
+// TestHeatPumpShortStackEstimate: the quick short-stack numbers beside the
+// full heat-pump solve are formed as documented (identities, checked by
+// hand-calculation from the same inputs): the stack centre measured from
+// the closed far end, Γ = solved span / critical difference, the zero-load
+// span Γ0 |∇T_crit| Δx, kΔx from the gas at ambient. The onset result's Γ
+// is (Th - Ta) / critical difference.
+func TestHeatPumpShortStackEstimate(t *testing.T) {
+	t.Parallel()
+	d := shortStackPump(t, 0.02)
+	r, err := HeatPump(d, &HeatPumpSettings{Settings: Settings{Gas: testAir, NoProfile: true}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ss := r.ShortStack
+	if ss == nil {
+		t.Fatal("no short-stack estimate")
+	}
+	g, _ := testAir.State(300, 101325)
+	k := 2 * math.Pi * 400 / g.SoundSpeed
+	x := 0.33 + 0.1 - (0.1 + 0.01) // from the closed end at 0.43 m to the stack centre
+	crit := math.Abs(CriticalGradient(g.Gamma, 300, k, x))
+	for _, c := range []struct {
+		name      string
+		got, want float64
+	}{
+		{"critical gradient", ss.CriticalGradient, crit},
+		{"critical difference", ss.CriticalDifference, crit * 0.02},
+		{"Γ", ss.GradientRatio, r.TemperatureSpan / (crit * 0.02)},
+		{"zero-load span", ss.ZeroLoadSpan, ss.ZeroLoadRatio * crit * 0.02},
+		{"kΔx", ss.KDeltaX, k * 0.02},
+		{"δκ/y0", ss.DepthRatio, math.Sqrt(2*g.Conductivity/(g.Density*g.Cp*2*math.Pi*400)) / 1e-3},
+	} {
+		if !scalar.EqualWithinRel(c.got, c.want, 1e-9) {
+			t.Errorf("%s = %.10g, want %.10g", c.name, c.got, c.want)
+		}
+	}
+	e, err := Example("engine")
+	if err != nil {
+		t.Fatal(err)
+	}
+	on, err := Onset(e, &Settings{Gas: testHelium, NoProfile: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if on.ShortStack == nil || !scalar.EqualWithinRel(on.ShortStack.GradientRatio, (on.HotTemperature-e.AmbientTemperature)/on.ShortStack.CriticalDifference, 1e-12) {
+		t.Errorf("onset short-stack Γ %+v, want (Th - Ta)/critical difference", on.ShortStack)
+	}
+}

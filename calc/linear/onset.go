@@ -157,16 +157,20 @@ func Onset(dev *Device, s *Settings) (*OnsetResult, error) {
 		}
 	}
 	res.Warnings = m.warnings(res.Frequency, res.HotTemperature)
-	if ss, err := m.shortStack(res.Frequency); err == nil {
+	if ss, err := m.shortStack(res.Frequency, res.HotTemperature-ta, false); err == nil {
 		res.ShortStack = &ss
 	}
 	return res, nil
 }
 
 // shortStack evaluates ShortStack for the first stack at frequency f (Hz):
-// gas at ambient temperature, the stack centre measured from the start end
-// (a closed end, so a pressure antinode), y0 the pores' hydraulic radius.
-func (m *model) shortStack(f float64) (ShortStackResult, error) {
+// gas at ambient temperature, y0 the pores' hydraulic radius, dT the
+// actual temperature difference across the stack (K, for Γ; 0 leaves Γ
+// at zero). The stack centre is measured from the start end (a closed end
+// or a driver, taken as a pressure antinode), or with fromEnd from the far
+// end (for a heat pump whose far end is closed: a rigid end is a pressure
+// antinode, a driver only near resonance).
+func (m *model) shortStack(f, dT float64, fromEnd bool) (ShortStackResult, error) {
 	for _, s := range m.segs {
 		if s.kind != KindStack {
 			continue
@@ -176,10 +180,15 @@ func (m *model) shortStack(f float64) (ShortStackResult, error) {
 			return ShortStackResult{}, err
 		}
 		w := 2 * math.Pi * f
+		pos := s.x0 + s.length/2
+		if fromEnd {
+			pos = m.dev.Length() - pos
+		}
 		return ShortStack(ShortStackInput{
 			Gamma: g.Gamma, Prandtl: g.Prandtl(), MeanTemperature: m.ta, SoundSpeed: g.SoundSpeed,
-			Frequency: f, Position: s.x0 + s.length/2, Length: s.length, HalfGap: s.rh,
-			ThermalDepth: math.Sqrt(2 * g.Conductivity / (g.Density * g.Cp * w)),
+			Frequency: f, Position: pos, Length: s.length, HalfGap: s.rh,
+			ThermalDepth:          math.Sqrt(2 * g.Conductivity / (g.Density * g.Cp * w)),
+			TemperatureDifference: math.Abs(dT),
 		})
 	}
 	return ShortStackResult{}, errors.New("no stack")
@@ -297,6 +306,7 @@ type ModeResult struct {
 	Growing    bool
 	Iterations int
 	Profile    Profile
+	Warnings   []string // model-range warnings (as OnsetResult.Warnings)
 }
 
 // Mode finds the complex frequency ω of the mode nearest the start
@@ -325,6 +335,7 @@ func Mode(dev *Device, hot float64, s *Settings) (*ModeResult, error) {
 	if err != nil {
 		return nil, err
 	}
+	r.Warnings = m.warnings(r.Frequency, hot)
 	if !set.NoProfile {
 		if _, err := m.run(1, 0, &r.Profile); err != nil {
 			return nil, err

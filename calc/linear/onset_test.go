@@ -5,6 +5,7 @@ import (
 	"errors"
 	"math"
 	"os"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -392,6 +393,33 @@ func TestModeAgainstResonator(t *testing.T) {
 		}
 		if !scalar.EqualWithinRel(m.Q, q, 0.005) {
 			t.Errorf("%s: Q %.3f, resonator (wall and radiation) %.3f", c.name, m.Q, q)
+		}
+	}
+}
+
+// TestModeWarnsOutsideGasRange: a hot temperature beyond the gas model's
+// range (the example engine's helium-argon: 200-5000 K in gasprops) gives
+// a warning with the mode, none at ambient.
+func TestModeWarnsOutsideGasRange(t *testing.T) {
+	t.Parallel()
+	d, err := Example("engine")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		hot  float64
+		warn bool
+	}{{d.AmbientTemperature, false}, {5500, true}} {
+		m, err := Mode(d, c.hot, &Settings{NoProfile: true})
+		if err != nil {
+			t.Fatalf("hot %g K: %v", c.hot, err)
+		}
+		got := false
+		for _, w := range m.Warnings {
+			got = got || strings.Contains(w, "outside the gas model's range")
+		}
+		if got != c.warn {
+			t.Errorf("hot %g K: warnings %q, want a range warning: %v", c.hot, m.Warnings, c.warn)
 		}
 	}
 }

@@ -90,6 +90,15 @@ examples:
 	r.add("driver_pressure_amplitude", res.DriverPressure, units.DimPressure)
 	r.add("driver_volume_velocity_amplitude", res.DriverFlow, units.DimVolumeFlow)
 	r.addValue("iterations", res.Iterations)
+	if ss := res.ShortStack; ss != nil {
+		r.add("short_stack_zero_load_span", ss.ZeroLoadSpan, units.DimTemperatureDifference)
+		r.add("short_stack_gradient_ratio", ss.GradientRatio, units.DimNone)
+		r.add("short_stack_k_dx", ss.KDeltaX, units.DimNone)
+		r.add("short_stack_depth_ratio", ss.DepthRatio, units.DimNone)
+		for _, w := range ss.Warnings {
+			r.warn("short-stack estimate: " + w)
+		}
+	}
 	if load.Value == 0 {
 		r.warn("at zero load the COP is zero by definition; give --load to see the COP against Carnot")
 	}

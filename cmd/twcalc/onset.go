@@ -165,6 +165,9 @@ examples:
 		}
 		r.addValue("mode", verdict)
 		r.addValue("iterations", m.Iterations)
+		for _, w := range m.Warnings {
+			r.warn(w)
+		}
 		onsetCautions(r, below.Value, d.MeanPressure, false, false)
 		return r, nil
 	}
@@ -178,6 +181,7 @@ examples:
 	r.addValue("iterations", res.Iterations)
 	if ss := res.ShortStack; ss != nil {
 		r.add("short_stack_critical_difference", ss.CriticalDifference, units.DimTemperatureDifference)
+		r.add("short_stack_gradient_ratio", ss.GradientRatio, units.DimNone)
 		r.add("short_stack_k_dx", ss.KDeltaX, units.DimNone)
 		r.add("short_stack_depth_ratio", ss.DepthRatio, units.DimNone)
 		for _, w := range ss.Warnings {

@@ -28,7 +28,8 @@ func TestOnsetCommandJSON(t *testing.T) {
 	for _, c := range []struct {
 		name string
 		want float64
-	}{{"hot_temperature", want.HotTemperature}, {"frequency", want.Frequency}, {"temperature_ratio", want.TemperatureRatio}} {
+	}{{"hot_temperature", want.HotTemperature}, {"frequency", want.Frequency}, {"temperature_ratio", want.TemperatureRatio},
+		{"short_stack_gradient_ratio", want.ShortStack.GradientRatio}} {
 		v, _ := num(t, rep, c.name)
 		if !scalar.EqualWithinRel(v, c.want, 1e-12) {
 			t.Errorf("%s = %g, want %g", c.name, v, c.want)
@@ -113,7 +114,9 @@ func TestHeatPumpCommandJSON(t *testing.T) {
 		name string
 		want float64
 	}{{"cold_temperature", want.ColdTemperature}, {"temperature_span", want.TemperatureSpan},
-		{"acoustic_power", want.AcousticPower}, {"cop_relative_to_carnot", want.COPRelative}} {
+		{"acoustic_power", want.AcousticPower}, {"cop_relative_to_carnot", want.COPRelative},
+		{"short_stack_zero_load_span", want.ShortStack.ZeroLoadSpan}, {"short_stack_gradient_ratio", want.ShortStack.GradientRatio},
+		{"short_stack_k_dx", want.ShortStack.KDeltaX}, {"short_stack_depth_ratio", want.ShortStack.DepthRatio}} {
 		v, _ := num(t, rep, c.name)
 		if !scalar.EqualWithinRel(v, c.want, 1e-12) {
 			t.Errorf("%s = %g, want %g", c.name, v, c.want)
