@@ -60,6 +60,9 @@ examples:
 		}
 		return nil
 	}
+	if err := strayShapeFlags(fl, *shape); err != nil {
+		return nil, err
+	}
 	var s pore.Shape
 	var err error
 	var solidFrac float64
@@ -202,6 +205,33 @@ func fibreSolidFraction(fl *flags, solid, mass float64, material string, rho, vo
 		return 0, &usageError{msg: "--packed-mass needs --material (steel, copper, ...) or --material-density"}
 	}
 	return pore.SolidFraction(mass, rho, volume)
+}
+
+// shapeFlags lists the geometry flags each --shape reads.
+var shapeFlags = map[string][]string{
+	"plates":      {"half-gap", "plate-thickness"},
+	"circular":    {"radius"},
+	"rectangular": {"half-width", "half-height"},
+	"pins":        {"pin-radius", "pitch"},
+	"screens":     {"mesh-per-inch", "mesh-per-mm", "wire-diameter", "porosity"},
+	"fibres":      {"fibre-diameter", "solid-fraction", "packed-mass", "material", "material-density", "packed-volume"},
+	"honeycomb":   {"cells-per-square-inch", "wall-thickness"},
+	"wide":        {"hydraulic-radius"},
+}
+
+// strayShapeFlags refuses a geometry flag that the chosen shape does not
+// read (`--shape circular --half-gap 1mm`), so that a value typed for the
+// wrong shape is never silently ignored.
+func strayShapeFlags(fl *flags, shape string) error {
+	own := shapeFlags[shape]
+	for _, name := range poreShapes {
+		for _, f := range shapeFlags[name] {
+			if fl.given(f) && !contains(own, f) {
+				return &usageError{msg: fmt.Sprintf("--%s is for --shape %s; --shape %s takes --%s", f, name, shape, strings.Join(own, ", --"))}
+			}
+		}
+	}
+	return nil
 }
 
 // shapeFlagsTyped lists the geometry flags the user typed, as typed, for

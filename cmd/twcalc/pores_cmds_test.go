@@ -201,7 +201,10 @@ func TestPoresErrors(t *testing.T) {
 		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--packed-mass", "10g", "--material", "gold", "--packed-volume", "50cm3"}, []string{"--material", "gold", "steel"}},
 		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--mesh-per-mm", "8", "--wire-diameter", "41um"}, []string{"--mesh-per-inch", "--mesh-per-mm"}},
 		{[]string{"--shape", "honeycomb", "--cells-per-square-inch", "400", "--wall-thickness", "2mm"}, []string{"--wall-thickness 2mm", "pitch"}},
-		{[]string{"--shape", "plates", "--half-gap", "0mm"}, []string{"half"}},
+		{[]string{"--shape", "plates", "--half-gap", "0mm"}, []string{"half", "greater than zero"}},
+		// a flag of another shape is refused, not silently ignored
+		{[]string{"--shape", "circular", "--radius", "0.3mm", "--half-gap", "1mm"}, []string{"--half-gap is for --shape plates", "--radius"}},
+		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--solid-fraction", "0.2", "--wire-diameter", "30um"}, []string{"--wire-diameter", "screens"}},
 	}
 	for _, c := range cases {
 		var o, e bytes.Buffer
