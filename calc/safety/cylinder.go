@@ -15,9 +15,11 @@ type Standard struct {
 	P    units.Pressure    // Pa, absolute
 }
 
-// The reference states offered. ISO 13443 (natural gas, standard reference
-// conditions) uses 15 °C and 101.325 kPa; "normal" conditions 0 °C and
-// 101.325 kPa are common in European gas supply (both from memory).
+// The reference states offered. ISO 13443:1996, Natural gas — Standard
+// reference conditions, uses 15 °C and 101.325 kPa absolute (as summarised
+// on brickslims.com, "ISO 13443:1996"); "normal" conditions 0 °C and
+// 101.325 kPa are the older metric convention (Citizendium, "Reference
+// conditions of gas temperature and pressure").
 var (
 	StandardISO13443 = Standard{Name: "15 °C, 101.325 kPa (ISO 13443)", T: 288.15, P: 101325}
 	StandardNormal   = Standard{Name: "0 °C, 101.325 kPa (normal)", T: 273.15, P: 101325}
