@@ -46,8 +46,10 @@ func trimZeros(s string) string {
 }
 
 // joinUnit appends a unit symbol to a number with a space, as the BIPM SI
-// Brochure (2019) asks, also before % (from memory of its section on
-// writing quantity values).
+// Brochure, 9th ed. (2019), §5.4.3–5.4.7 asks, also before %: "When it is
+// used, a space separates the number and the symbol %" (quoted from the
+// Brochure as reproduced in public material; the section numbers are from
+// memory). NIST SP 811 (2008) §7.2 says the same for °C.
 func joinUnit(num, symbol string) string {
 	if symbol == "" {
 		return num
