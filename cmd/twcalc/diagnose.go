@@ -43,7 +43,7 @@ func runDiagnose(args []string) (*report, error) {
 		if err != nil {
 			return nil, fl.blame(err, "measured-frequency", "length", "radius", "temperature", "pressure", "mode")
 		}
-		r.input("second_gas", sec.Name)
+		r.input("second-gas", sec.Name)
 		recordInputs(fl, r, "temperature")
 	} else {
 		e, err = s.DiagnoseTemperature(meas.Value)

@@ -207,7 +207,7 @@ func sweepReport(fl *flags, r *report, s resonator.Setup, spec, second string) (
 		if e != nil {
 			return nil, e
 		}
-		r.input("second_gas", second.Name)
+		r.input("second-gas", second.Name)
 		pts, err = s.SweepFraction(first, second, sp.From, sp.To, sp.N)
 		header = []string{"mole_fraction_" + second.Name, "frequency_Hz"}
 	}
