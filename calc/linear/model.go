@@ -424,11 +424,14 @@ func (m *model) propagate(s *segment, y []complex128, prof *Profile) {
 
 // residual returns the far-end boundary residual in Pa for the end state y:
 // closed end: (ρa/A) U1; open end: p1 - Z U1 with the low-ka radiation
-// impedance of an unflanged pipe (Levine & Schwinger, Phys. Rev. 73, 383,
-// 1948: real part (ka)²/4, end correction 0.6133 a) or of a pipe in an
-// infinite flange (real part (ka)²/2, end correction 0.8216 a; Kinsler,
-// Frey, Coppens & Sanders, Fundamentals of Acoustics, 4th ed. 2000, ch. 7,
-// from memory):
+// impedance of an unflanged pipe (Levine & Schwinger, Phys. Rev. 73,
+// 383-406, 1948: end correction 0.6133 a, as printed in the paper's
+// abstract; real part (ka)²/4, checked against the exact integrals in
+// calc/resonator's tests) or of a pipe in an infinite flange (end
+// correction 0.8216 a, Norris & Sheng 1989, as quoted by Dalmont,
+// Nederveen & Joly, J. Sound Vib. 2001; real part (ka)²/2, the low-ka
+// limit of the baffled piston, Kinsler, Frey, Coppens & Sanders,
+// Fundamentals of Acoustics, 4th ed. 2000, ch. 7, from memory):
 //
 //	Z = ρa/A [(ka)²/4 + i k 0.6133 a]
 func (m *model) residual(y [3]complex128) complex128 {
