@@ -53,7 +53,7 @@ func ExpansionEnergy(p, pa units.Pressure, V, gamma float64) (StoredEnergy, erro
 	}
 	if !finite(float64(p)) || p <= pa {
 		e := units.NewRangeError("pressure (absolute)", float64(p), float64(pa), math.Inf(1), "Pa")
-		e.Why = "must exceed the ambient pressure for any energy to be stored"
+		e.Why = "the ambient pressure: no energy is stored at or below it"
 		return StoredEnergy{}, e
 	}
 	if err := positive("volume", V, "m³"); err != nil {

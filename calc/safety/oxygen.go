@@ -194,7 +194,7 @@ func ReleaseVolume(V float64, p units.Pressure, T units.Temperature, z float64, 
 	}
 	if !finite(float64(p)) || p < pa {
 		e := units.NewRangeError("fill pressure (absolute)", float64(p), float64(pa), math.Inf(1), "Pa")
-		e.Why = "at least the room pressure"
+		e.Why = "the room pressure: below it no gas leaves"
 		return 0, e
 	}
 	return V * (float64(p)/(z*float64(T)) - float64(pa)/float64(Troom)) * float64(Troom) / float64(pa), nil

@@ -43,9 +43,7 @@ func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 // positive returns a RangeError unless v is finite and > 0.
 func positive(field string, v float64, unit string) error {
 	if !finite(v) || v <= 0 {
-		e := units.NewRangeError(field, v, 0, math.Inf(1), unit)
-		e.Why = "zero is not allowed"
-		return e
+		return units.NewRangeError(field, v, 0, math.Inf(1), unit)
 	}
 	return nil
 }

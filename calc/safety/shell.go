@@ -143,9 +143,13 @@ func ASMEShell(in ShellInput) (Shell, error) {
 	if err := positive("allowable stress", in.Allowable, "Pa"); err != nil {
 		return Shell{}, err
 	}
-	if !finite(in.JointEfficiency) || in.JointEfficiency <= 0 || in.JointEfficiency > 1 {
-		e := units.NewRangeError("joint efficiency", in.JointEfficiency, 0, 1, "")
-		e.Why = "greater than 0 and at most 1; 1 for seamless tube, less for welded seams (UW-12)"
+	if E := in.JointEfficiency; !finite(E) || E <= 0 || E > 1 {
+		// (0, 1] is half open: say the bound that was crossed.
+		e := units.NewRangeError("joint efficiency", E, 0, math.Inf(1), "")
+		if E > 1 {
+			e = units.NewRangeError("joint efficiency", E, math.Inf(-1), 1, "")
+		}
+		e.Why = "1 for seamless tube, less for welded seams (UW-12)"
 		return Shell{}, e
 	}
 	if err := nonNegative("corrosion allowance", in.Corrosion, "m"); err != nil {
@@ -156,7 +160,7 @@ func ASMEShell(in ShellInput) (Shell, error) {
 	}
 	if in.Wall > 0 && in.Wall <= in.Corrosion {
 		e := units.NewRangeError("wall thickness", in.Wall, in.Corrosion, math.Inf(1), "m")
-		e.Why = "must exceed the corrosion allowance"
+		e.Why = "the corrosion allowance"
 		return Shell{}, e
 	}
 	SE := in.Allowable * in.JointEfficiency
