@@ -130,8 +130,8 @@ func TestZonedUniformIsTube(t *testing.T) {
 // the scipy check above covers the exact values.)
 func TestZonedTubeGas(t *testing.T) {
 	t.Parallel()
-	air := mixture(t, "argon")
-	zt := ZonedTube{Ends: ClosedOpen, Correction: Unflanged, Gas: air, Pressure: 101325,
+	argon := mixture(t, "argon")
+	zt := ZonedTube{Ends: ClosedOpen, Correction: Unflanged, Gas: argon, Pressure: 101325,
 		Zones: []Zone{{Length: 0.1, Radius: 0.01, Temperature: 700}, {Length: 0.4, Radius: 0.01, Temperature: 300}}}
 	hot, err := zt.Modes(3)
 	if err != nil {
@@ -154,7 +154,7 @@ func TestZonedTubeGas(t *testing.T) {
 			t.Errorf("difference %g != %g - %g", m.Difference, m.TravelTime, m.Frequency)
 		}
 	}
-	if _, err := (ZonedTube{Ends: ClosedOpen, Gas: air, Pressure: 101325}).Modes(1); err == nil {
+	if _, err := (ZonedTube{Ends: ClosedOpen, Gas: argon, Pressure: 101325}).Modes(1); err == nil {
 		t.Error("no zones: no error")
 	}
 	bad := zt
