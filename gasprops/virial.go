@@ -33,8 +33,7 @@ const (
 	// (2001) Appendix A and the reference equations of state, as recalled
 	// (from memory); nitrogen's 126.192 K, 3.3958 MPa and 0.0372 were
 	// checked against the header of the NIST REFPROP 10 nitrogen fluid file
-	// (the constants of Span et al., J. Phys. Chem. Ref. Data 29, 1361,
-	// 2000), as reproduced in a public repository.
+	// (NITROGEN.FLD), as reproduced in a public repository.
 	virialTsonopoulos
 )
 
