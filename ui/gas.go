@@ -24,7 +24,17 @@ type gasScreen struct {
 	nonIdeal widget.Bool
 	results  *Results
 	dirty    bool
+	// rangeNote says over which temperatures the chosen gas's model was
+	// validated; "" when the gas text does not parse.
+	rangeNote string
 }
+
+// gasModelNote says in plain words what the gasprops models are (see
+// gasprops/doc.go), so a user can judge the numbers.
+const gasModelNote = "Ideal gas unless the real-gas correction is on (second virial: density and sound speed only; not hydrogen). " +
+	"Viscosity and conductivity are low-pressure values, the same at any pressure, from published fits and reference tables " +
+	"(NASA CEA; Lemmon & Jacobsen for air; Huber et al. for carbon dioxide; xenon scaled from krypton); " +
+	"noble-gas mixtures by Chapman–Enskog kinetic theory. Viscosity and conductivity checked against CRC Handbook tables at 200–600 K within 2 %."
 
 // newGasScreen builds the working-gas screen.
 func newGasScreen(env *Env) Screen {
@@ -107,10 +117,15 @@ func (s *gasScreen) compute() {
 	r.Reset()
 	s.temp.SetError(nil)
 	s.press.SetError(nil)
+	s.rangeNote = ""
 	mix, err := s.picker.Mixture()
 	if err != nil {
 		r.Fail(err)
 		return
+	}
+	if lo, hi := mix.Range(); usable(lo) && usable(hi) {
+		s.rangeNote = "Model validated for this gas from " + units.Format(lo, units.DimTemperature) + " to " +
+			units.Format(hi, units.DimTemperature) + "; just outside it the results carry a warning, further out there is no result."
 	}
 	tq, terr := s.temp.Quantity()
 	pq, perr := s.press.Quantity()
@@ -163,7 +178,12 @@ func (s *gasScreen) Layout(gtx layout.Context) layout.Dimensions {
 			return cb.Layout(gtx)
 		},
 		s.results.Layout,
-		Note(s.env, "Ideal gas unless the real-gas correction is on. Transport properties from kinetic theory; "+
-			"the gas models and their sources are listed in the gasprops package documentation."),
+		func(gtx layout.Context) layout.Dimensions {
+			if s.rangeNote == "" {
+				return layout.Dimensions{}
+			}
+			return Described("Model range", Note(s.env, s.rangeNote))(gtx)
+		},
+		Note(s.env, gasModelNote),
 	)
 }
