@@ -69,23 +69,28 @@ func newPartEditor(env *Env, p linear.PartFile) *partEditor {
 		}
 		e.shape = NewChoice(env, "Pores", linear.PoreShapes, poreShapeLabels)
 		e.shape.Select(pores.Shape)
+		// Pore sizes are fractions of a millimetre: the generic length
+		// hint ("250 mm") would mislead; the mesh count has its own.
+		const small = "e.g. 0.25 mm, 250 um, 0.01 in"
+		const mesh = "wires per inch or per mm: 200 /in, 8 /mm"
 		for _, pf := range []struct {
 			shape, key, label string
 			dim               units.Dimension
-			text              string
+			text, hint        string
 		}{
-			{"plates", "half_gap", "Half gap y0", units.DimLength, pores.HalfGap},
-			{"plates", "thickness", "Plate thickness (optional)", units.DimLength, pores.Thickness},
-			{"circular", "radius", "Pore radius", units.DimLength, pores.Radius},
-			{"rectangular", "half_width", "Half width", units.DimLength, pores.HalfWidth},
-			{"rectangular", "half_height", "Half height", units.DimLength, pores.HalfHeight},
-			{"pins", "pin_radius", "Pin radius", units.DimLength, pores.PinRadius},
-			{"pins", "pitch", "Pin pitch", units.DimLength, pores.Pitch},
-			{"screens", "mesh", "Mesh count", units.DimPerLength, pores.Mesh},
-			{"screens", "wire_diameter", "Wire diameter", units.DimLength, pores.WireDiameter},
-			{"fibres", "fibre_diameter", "Fibre diameter", units.DimLength, pores.FibreDiameter},
+			{"plates", "half_gap", "Half gap y0", units.DimLength, pores.HalfGap, small},
+			{"plates", "thickness", "Plate thickness (optional)", units.DimLength, pores.Thickness, small},
+			{"circular", "radius", "Pore radius", units.DimLength, pores.Radius, small},
+			{"rectangular", "half_width", "Half width", units.DimLength, pores.HalfWidth, small},
+			{"rectangular", "half_height", "Half height", units.DimLength, pores.HalfHeight, small},
+			{"pins", "pin_radius", "Pin radius", units.DimLength, pores.PinRadius, small},
+			{"pins", "pitch", "Pin pitch", units.DimLength, pores.Pitch, small},
+			{"screens", "mesh", "Mesh count", units.DimPerLength, pores.Mesh, mesh},
+			{"screens", "wire_diameter", "Wire diameter", units.DimLength, pores.WireDiameter, small},
+			{"fibres", "fibre_diameter", "Fibre diameter", units.DimLength, pores.FibreDiameter, small},
 		} {
 			f := NewField(env, pf.label, pf.dim, pf.text)
+			f.Hint = pf.hint
 			e.fields = append(e.fields, partField{key: pf.key, f: f, shape: pf.shape})
 		}
 	case linear.KindCavity:
