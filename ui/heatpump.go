@@ -16,16 +16,9 @@ import (
 // profiles and the span against drive frequency. Solves run off the UI
 // goroutine; a newer edit cancels a stale one.
 type heatPumpScreen struct {
-	env     *Env
-	page    *Page
-	editor  *deviceEditor
-	load    *Field
-	job     *Job[*pumpOutcome]
-	dev     *linear.Device
-	results *Results
-	caution *Caution
-	plots   []*Plot
-	status  string
+	deviceView
+	load *Field
+	job  *Job[*pumpOutcome]
 }
 
 // pumpOutcome is what one heat-pump solve produces.
@@ -38,18 +31,11 @@ type pumpOutcome struct {
 // newHeatPumpScreen builds the heat-pump screen with the example pump.
 func newHeatPumpScreen(env *Env) Screen {
 	s := &heatPumpScreen{
-		env:     env,
-		page:    NewPage(env),
-		editor:  newDeviceEditor(env, "heatpump"),
-		load:    NewField(env, "Cooling load at the cold side", units.DimPower, "0 W"),
-		job:     NewJob[*pumpOutcome](env.Invalidate),
-		results: NewResults(env),
-		caution: NewCaution(env, "Sound, pressure and cold parts"),
+		deviceView: newDeviceView(env, "heatpump", "Sound, pressure and cold parts", 4),
+		load:       NewField(env, "Cooling load at the cold side", units.DimPower, "0 W"),
+		job:        NewJob[*pumpOutcome](env.Invalidate),
 	}
 	s.load.Hint = "W or mW; 0 for the zero-load span"
-	for i := 0; i < 4; i++ {
-		s.plots = append(s.plots, NewPlot(env))
-	}
 	return s
 }
 
@@ -87,31 +73,20 @@ func (s *heatPumpScreen) start() {
 	}
 	if err != nil {
 		s.job.Cancel()
-		s.results.Reset()
-		s.results.Fail(err)
-		s.status = ""
-		for _, p := range s.plots {
-			p.Set(nil)
-		}
+		s.fail(err)
 		return
 	}
-	s.dev = d
-	s.status = "Solving…"
+	s.solving(d)
 	s.job.Start(func(ctx context.Context) (*pumpOutcome, error) { return solvePump(ctx, d, load) })
 }
 
 func (s *heatPumpScreen) show(o *pumpOutcome, err error) {
-	r := s.results
-	r.Reset()
-	s.status = ""
 	if err != nil {
-		r.Fail(err)
-		s.caution.Lines = nil
-		for _, p := range s.plots {
-			p.Set(nil)
-		}
+		s.fail(err)
 		return
 	}
+	s.done()
+	r := s.results
 	x := o.res
 	r.AddIn("Cold temperature", x.ColdTemperature, "K")
 	if c, err := units.FormatIn(x.ColdTemperature, "degC"); err == nil {
@@ -169,19 +144,8 @@ func (s *heatPumpScreen) Layout(gtx layout.Context) layout.Dimensions {
 	if changed {
 		s.start()
 	}
-	ws := []layout.Widget{
-		Para(s.env, "Build the heat pump from parts, driver first; mark the stack's cold side \"cold\". The span is solved with Rott's linear theory and the total-power equation through the stack after every change."),
-		Heading(s.env, "Heat pump"),
-	}
-	if s.status != "" {
-		ws = append(ws, Note(s.env, s.status))
-	}
-	ws = append(ws, s.results.Layout)
-	if len(s.caution.Lines) > 0 {
-		ws = append(ws, s.caution.Layout)
-	}
-	ws = append(ws, s.load.Layout)
-	ws = append(ws, s.editor.Layout(gtx, s.dev)...)
+	ws := s.top(gtx, "Build the heat pump from parts, driver first; mark the stack's cold side \"cold\". The span is solved with Rott's linear theory and the total-power equation through the stack after every change.",
+		"Heat pump", s.load)
 	ws = append(ws, Heading(s.env, "Along the device"), s.plots[0].Layout, s.plots[1].Layout, s.plots[2].Layout)
 	ws = append(ws, Heading(s.env, "Span against drive frequency"), s.plots[3].Layout)
 	ws = append(ws, Note(s.env, "Method: Rott's linear wave equations (Swift 2002, ch. 4) with the total power through the stack held at minus the load (Swift 2002, ch. 7); zero load is the largest span. The cold side is taken as insulated."))

@@ -17,16 +17,9 @@ import (
 // temperature against mean pressure. Every valid edit starts a new solve off
 // the UI goroutine; a newer edit cancels the stale one.
 type onsetScreen struct {
-	env     *Env
-	page    *Page
-	editor  *deviceEditor
-	probe   *Field // a hot temperature at which to show growth or decay
-	job     *Job[*onsetOutcome]
-	dev     *linear.Device // last valid device
-	results *Results
-	caution *Caution
-	plots   []*Plot
-	status  string
+	deviceView
+	probe *Field // a hot temperature at which to show growth or decay
+	job   *Job[*onsetOutcome]
 }
 
 // onsetOutcome is what one solve produces.
@@ -41,19 +34,11 @@ type onsetOutcome struct {
 
 // newOnsetScreen builds the onset screen with the example engine.
 func newOnsetScreen(env *Env) Screen {
-	s := &onsetScreen{
-		env:     env,
-		page:    NewPage(env),
-		editor:  newDeviceEditor(env, "engine"),
-		probe:   NewField(env, "Check a hot temperature below or above onset", units.DimTemperature, "500 K"),
-		job:     NewJob[*onsetOutcome](env.Invalidate),
-		results: NewResults(env),
-		caution: NewCaution(env, "Hot parts, pressure and sound"),
+	return &onsetScreen{
+		deviceView: newDeviceView(env, "engine", "Hot parts, pressure and sound", 5),
+		probe:      NewField(env, "Check a hot temperature below or above onset", units.DimTemperature, "500 K"),
+		job:        NewJob[*onsetOutcome](env.Invalidate),
 	}
-	for i := 0; i < 5; i++ {
-		s.plots = append(s.plots, NewPlot(env))
-	}
-	return s
 }
 
 // Title implements Screen.
@@ -93,35 +78,22 @@ func (s *onsetScreen) start() {
 	d, err := s.editor.File().Validate()
 	if err != nil {
 		s.job.Cancel()
-		s.results.Reset()
-		s.results.Fail(err)
-		s.status = ""
-		s.clearPlots()
+		s.fail(err)
 		return
 	}
-	s.dev = d
-	s.status = "Solving…"
+	s.solving(d)
 	probe, _ := s.probe.Value()
 	s.job.Start(func(ctx context.Context) (*onsetOutcome, error) { return solveOnset(ctx, d, probe) })
 }
 
-func (s *onsetScreen) clearPlots() {
-	for _, p := range s.plots {
-		p.Set(nil)
-	}
-}
-
 // show fills results, cautions and plots from a finished solve.
 func (s *onsetScreen) show(o *onsetOutcome, err error) {
-	r := s.results
-	r.Reset()
-	s.status = ""
 	if err != nil {
-		r.Fail(err)
-		s.clearPlots()
-		s.caution.Lines = nil
+		s.fail(err)
 		return
 	}
+	s.done()
+	r := s.results
 	res := o.onset
 	r.AddIn("Hot temperature at onset", res.HotTemperature, "K")
 	if c, err := units.FormatIn(res.HotTemperature, "degC"); err == nil {
@@ -239,19 +211,8 @@ func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
 	if changed {
 		s.start()
 	}
-	ws := []layout.Widget{
-		Para(s.env, "Build the engine from parts, closed end first. The hot temperature and frequency at which it starts are solved with Rott's linear theory after every change."),
-	}
-	ws = append(ws, Heading(s.env, "Onset"))
-	if s.status != "" {
-		ws = append(ws, Note(s.env, s.status))
-	}
-	ws = append(ws, s.results.Layout)
-	if len(s.caution.Lines) > 0 {
-		ws = append(ws, s.caution.Layout)
-	}
-	ws = append(ws, s.probe.Layout)
-	ws = append(ws, s.editor.Layout(gtx, s.dev)...)
+	ws := s.top(gtx, "Build the engine from parts, closed end first. The hot temperature and frequency at which it starts are solved with Rott's linear theory after every change.",
+		"Onset", s.probe)
 	ws = append(ws, Heading(s.env, "Along the device at onset"))
 	for _, p := range s.plots[:4] {
 		ws = append(ws, p.Layout)

@@ -66,6 +66,10 @@ func TestOnsetScreenEdits(t *testing.T) {
 	if f := s.results.Failure(); !strings.Contains(f, `part 4 (stack): field "porosity" = 1.4 must be in (0, 1]`) {
 		t.Errorf("porosity 1.4: failure %q", f)
 	}
+	// No result, no caution: its lines quoted the last onset temperature.
+	if len(s.caution.Lines) != 0 {
+		t.Errorf("porosity 1.4: a stale caution is still shown: %q", s.caution.Lines)
+	}
 	// Mend it: a new solve with the new value.
 	h.retype("Porosity (open fraction)", "1.4", "0.6")
 	solved()
