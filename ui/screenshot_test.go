@@ -12,7 +12,8 @@ package ui
 //	SHOT_DIR=/tmp/shots go test -run Screenshot ./ui/
 //
 // which writes SHOT_DIR/<name>-<size>.png for the catalog home and for every
-// catalog screen in its starting state. Without SHOT_DIR the pictures are
+// catalog screen in its starting state, and SHOT_DIR/<id>-tall.png, every
+// screen whole on a 412 dp wide window. Without SHOT_DIR the pictures are
 // still rendered and checked (top bar and margin colours, some dark text
 // pixels). Where no renderer can be had the tests skip with the reason,
 // except under CI (CI set), where they fail.
@@ -86,6 +87,23 @@ func TestScreenshot(t *testing.T) {
 					shootApp(t, e.ID+"-"+sz.name, sz.size, a)
 				})
 			}
+		})
+	}
+}
+
+// TestScreenshotTall pictures every catalog screen on a phone-wide window
+// tall enough for the whole page, so that a reviewer sees all of a phone
+// screen at once (SHOT_DIR/<id>-tall.png; cut it into screen heights to
+// read it). Only with SHOT_DIR: it checks nothing TestScreenshot does not.
+func TestScreenshotTall(t *testing.T) {
+	if os.Getenv("SHOT_DIR") == "" {
+		t.Skip("pictures for people only: set SHOT_DIR")
+	}
+	for _, e := range Catalog() {
+		t.Run(e.ID, func(t *testing.T) {
+			a := NewApp(nil)
+			a.Open(e.ID)
+			shootApp(t, e.ID+"-tall", image.Pt(412, 6000), a)
 		})
 	}
 }
