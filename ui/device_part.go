@@ -42,7 +42,7 @@ var (
 	tempKeys        = []string{"ambient", "hot", "cold", "value"}
 	tempLabels      = []string{"Ambient", "Hot", "Cold", "A value"}
 	flangeKeys      = []string{"none", "infinite"}
-	flangeLabels    = []string{"Bare pipe end", "In a wide wall"}
+	flangeLabels    = []string{"Unflanged (bare tube end)", "Flanged (end in a wall)"} // as on the Tube resonance screen
 	ampKeys         = []string{"pressure", "flow"}
 	ampLabels       = []string{"Pressure amplitude", "Volume-velocity amplitude"}
 	poreShapeLabels = []string{"Plates", "Circular", "Rectangular", "Pins", "Screens", "Fibres"}
@@ -106,7 +106,7 @@ func newPartEditor(env *Env, p linear.PartFile) *partEditor {
 		}
 		add("frequency", "Drive frequency", units.DimFrequency, p.Frequency)
 	case linear.KindOpenEnd:
-		e.flange = NewChoice(env, "Open end", flangeKeys, flangeLabels)
+		e.flange = NewChoice(env, "End correction at the open end", flangeKeys, flangeLabels)
 		if p.Flange == "infinite" {
 			e.flange.Select("infinite")
 		}
