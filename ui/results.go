@@ -208,11 +208,15 @@ func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) lay
 	return dims
 }
 
-// String lists the rows as "label: value" lines (for tests and logs).
+// String lists the rows as "label: value" lines, each row's note on an
+// indented line below it (for tests and logs).
 func (r *Results) String() string {
 	s := ""
 	for _, row := range r.rows {
 		s += fmt.Sprintf("%s: %s\n", row.label, row.value)
+		if row.note != "" {
+			s += "  " + row.note + "\n"
+		}
 	}
 	return s
 }

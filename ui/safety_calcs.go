@@ -3,6 +3,7 @@ package ui
 import (
 	"errors"
 	"fmt"
+	"strconv"
 	"strings"
 
 	"gioui.org/layout"
@@ -512,14 +513,26 @@ func (c *soundCalc) compute() {
 	r := c.rec
 	r.add("Sound pressure level in the resonator (rms)", s.SPL, units.DimSoundLevel, dBText(s.SPL))
 	r.add("Peak level in the resonator", s.Peak, units.DimSoundLevel, dBText(s.Peak))
-	n := 0
-	for _, l := range s.Limits {
+	n, top := 0, -1
+	for i, l := range s.Limits {
 		if l.Over {
 			n++
+			if top < 0 || l.Level > s.Limits[top].Level {
+				top = i
+			}
 		}
 	}
-	r.text("Occupational limits this level reaches", fmt.Sprintf("%d of %d", n, len(s.Limits)))
-	r.res.AddNote("EU 2003/10/EC and OSHA 1910.95; a level inside the vessel is not exposure")
+	reached := fmt.Sprintf("%d of %d", n, len(s.Limits))
+	note := "none of the EU 2003/10/EC and OSHA 1910.95 limits"
+	if n == len(s.Limits) {
+		reached = fmt.Sprintf("all %d", n)
+	}
+	if top >= 0 {
+		l := s.Limits[top]
+		note = "the highest: " + l.Name + ", " + strconv.FormatFloat(l.Level, 'g', -1, 64) + " for " + l.Metric
+	}
+	r.text("Occupational limits this level reaches", reached)
+	r.res.AddNote(note + "; a level inside the vessel is not exposure")
 	osha, eu := safety.PermittedHours(value(c.ear))
 	r.add("At the measured level: OSHA permitted time per day", osha*3600, units.DimTime, durationText(osha*3600))
 	r.add("At the measured level: time to the EU limit of 87 dB(A)", eu*3600, units.DimTime, durationText(eu*3600))

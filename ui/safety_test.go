@@ -292,3 +292,37 @@ func shootTall(t *testing.T, name string, env *Env, s Screen) {
 		shootApp(t, name+"-tallphone", image.Pt(412, 2600), a)
 	})
 }
+
+// TestSoundLimitsReached: the hearing item says how many of the
+// occupational limits of calc/safety a level reaches and names the highest.
+// Levels: SPL = 20 log10(A/√2 / 20 µPa), peak = 20 log10(A / 20 µPa) (ISO
+// 80000-8 definition, as in calc/safety.Level); limits from EU Directive
+// 2003/10/EC Art. 3 and OSHA 29 CFR 1910.95 as listed in calc/safety.
+func TestSoundLimitsReached(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct {
+		amp          string
+		reached      string
+		noteContains string
+	}{
+		// 5 kPa: SPL 164.9 dB, peak 168.0 dB, over all nine (the
+		// highest, 140 dB peak, first listed for the EU).
+		{"5 kPa", "all 9", "EU 2003/10/EC exposure limit value, peak, 140"},
+		// 0.02 Pa: SPL 57.0 dB, peak 60.0 dB, under the lowest (80 dB).
+		{"0.02 Pa", "0 of 9", "none of the EU 2003/10/EC and OSHA 1910.95 limits"},
+		// 1 Pa: SPL 91.0 dB, peak 94.0 dB: EU 80, 85, 87 and OSHA 85,
+		// 90 reached, no peak limit; the highest is OSHA's 90.
+		{"1 Pa", "5 of 9", "OSHA 1910.95 permissible exposure limit, 90"},
+	} {
+		s := newSoundCalc(NewEnv(nil))
+		s.amp.SetText(c.amp)
+		s.compute()
+		got, ok := s.rec.res.Value("Occupational limits this level reaches")
+		if !ok || got != c.reached {
+			t.Errorf("%s: limits reached %q (shown %v), want %q", c.amp, got, ok, c.reached)
+		}
+		if txt := s.rec.res.String(); !strings.Contains(txt, c.noteContains) {
+			t.Errorf("%s: results do not say %q:\n%s", c.amp, c.noteContains, txt)
+		}
+	}
+}
