@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"math/cmplx"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -97,6 +98,18 @@ func TestShortStackZeroLoadRatio(t *testing.T) {
 	in.Prandtl, in.ThermalDepth, in.HalfGap, in.Length = 0.7, 1e-4, 1e-3, 0.5
 	if r, _ = ShortStack(in); len(r.Warnings) == 0 || r.KDeltaX < 3 {
 		t.Errorf("long stack: no warning (%+v)", r)
+	}
+	// pores much narrower than δν: Γ0 = (1+√σ)(1+√σ-δν/y0)/(1+√σ+σ) is
+	// negative (hand-calculated: σ = 0.7, δν/y0 = 2.09 > 1 + √σ) and a warning says
+	// the estimate gives no zero-load span
+	in.Length, in.HalfGap = 0.001, 4e-5
+	r, _ = ShortStack(in)
+	found := false
+	for _, w := range r.Warnings {
+		found = found || strings.Contains(w, "no zero-load span")
+	}
+	if r.ZeroLoadRatio >= 0 || !found {
+		t.Errorf("narrow pores: Γ0 = %g, warnings %q; want Γ0 < 0 and a warning", r.ZeroLoadRatio, r.Warnings)
 	}
 	if _, err := ShortStack(ShortStackInput{Gamma: 1}); err == nil {
 		t.Error("γ = 1: no error")

@@ -111,5 +111,5 @@ func (p *newtonProblem) solve() error {
 		}
 	}
 	p.iterations = p.maxIter
-	return fmt.Errorf("%d iterations were not enough (residual norm %.3g)", p.maxIter, p.norm)
+	return fmt.Errorf("the iteration limit was reached with residual norm %.3g", p.norm)
 }

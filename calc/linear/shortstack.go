@@ -93,6 +93,9 @@ func ShortStack(in ShortStackInput) (ShortStackResult, error) {
 	if r.DepthRatio > 0.5 {
 		r.Warnings = append(r.Warnings, fmt.Sprintf("δκ/y0 = %.2f is not small: the boundary-layer form is rough", r.DepthRatio))
 	}
+	if r.ZeroLoadRatio <= 0 {
+		r.Warnings = append(r.Warnings, fmt.Sprintf("δν/y0 = %.2f: viscous losses outweigh the pumping, so the short-stack estimate gives no zero-load span", dn/in.HalfGap))
+	}
 	if kx := math.Mod(k*in.Position, math.Pi); kx < 0.05 || math.Abs(kx-math.Pi/2) < 0.05 || kx > math.Pi-0.05 {
 		r.Warnings = append(r.Warnings, "the stack sits at a pressure or velocity node, where the critical gradient is infinite or zero")
 	}
