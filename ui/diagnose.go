@@ -149,7 +149,10 @@ func (s *diagnoseScreen) compute() {
 		return
 	}
 	r.AddPM("Mole fraction of "+b.Name, e.Value, e.Sigma, units.DimNone)
-	r.AddText("As a percentage", fmt.Sprintf("%.3g %% ± %.2g %%", 100*e.Value, 100*e.Sigma))
+	// The units formatter writes "—" for a non-finite value, never NaN.
+	if pct, err := units.FormatPMIn(e.Value, e.Sigma, units.DimNone, "%"); err == nil {
+		r.AddText("As a percentage", pct)
+	}
 	s.head, _ = r.Value("As a percentage")
 	r.AddNote(fmt.Sprintf("%s in %s, by mole (≈ by volume for ideal gases)", b.Name, a.Name))
 	r.Warn(e.Warnings...)

@@ -45,4 +45,12 @@ func TestDiagnoseScreen(t *testing.T) {
 	if got, _ := h.shown("Mole fraction of argon"); got != units.Format(x.Value, units.DimNone) {
 		t.Fatalf("mole fraction shown %q, want %q:\n%s", got, units.Format(x.Value, units.DimNone), h.dump())
 	}
+	// The same number as a percentage, through the units formatter.
+	want, err := units.FormatPMIn(x.Value, x.Sigma, units.DimNone, "%")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, _ := h.shown("As a percentage"); got != want {
+		t.Errorf("percentage shown %q, want %q", got, want)
+	}
 }
