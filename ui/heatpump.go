@@ -147,7 +147,7 @@ func (s *heatPumpScreen) Layout(gtx layout.Context) layout.Dimensions {
 	ws := s.top(gtx, "Build the heat pump from parts, driver first; mark the stack's cold side \"cold\". The span is solved with Rott's linear theory and the total-power equation through the stack after every change.",
 		"Heat pump", s.load)
 	ws = append(ws, Heading(s.env, "Along the device"), s.plots[0].Layout, s.plots[1].Layout, s.plots[2].Layout)
-	ws = append(ws, Heading(s.env, "Span against drive frequency"), s.plots[3].Layout)
+	ws = append(ws, Heading(s.env, "Best drive frequency"), s.plots[3].Layout)
 	ws = append(ws, Note(s.env, "Method: Rott's linear wave equations (Swift 2002, ch. 4) with the total power through the stack held at minus the load (Swift 2002, ch. 7); zero load is the largest span. The cold side is taken as insulated."))
 	return s.page.Layout(gtx, ws...)
 }

@@ -218,7 +218,7 @@ func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
 		ws = append(ws, p.Layout)
 	}
 	ws = append(ws, Note(s.env, "Profiles for |p1| = 1 Pa at the start end: the linear theory fixes shapes, not amplitudes."))
-	ws = append(ws, Heading(s.env, "Onset against mean pressure"), s.plots[4].Layout)
+	ws = append(ws, Heading(s.env, "Onset and fill pressure"), s.plots[4].Layout)
 	ws = append(ws, Note(s.env, "Method: Rott's linear wave equations for p1 and U1 with the thermoviscous functions of each part (Swift 2002, ch. 4), integrated part by part; onset is the hot temperature and real frequency that meet the far-end condition."))
 	return s.page.Layout(gtx, ws...)
 }
