@@ -43,20 +43,7 @@ func newOperatingPoint(env *Env, freq string) *operatingPoint {
 
 // enter takes the gas, temperature and pressure last used elsewhere.
 func (op *operatingPoint) enter() bool {
-	b := op.env.Bench
-	changed := false
-	if b.Gas != "" && b.Gas != op.picker.Text() && op.picker.SetText(b.Gas) == nil {
-		changed = true
-	}
-	if v, ok := op.temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
-		op.temp.SetText(units.Format(b.Temperature, units.DimTemperature))
-		changed = true
-	}
-	if v, ok := op.press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
-		op.press.SetText(formatPressure(b.Pressure))
-		changed = true
-	}
-	return changed
+	return takeBench(op.env.Bench, op.picker, op.temp, op.press)
 }
 
 // benchFrequency returns the carried-over frequency when it differs from

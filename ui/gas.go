@@ -2,7 +2,6 @@ package ui
 
 import (
 	"errors"
-	"math"
 	"strings"
 
 	"gioui.org/layout"
@@ -58,37 +57,9 @@ func (s *gasScreen) Title() string { return "Working gas" }
 // Enter takes the gas, temperature and pressure last used on another
 // screen.
 func (s *gasScreen) Enter() {
-	b := s.env.Bench
-	if b.Gas != "" && b.Gas != s.picker.Text() {
-		if s.picker.SetText(b.Gas) == nil {
-			s.dirty = true
-		}
-	}
-	if v, ok := s.temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
-		s.temp.SetText(units.Format(b.Temperature, units.DimTemperature))
+	if takeBench(s.env.Bench, s.picker, s.temp, s.press) {
 		s.dirty = true
 	}
-	if v, ok := s.press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
-		s.press.SetText(formatPressure(b.Pressure))
-		s.dirty = true
-	}
-}
-
-// near reports whether a and b agree to 1e-9 relative (other screens use
-// it too, to see whether a Bench value differs from a field's).
-func near(a, b float64) bool {
-	return math.Abs(a-b) <= 1e-9*max(math.Abs(a), math.Abs(b))
-}
-
-// abs is math.Abs (kept: other screens call it).
-func abs(v float64) float64 { return math.Abs(v) }
-
-// formatPressure writes a pressure in bar for a field's text.
-func formatPressure(pa float64) string {
-	if s, err := units.FormatIn(pa, "bar"); err == nil {
-		return s
-	}
-	return units.Format(pa, units.DimPressure)
 }
 
 // update handles the controls' events and recomputes when an input changed.

@@ -170,29 +170,6 @@ func (s *resonanceScreen) Enter() {
 	}
 }
 
-// takeBench sets the gas picker and the temperature and pressure fields
-// (each may be nil) from the Bench where it holds other values, and reports
-// whether anything changed.
-func takeBench(b *Bench, picker *GasPicker, temp, press *Field) bool {
-	changed := false
-	if picker != nil && b.Gas != "" && b.Gas != picker.Text() && picker.SetText(b.Gas) == nil {
-		changed = true
-	}
-	if temp != nil {
-		if v, ok := temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
-			temp.SetText(units.Format(b.Temperature, units.DimTemperature))
-			changed = true
-		}
-	}
-	if press != nil {
-		if v, ok := press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
-			press.SetText(formatPressure(b.Pressure))
-			changed = true
-		}
-	}
-	return changed
-}
-
 func (s *resonanceScreen) update(gtx layout.Context) {
 	ch := s.kind.Update(gtx)
 	ch = s.solve.Update(gtx) || ch
