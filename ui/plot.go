@@ -10,6 +10,7 @@ import (
 	"gioui.org/unit"
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/font"
+	"gonum.org/v1/plot/vg"
 	vgdraw "gonum.org/v1/plot/vg/draw"
 	"gonum.org/v1/plot/vg/vgimg"
 )
@@ -30,6 +31,10 @@ type Plot struct {
 	size image.Point
 	ppdp float32
 }
+
+// plotMargin is the blank space kept at the plot's right edge (half of it
+// at the top).
+const plotMargin = vg.Length(10) // points
 
 // NewPlot returns an empty plot widget; Set gives it a plot.
 func NewPlot(env *Env) *Plot { return &Plot{env: env} }
@@ -93,7 +98,9 @@ func (w *Plot) render(size image.Point, pxPerDp float32) {
 	img := image.NewRGBA(image.Rectangle{Max: size})
 	dpi := int(96*pxPerDp + 0.5)
 	c := vgimg.NewWith(vgimg.UseImage(img), vgimg.UseDPI(dpi))
-	w.p.Draw(vgdraw.New(c))
+	// A margin on the right and at the top, so that the last tick label
+	// and a curve running to the end of its range stay clear of the edge.
+	w.p.Draw(vgdraw.Crop(vgdraw.New(c), 0, -plotMargin, 0, -plotMargin/2))
 	// The canvas draws into its own copy of the image.
 	out, ok := c.Image().(*image.RGBA)
 	if !ok {

@@ -50,4 +50,14 @@ func TestPlotRenders(t *testing.T) {
 	if dark < 300 {
 		t.Errorf("only %d dark pixels: axes and line not drawn?", dark)
 	}
+	// The right margin (plotMargin, 10 pt = 13 px at 96 dpi) stays blank:
+	// the line ends at the right end of its range and must not touch the
+	// edge; check the last 10 columns.
+	for y := b.Min.Y; y < b.Max.Y; y++ {
+		for x := b.Max.X - 10; x < b.Max.X; x++ {
+			if c := w.img.RGBAAt(x, y); c != (color.RGBA{255, 255, 255, 255}) {
+				t.Fatalf("pixel (%d,%d) in the right margin is %v, want white", x, y, c)
+			}
+		}
+	}
 }
