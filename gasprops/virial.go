@@ -17,7 +17,7 @@ const (
 	// initio values of the thermophysical properties of helium as
 	// standards", J. Res. NIST 105, 667, 2000; 1 % stated uncertainty).
 	// The fit reproduces the table to 0.0005 cm³/mol in B and 0.0007 in
-	// T dB/dT; gasprops/testdata/fit_helium_virial.py made it. Above
+	// T dB/dT; testdata/fit_helium_virial.py made it. Above
 	// 1200 K it extrapolates smoothly: 8.19 cm³/mol at 1800 K, where the
 	// density equation of Petersen, Risø Report 224 (1970), as recalled
 	// (from memory), gives 8.26.
@@ -38,7 +38,7 @@ const (
 )
 
 // heliumVirial holds the coefficients c_k of virialHelium, cm³/mol, as
-// printed by gasprops/testdata/fit_helium_virial.py.
+// printed by testdata/fit_helium_virial.py.
 var heliumVirial = [6]float64{-3.471030097982991, 76.632307619398, 119.00117865228945,
 	-993.8410160631162, 1421.5532508949038, -1206.0101255975446}
 

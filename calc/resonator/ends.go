@@ -94,7 +94,7 @@ const (
 	// unflanged circular pipe", Phys. Rev. 73(4), 383-406 (1948); the
 	// paper's abstract: "The exact value of the end correction turns out
 	// to be 0.6133" (checked in the published abstract). The exact
-	// integrals as evaluated by testdata/gen_levine_schwinger.py give
+	// integrals as evaluated by testdata/gen_levine_schwinger.py (at the repository top) give
 	// 0.6127; the printed value is kept.
 	UnflangedLimit = 0.6133
 	// FlangedLimit is δ/a for ka → 0 at a pipe in an infinite flange:

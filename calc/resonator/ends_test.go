@@ -119,7 +119,7 @@ func TestParseNames(t *testing.T) {
 // ka = 0.5, where the package starts warning.
 func TestUnflangedAgainstLevineSchwingerIntegrals(t *testing.T) {
 	t.Parallel()
-	f, err := os.Open("testdata/levine_schwinger.csv")
+	f, err := os.Open("../../testdata/levine_schwinger.csv")
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -9,8 +9,8 @@ import (
 	"gonum.org/v1/gonum/floats/scalar"
 )
 
-// referenceFactors is testdata/factors.json, written by
-// testdata/gen_factors.py from scipy.constants (Debian python3-scipy 1.10.1).
+// referenceFactors is testdata/units_factors.json, written by
+// testdata/gen_units_factors.py from scipy.constants (Debian python3-scipy 1.10.1).
 type referenceFactors struct {
 	ScipyVersion string             `json:"scipy_version"`
 	Factors      map[string]float64 `json:"factors"`
@@ -23,22 +23,22 @@ type referenceFactors struct {
 
 func loadFactors(t *testing.T) referenceFactors {
 	t.Helper()
-	b, err := os.ReadFile(filepath.Join("testdata", "factors.json"))
+	b, err := os.ReadFile(filepath.Join("..", "..", "testdata", "units_factors.json"))
 	if err != nil {
 		t.Fatalf("reading reference factors: %v", err)
 	}
 	var r referenceFactors
 	if err := json.Unmarshal(b, &r); err != nil {
-		t.Fatalf("testdata/factors.json is damaged: %v", err)
+		t.Fatalf("testdata/units_factors.json is damaged: %v", err)
 	}
 	if len(r.Factors) < 20 || len(r.Temperatures) < 10 {
-		t.Fatalf("testdata/factors.json holds too little: %d factors, %d temperatures", len(r.Factors), len(r.Temperatures))
+		t.Fatalf("testdata/units_factors.json holds too little: %d factors, %d temperatures", len(r.Factors), len(r.Temperatures))
 	}
 	return r
 }
 
 // TestFactorsAgainstScipy compares every conversion factor with
-// scipy.constants 1.10.1 via testdata/gen_factors.py.
+// scipy.constants 1.10.1 via testdata/gen_units_factors.py.
 func TestFactorsAgainstScipy(t *testing.T) {
 	t.Parallel()
 	ref := loadFactors(t)

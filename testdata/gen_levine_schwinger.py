@@ -25,8 +25,8 @@ The finite integrals use x = ka sin(t) to remove the end-point singularity.
 Computed with scipy.integrate.quad and scipy.special (Debian python3-scipy
 1.10.1). Valid below the first cross-mode cutoff ka = 1.8412.
 
-Run:  /usr/bin/python3 calc/resonator/testdata/gen_levine_schwinger.py \
-          > calc/resonator/testdata/levine_schwinger.csv
+Run:  /usr/bin/python3 testdata/gen_levine_schwinger.py \
+          > testdata/levine_schwinger.csv
 """
 import math
 import sys
@@ -70,7 +70,7 @@ def main():
     warnings.simplefilter("ignore", integrate.IntegrationWarning)
     w = sys.stdout
     w.write("# Levine & Schwinger (1948) unflanged open end, formulas from memory; "
-            "scipy %s via calc/resonator/testdata/gen_levine_schwinger.py\n" % scipy.__version__)
+            "scipy %s via testdata/gen_levine_schwinger.py\n" % scipy.__version__)
     w.write("ka,end_correction_over_radius,reflection_magnitude,radiation_resistance\n")
     for ka in [0.0, 0.02, 0.05, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.8, 1.0, 1.2, 1.4, 1.6, 1.8]:
         la = end_correction(ka)

@@ -14,7 +14,7 @@ and on T dB/dT together (the derivative rows weighted 0.3), so that the
 acoustic virial, which uses dB/dT and d2B/dT2, is smooth. Run with Debian's
 numpy:
 
-    /usr/bin/python3 gasprops/testdata/fit_helium_virial.py
+    /usr/bin/python3 testdata/fit_helium_virial.py
 
 It prints the coefficients pasted into gasprops/virial.go and the largest
 residuals (0.0005 cm^3/mol in B, 0.0007 in T dB/dT over 100-1200 K).

@@ -1,9 +1,9 @@
 #!/usr/bin/python3
-"""Write factors.json: conversion factors and temperature conversions from
+"""Write units_factors.json: conversion factors and temperature conversions from
 scipy.constants (Debian python3-scipy), an outside reference for the units
 package's tests.
 
-Run from the repository root:  /usr/bin/python3 calc/units/testdata/gen_factors.py
+Run from the repository root:  /usr/bin/python3 testdata/gen_units_factors.py
 The tests read the committed factors.json; CI never runs this script.
 """
 import json
@@ -62,12 +62,12 @@ for unit, name in (("degC", "Celsius"), ("degF", "Fahrenheit"), ("degR", "Rankin
             temps.append({"value": x, "unit": unit, "kelvin": k})
 
 out = {
-    "generator": "calc/units/testdata/gen_factors.py",
+    "generator": "testdata/gen_units_factors.py",
     "scipy_version": scipy.__version__,
     "factors": {k: float(v) for k, v in factors.items()},
     "temperatures": temps,
 }
-path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "factors.json")
+path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "units_factors.json")
 with open(path, "w") as f:
     json.dump(out, f, indent=1, sort_keys=True)
     f.write("\n")
