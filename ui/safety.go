@@ -449,7 +449,8 @@ func safetyButton(env *Env, gtx layout.Context, c *widget.Clickable, label strin
 const gridMinCell = unit.Dp(300)
 
 // grid lays out ws in two columns when the width allows two cells of at
-// least gridMinCell, else in one; rows are as tall as their tallest cell.
+// least gridMinCell, else in one; rows are as tall as their tallest cell,
+// and a last widget alone on its row has the whole width.
 func grid(gtx layout.Context, ws []layout.Widget) layout.Dimensions {
 	gap := gtx.Dp(16)
 	cols := 1
@@ -465,8 +466,14 @@ func grid(gtx layout.Context, ws []layout.Widget) layout.Dimensions {
 			if i >= len(ws) {
 				break
 			}
+			w := cellW
+			if col == 0 && i == len(ws)-1 {
+				// Alone on the last row: the whole width, so that a row
+				// of chips need not wrap in half of it.
+				w = gtx.Constraints.Max.X
+			}
 			cgtx := gtx
-			cgtx.Constraints = layout.Constraints{Max: image.Pt(cellW, gtx.Constraints.Max.Y)}
+			cgtx.Constraints = layout.Constraints{Max: image.Pt(w, gtx.Constraints.Max.Y)}
 			m := op.Record(gtx.Ops)
 			d := ws[i](cgtx)
 			call := m.Stop()
