@@ -203,7 +203,7 @@ func (r *report) addPM(name string, v, u float64, dim units.Dimension) {
 func (r *report) addValue(name string, v any) {
 	shown := fmt.Sprint(v)
 	switch v.(type) {
-	case string, bool, int, int64, float64:
+	case string, bool, int, int64, float64, fmt.Stringer:
 	default:
 		if b, err := json.Marshal(v); err == nil {
 			shown = string(b)

@@ -112,3 +112,24 @@ func TestReportBenchUnits(t *testing.T) {
 		})
 	}
 }
+
+// TestReportStringerValue: a value with a String method reads as that text
+// in the table and keeps its structure in the JSON.
+func TestReportStringerValue(t *testing.T) {
+	t.Parallel()
+	r := newReport()
+	r.addValue("modes", zoneModeList{{Mode: 1, Frequency: 347.6, TravelTime: 369.7, Difference: 22.1}})
+	var text, js bytes.Buffer
+	if err := r.writeText(&text); err != nil {
+		t.Fatal(err)
+	}
+	if err := r.writeJSON(&js); err != nil {
+		t.Fatal(err)
+	}
+	if want := "1: 347.6 Hz (travel time 369.7 Hz)"; !strings.Contains(text.String(), want) {
+		t.Errorf("table %q does not contain %q", text.String(), want)
+	}
+	if want := `"frequency_Hz":347.6`; !strings.Contains(strings.Join(strings.Fields(js.String()), ""), want) {
+		t.Errorf("JSON %s does not contain %s", js.String(), want)
+	}
+}

@@ -269,15 +269,9 @@ func zonesReport(fl *flags, r *report, spec string, n int, gas *gasprops.Mixture
 	r.add("frequency", m.Frequency, units.DimFrequency)
 	r.add("travel_time_frequency", m.TravelTime, units.DimFrequency)
 	r.add("difference", m.Difference, units.DimFrequency)
-	type modeJSON struct {
-		Mode       int     `json:"mode"`
-		Frequency  float64 `json:"frequency_Hz"`
-		TravelTime float64 `json:"travel_time_frequency_Hz"`
-		Difference float64 `json:"difference_Hz"`
-	}
-	list := make([]modeJSON, len(res.Modes))
+	list := make(zoneModeList, len(res.Modes))
 	for i, m := range res.Modes {
-		list[i] = modeJSON{m.Number, m.Frequency, m.TravelTime, m.Difference}
+		list[i] = zoneModeJSON{m.Number, m.Frequency, m.TravelTime, m.Difference}
 	}
 	r.addValue("modes", list)
 	for _, w := range res.Warnings {
@@ -344,4 +338,25 @@ func helmholtzReport(fl *flags, r *report, gas *gasprops.Mixture, temp, pres *un
 		r.warn(w)
 	}
 	return r, nil
+}
+
+// zoneModeJSON is one mode of a zoned tube in the JSON output.
+type zoneModeJSON struct {
+	Mode       int     `json:"mode"`
+	Frequency  float64 `json:"frequency_Hz"`
+	TravelTime float64 `json:"travel_time_frequency_Hz"`
+	Difference float64 `json:"difference_Hz"`
+}
+
+// zoneModeList is the modes of a zoned tube; String is its table form.
+type zoneModeList []zoneModeJSON
+
+// String lists the modes for the table: "1: 347.6 Hz (travel time 369.7 Hz); 2: ...".
+func (l zoneModeList) String() string {
+	parts := make([]string, len(l))
+	for i, m := range l {
+		parts[i] = fmt.Sprintf("%d: %s (travel time %s)", m.Mode,
+			units.Format(m.Frequency, units.DimFrequency), units.Format(m.TravelTime, units.DimFrequency))
+	}
+	return strings.Join(parts, "; ")
 }
