@@ -195,7 +195,7 @@ func (s *poresScreen) compute() {
 	r.AddIn("Viscous penetration depth δν", st.dn, "mm")
 	r.AddText("Rott's fκ", complexText(shape.F(st.dk)))
 	r.AddText("Rott's fν", complexText(shape.F(st.dn)))
-	r.AddNote("Swift's e^{+iωt} convention: Im f < 0")
+	r.AddNote("time dependence e^(+iωt), as in Swift 2002: Im f < 0")
 	if k := s.shape.Selected(); k == "circular" || k == "rectangular" {
 		r.Warn("porosity is that of the open channel alone (1): the solid between channels is not part of these inputs")
 	}
