@@ -257,6 +257,12 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 	ws = append(ws, e.saved.widgets(e.env)...)
 	ws = append(ws,
 		e.strip.Layout,
+		func(gtx layout.Context) layout.Dimensions {
+			if dev == nil || len(dev.Parts) == 0 {
+				return layout.Dimensions{}
+			}
+			return Note(e.env, stripLegend)(gtx)
+		},
 		Heading(e.env, "Parts, from the start end"),
 	)
 	for i := range e.parts {
@@ -276,6 +282,11 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 	)
 	return ws
 }
+
+// stripLegend says what the strip's shapes and colours mean (see
+// deviceStrip).
+const stripLegend = "To scale, start end on the left. Hatched: stack. Exchangers red when hot, blue at ambient, " +
+	"pale blue when cold, violet at a set temperature; tubes tinted the same way. Dark bars: closed ends; a wedge: the driver."
 
 func exampleLabel(name string) string {
 	switch name {
