@@ -276,7 +276,11 @@ func (s *resonanceScreen) computeTube() {
 	r.AddPM("Quality factor Q", res.Q.Total, res.QSigma, units.DimNone)
 	r.AddNote(qNote(res.Q))
 	r.AddPM("Bandwidth (−3 dB)", res.Bandwidth, res.BandwidthSigma, units.DimFrequency)
-	r.AddPM("Ring-down time (amplitude 1/e)", res.DecayTime, res.DecayTimeSigma, units.DimTime)
+	if res.DecayTime < 1 {
+		r.AddPMIn("Ring-down time (amplitude 1/e)", res.DecayTime, res.DecayTimeSigma, units.DimTime, "ms")
+	} else {
+		r.AddPM("Ring-down time (amplitude 1/e)", res.DecayTime, res.DecayTimeSigma, units.DimTime)
+	}
 	r.AddText("Wall attenuation", fmt.Sprintf("%.3g Np/m", res.Attenuation))
 	r.AddNote("Kirchhoff boundary-layer loss of a travelling wave")
 	r.Warn(res.Warnings...)

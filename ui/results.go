@@ -81,6 +81,24 @@ func (r *Results) AddPM(label string, v, u float64, dim units.Dimension) {
 	}
 }
 
+// AddPMIn is AddPM shown in the chosen unit of dimension dim, e.g. "ms".
+func (r *Results) AddPMIn(label string, v, u float64, dim units.Dimension, unit string) {
+	if !finite(v) {
+		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		return
+	}
+	note := ""
+	if !finite(u) {
+		u, note = 0, "uncertainty not available"
+	}
+	s, err := units.FormatPMIn(v, u, dim, unit)
+	if err != nil {
+		r.rows = append(r.rows, resultRow{label, "—", err.Error()})
+		return
+	}
+	r.rows = append(r.rows, resultRow{label: label, value: s, note: note})
+}
+
 // AddText appends a row whose value is already text, e.g. a verdict.
 func (r *Results) AddText(label, value string) {
 	r.rows = append(r.rows, resultRow{label: label, value: value})

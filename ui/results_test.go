@@ -20,6 +20,9 @@ func TestResultsNeverShowNaN(t *testing.T) {
 	r.AddPM("Measured", 440, 5, units.DimFrequency)
 	r.AddPM("No sigma", 440, math.NaN(), units.DimFrequency)
 	r.AddIn("Length", 0.25, "mm")
+	r.AddPMIn("Ring-down", 0.08992, 0.002, units.DimTime, "ms")
+	r.AddPMIn("Ring-down, no sigma", 0.08992, math.Inf(1), units.DimTime, "ms")
+	r.AddPMIn("Ring-down, broken", math.NaN(), 0.002, units.DimTime, "ms")
 	r.Warn("outside the model's range")
 	// The expected texts follow the units package's formatting contract
 	// (SI unit or the chosen one, 4 significant digits); the values are
@@ -31,6 +34,10 @@ func TestResultsNeverShowNaN(t *testing.T) {
 		{"Measured", units.FormatPM(440, 5, units.DimFrequency)},
 		{"No sigma", "440 Hz"},
 		{"Length", "250 mm"},
+		// 0.08992 s = 89.92 ms by definition of the millisecond.
+		{"Ring-down", "89.9 ± 2.0 ms"}, // the value rounded to the ± (units.FormatPM style)
+		{"Ring-down, no sigma", "89.92 ms"},
+		{"Ring-down, broken", "—"},
 	}
 	for _, c := range cases {
 		if got, ok := r.Value(c.label); !ok || got != c.want {
