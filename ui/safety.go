@@ -124,6 +124,10 @@ func (s *safetyScreen) goTo(i int) {
 	if s.cylinder != nil && s.oxygen != nil && s.cylinder.ok && !s.oxygen.releaseTyped {
 		s.oxygen.setRelease(s.cylinder.release)
 	}
+	if s.cylinder != nil && s.oxygen != nil {
+		// The gas the cylinder holds is the gas released into the room.
+		s.oxygen.setGas(s.cylinder.gas.Text())
+	}
 	s.env.Invalidate()
 }
 
@@ -227,6 +231,11 @@ func (s *safetyScreen) buildPass() store.Pass {
 			if nums := c.Numbers(); len(nums) > 0 {
 				item.Numbers = nums
 				item.Cautions = c.Cautions()
+				// The gas's cautions (hydrogen, carbon dioxide) belong
+				// to the whole pass, not only to the item's numbers.
+				for _, l := range item.Cautions {
+					addCaution(l)
+				}
 			}
 		}
 		for _, c := range it.Cautions {
@@ -292,7 +301,10 @@ func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
 	if c := s.calcs[i]; c != nil {
 		in := c.Inputs()
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, in) })
-		ws = append(ws, c.Outputs()...)
+		// The numbers and their caution box side by side where the width
+		// allows, so that the box is in view with the numbers.
+		out := c.Outputs()
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, out) })
 	} else if len(it.Cautions) > 0 {
 		ws = append(ws, NewCaution(s.env, "", it.Cautions...).Layout)
 	}

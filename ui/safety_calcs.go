@@ -3,6 +3,7 @@ package ui
 import (
 	"errors"
 	"fmt"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -33,9 +34,13 @@ type inlineCalc interface {
 const pressureHint = "gauge: 30 barg, 435 psig; absolute: 31 bar, 450 psi"
 
 // calcBase holds what every inline calculator has: its fields (checked
-// for changes each frame), the results card and the caution box.
+// for changes each frame), the results card and the caution box. The box
+// holds the item's fixed cautions (base) plus those of the current inputs
+// and result: each compute starts from base (begin) and adds the gas's and
+// the result's cautions (addCautions, addGas).
 type calcBase struct {
 	env      *Env
+	base     []string
 	fields   []*Field
 	extras   []func(gtx layout.Context) bool // other controls: true when changed
 	compute  func()                          // fills rec from the inputs
@@ -47,7 +52,38 @@ type calcBase struct {
 }
 
 func newCalcBase(env *Env, heading string, cautions []string) calcBase {
-	return calcBase{env: env, rec: newRecord(env), caution: NewCaution(env, heading, cautions...), dirty: true}
+	base := append([]string(nil), cautions...)
+	return calcBase{env: env, base: base, rec: newRecord(env), caution: NewCaution(env, heading, cautions...), dirty: true}
+}
+
+// addCautions adds lines to the caution box, each once.
+func (b *calcBase) addCautions(lines ...string) {
+	for _, l := range lines {
+		if !slices.Contains(b.caution.Lines, l) {
+			b.caution.Lines = append(b.caution.Lines, l)
+		}
+	}
+}
+
+// addGas adds the cautions of the picked gas (hydrogen burns, carbon
+// dioxide is toxic) whenever the picker gives a gas, with or without a
+// result: the gas is chosen, so its hazard stands. They go right after the
+// general caution, where they are read first.
+func (b *calcBase) addGas(g *GasPicker) {
+	m, err := g.Mixture()
+	if err != nil {
+		return
+	}
+	at := 0
+	if len(b.caution.Lines) > 0 && b.caution.Lines[0] == safety.CautionGeneral {
+		at = 1
+	}
+	for _, l := range safety.GasCautions(m) {
+		if !slices.Contains(b.caution.Lines, l) {
+			b.caution.Lines = slices.Insert(b.caution.Lines, at, l)
+			at++
+		}
+	}
 }
 
 // field makes a field and registers it for change tracking.
@@ -80,10 +116,12 @@ func (b *calcBase) Update(gtx layout.Context) {
 	}
 }
 
-// begin clears the result and the fields' calculation errors and reports
-// whether every field parsed.
+// begin clears the result, the fields' calculation errors and the caution
+// box down to the item's fixed cautions, and reports whether every field
+// parsed.
 func (b *calcBase) begin() bool {
 	b.rec.reset()
+	b.caution.Lines = append(b.caution.Lines[:0], b.base...)
 	b.ok = false
 	good := true
 	for _, f := range b.fields {
@@ -195,6 +233,7 @@ func (c *wallCalc) compute() {
 		c.fail(err, byField)
 		return
 	}
+	c.addCautions(lame.Cautions...)
 	r := c.rec
 	r.add("Pressure on the wall (gauge)", float64(P), units.DimPressure, gaugeText(P))
 	r.add("Hoop stress (Lamé, inner surface)", lame.Hoop, units.DimStress, shownIn(lame.Hoop, "MPa", units.DimStress))
@@ -224,6 +263,7 @@ func (c *wallCalc) compute() {
 		c.fail(err, byField)
 		return
 	}
+	c.addCautions(s.Cautions...)
 	r.text("Code", fam.Label()+", "+s.ClauseThickCircum)
 	r.add("Minimum wall for this pressure", s.MinThickness, units.DimLength, shownIn(s.MinThickness, "mm", units.DimLength))
 	r.add("MAWP of this wall (gauge)", float64(s.MAWP), units.DimPressure, gaugeText(s.MAWP))
@@ -266,6 +306,7 @@ func (c *reliefCalc) compute() {
 		c.fail(err, map[string]*Field{"pressure": c.set, "mawp": c.mawp})
 		return
 	}
+	c.addCautions(rel.Cautions...)
 	c.rec.add("Set pressure (gauge)", float64(rel.Set), units.DimPressure, gaugeText(rel.Set))
 	c.rec.add("MAWP (gauge)", float64(rel.MAWP), units.DimPressure, gaugeText(rel.MAWP))
 	verdict := "at or below the MAWP"
@@ -302,7 +343,9 @@ func newTestCalc(env *Env) *testCalc {
 }
 
 func (c *testCalc) compute() {
-	if !c.begin() {
+	good := c.begin()
+	c.addGas(c.gas)
+	if !good {
 		return
 	}
 	byField := map[string]*Field{"pressure": c.mawp, "mawp": c.mawp, "stress ratio": c.ratio, "volume": c.volume}
@@ -319,6 +362,7 @@ func (c *testCalc) compute() {
 	}
 	const roomT = 293.15 // K; γ of the gases offered hardly depends on it
 	atm := units.Pressure(units.StandardAtmosphere)
+	c.addCautions(tp.Cautions...)
 	r := c.rec
 	r.add("Hydrostatic test, ASME UG-99(b)", float64(tp.ASMEHydrostatic), units.DimPressure, gaugeText(tp.ASMEHydrostatic))
 	r.add("Pneumatic test, ASME UG-100(b)", float64(tp.ASMEPneumatic), units.DimPressure, gaugeText(tp.ASMEPneumatic))
@@ -328,6 +372,7 @@ func (c *testCalc) compute() {
 		c.fail(err, byField)
 		return
 	}
+	c.addCautions(work.Cautions...)
 	r.add("Stored energy at the MAWP (isentropic)", work.Isentropic, units.DimEnergy, energyText(work.Isentropic))
 	r.add("Brode (isochoric) value", work.Brode, units.DimEnergy, energyText(work.Brode))
 	r.add("TNT equivalent (4.184 MJ/kg)", work.TNTMass, units.DimMass, massText(work.TNTMass))
@@ -369,7 +414,9 @@ func newCylinderCalc(env *Env) *cylinderCalc {
 
 func (c *cylinderCalc) compute() {
 	c.release = 0
-	if !c.begin() {
+	good := c.begin()
+	c.addGas(c.gas)
+	if !good {
 		return
 	}
 	byField := map[string]*Field{"water": c.water, "pressure": c.fill, "temperature": c.temp}
@@ -389,6 +436,7 @@ func (c *cylinderCalc) compute() {
 		c.fail(err, byField)
 		return
 	}
+	c.addCautions(ct.Cautions...)
 	r := c.rec
 	r.add("Contents, ideal gas", ct.Ideal, units.DimVolume, shownIn(ct.Ideal, "m3", units.DimVolume))
 	r.add("Contents, with the real-gas correction", ct.NonIdeal, units.DimVolume, shownIn(ct.NonIdeal, "m3", units.DimVolume))
@@ -411,7 +459,11 @@ func (c *cylinderCalc) Inputs() []layout.Widget {
 type oxygenCalc struct {
 	calcBase
 	room, release, vent *Field
-	releaseTyped        bool // the user typed the release: do not fill it from the cylinder item
+	// gas is the released gas: the oxygen figures hold for any oxygen-free
+	// gas, but hydrogen and carbon dioxide bring cautions of their own.
+	gas          *GasPicker
+	releaseTyped bool // the user typed the release: do not fill it from the cylinder item
+	gasPicked    bool // the user picked the gas: do not take it from the cylinder item
 }
 
 func newOxygenCalc(env *Env) *oxygenCalc {
@@ -419,7 +471,16 @@ func newOxygenCalc(env *Env) *oxygenCalc {
 	c.room = c.field("Room volume", units.DimVolume, "30 m3", "free air volume of the room, e.g. 30 m³, 1000 ft³")
 	c.release = c.field("Gas released", units.DimVolume, "9 m3", "at room conditions: the cylinder's release plus the rig's; e.g. 9 m³")
 	c.vent = c.field("Ventilation", units.DimRate, "0 /h", "fresh-air changes per hour, e.g. 2 /h; 0 when unknown")
+	c.gas = NewGasPicker(env, env.Bench.Gas)
+	c.gas.gas.Label = "Which gas is released"
 	c.calcBase.compute = c.compute
+	c.extras = append(c.extras, func(gtx layout.Context) bool {
+		if c.gas.Update(gtx) {
+			c.gasPicked = true
+			return true
+		}
+		return false
+	})
 	c.onChange = func(f *Field) {
 		if f == c.release {
 			c.releaseTyped = true
@@ -429,7 +490,9 @@ func newOxygenCalc(env *Env) *oxygenCalc {
 }
 
 func (c *oxygenCalc) compute() {
-	if !c.begin() {
+	good := c.begin()
+	c.addGas(c.gas)
+	if !good {
 		return
 	}
 	byField := map[string]*Field{"room": c.room, "release": c.release, "ventilation": c.vent}
@@ -448,6 +511,8 @@ func (c *oxygenCalc) compute() {
 			return
 		}
 		shown = true
+		c.addCautions(o.Cautions...)
+		r.res.Warn(o.Warnings...)
 		verdict := "above 19.5 %"
 		if o.Deficient {
 			verdict = "BELOW 19.5 %"
@@ -475,9 +540,20 @@ func (c *oxygenCalc) setRelease(v float64) {
 	c.dirty = true
 }
 
+// setGas sets the released gas from another item (code, not user) unless
+// the user picked one here.
+func (c *oxygenCalc) setGas(text string) {
+	if c.gasPicked || text == "" || text == c.gas.Text() {
+		return
+	}
+	if c.gas.SetText(text) == nil {
+		c.dirty = true
+	}
+}
+
 // Inputs implements inlineCalc.
 func (c *oxygenCalc) Inputs() []layout.Widget {
-	return []layout.Widget{c.room.Layout, c.release.Layout, c.vent.Layout}
+	return []layout.Widget{c.room.Layout, c.release.Layout, c.vent.Layout, c.gas.Layout}
 }
 
 // ---- sound level ----
@@ -510,6 +586,7 @@ func (c *soundCalc) compute() {
 		c.fail(err, map[string]*Field{"amplitude": c.amp})
 		return
 	}
+	c.addCautions(s.Cautions...)
 	r := c.rec
 	r.add("Sound pressure level in the resonator (rms)", s.SPL, units.DimSoundLevel, dBText(s.SPL))
 	r.add("Peak level in the resonator", s.Peak, units.DimSoundLevel, dBText(s.Peak))

@@ -4,6 +4,7 @@ import (
 	"image"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 	"time"
@@ -273,6 +274,25 @@ func TestScreenshotSafetyStates(t *testing.T) {
 	shoot(t, "benchlog-damaged", env2, newBenchLogScreen(env2))
 	s.goTo(2)
 	shoot(t, "safety-relief", env, s)
+	// Hydrogen in the rig, carbon dioxide in the cylinder: the gas
+	// cautions beside the numbers.
+	if err := s.test.gas.SetText("hydrogen"); err != nil {
+		t.Fatal(err)
+	}
+	s.test.dirty = true
+	s.goTo(3)
+	shoot(t, "safety-test-hydrogen", env, s)
+	shootTall(t, "safety-test-hydrogen", env, s)
+	if err := s.cylinder.gas.SetText("carbon dioxide"); err != nil {
+		t.Fatal(err)
+	}
+	s.cylinder.fill.SetText("40 bar")
+	s.cylinder.dirty = true
+	s.goTo(6)
+	shootTall(t, "safety-cylinder-co2", env, s)
+	s.goTo(7)
+	shoot(t, "safety-oxygen-co2", env, s)
+	shootTall(t, "safety-oxygen-co2", env, s)
 }
 
 // shootTall pictures s at a phone's width and a long page, to see a whole
@@ -324,5 +344,105 @@ func TestSoundLimitsReached(t *testing.T) {
 		if txt := s.rec.res.String(); !strings.Contains(txt, c.noteContains) {
 			t.Errorf("%s: results do not say %q:\n%s", c.amp, c.noteContains, txt)
 		}
+	}
+}
+
+// TestSafetyGasCautions: the caution box beside the stored-energy numbers
+// follows the gas picked on screen, through taps on the chips: hydrogen
+// brings calc/safety's flammability caution, helium does not; carbon
+// dioxide picked on the cylinder item brings its toxicity caution to the
+// cylinder and, with the released gas carried over, to the room-oxygen
+// item, where the sealed-room model's pressure-rise warning is shown
+// beside its number. The caution texts are calc/safety's own (our words,
+// no outside source); which gas brings which is calc/safety.GasCautions.
+func TestSafetyGasCautions(t *testing.T) {
+	a, h := safetyApp(t, filepath.Join(t.TempDir(), "benchlog.json"), "safety", tallPhone)
+	s := a.Screen("safety").(*safetyScreen)
+	for range 3 {
+		h.tap("Next ›")
+	}
+	if s.step != 3 || s.pass.Items[3].Calc != safety.CalcTestEnergy {
+		t.Fatalf("on step %d, want the stored-energy item", s.step)
+	}
+	h.retype("Vessel MAWP", "", "10 barg")
+	if _, ok := h.shown("Stored energy at the MAWP (isentropic)"); !ok {
+		t.Fatalf("no stored energy shown:\n%s", h.dump())
+	}
+	if h.hasLabel(safety.CautionFlammable) {
+		t.Fatal("flammability caution shown for helium")
+	}
+	h.tap("Hydrogen")
+	h.frames(2)
+	if !h.hasLabel(safety.CautionFlammable) {
+		t.Fatalf("hydrogen picked, no flammability caution:\n%s", h.dump())
+	}
+	if _, ok := h.shown("Stored energy at the MAWP (isentropic)"); !ok {
+		t.Fatal("hydrogen: stored energy no longer shown")
+	}
+	for _, l := range []string{safety.CautionGeneral, safety.CautionTestPressure, safety.CautionStoredEnergy} {
+		if !h.hasLabel(l) {
+			t.Errorf("hydrogen: caution %.40q no longer shown", l)
+		}
+	}
+	h.tap("Helium")
+	h.frames(2)
+	if h.hasLabel(safety.CautionFlammable) {
+		t.Fatal("helium picked again, flammability caution still shown")
+	}
+	// With the MAWP field emptied there are no numbers, but the gas is
+	// still picked: its caution stays.
+	h.tap("Hydrogen")
+	h.retype("Vessel MAWP", "10 barg", "")
+	if _, ok := h.shown("Stored energy at the MAWP (isentropic)"); ok {
+		t.Fatal("stored energy shown without a MAWP")
+	}
+	if !h.hasLabel(safety.CautionFlammable) {
+		t.Error("hydrogen picked, MAWP empty: flammability caution gone")
+	}
+
+	// Cylinder item: carbon dioxide.
+	for s.step < 6 {
+		h.tap("Next ›")
+	}
+	h.tap("Carbon dioxide")
+	h.frames(2)
+	if !h.hasLabel(safety.CautionCarbonDioxide) {
+		t.Fatalf("carbon dioxide picked on the cylinder, no toxicity caution:\n%s", h.dump())
+	}
+	if h.hasLabel(safety.CautionFlammable) {
+		t.Error("flammability caution on the cylinder item with carbon dioxide")
+	}
+	// 200 bar is beyond calc/safety's carbon dioxide model (a full CO2
+	// cylinder holds liquid): the error shows and the caution stays. At
+	// 40 bar, below the vapour pressure at 15 °C (about 51 bar, from
+	// memory of CO2's saturation table), the contents are shown with it.
+	if f := s.cylinder.rec.res.Failure(); f == "" {
+		t.Error("carbon dioxide at 200 bar: no error shown")
+	}
+	h.retype("Fill pressure", "200 bar", "40 bar")
+	if _, ok := h.shown("Contents, with the real-gas correction"); !ok || !h.hasLabel(safety.CautionCarbonDioxide) {
+		t.Fatalf("carbon dioxide at 40 bar: contents or caution missing:\n%s", h.dump())
+	}
+	// Room oxygen: the released gas follows the cylinder's.
+	h.tap("Next ›")
+	h.frames(2)
+	if s.oxygen.gas.Text() != "carbon dioxide" {
+		t.Errorf("released gas %q, want the cylinder's carbon dioxide", s.oxygen.gas.Text())
+	}
+	if !h.hasLabel(safety.CautionCarbonDioxide) || !h.hasLabel(safety.CautionAsphyxiation) {
+		t.Errorf("oxygen item: carbon dioxide or asphyxiation caution missing:\n%s", h.dump())
+	}
+	if !h.hasLabel("a sealed room would rise in pressure by") {
+		t.Errorf("oxygen item: the sealed-room pressure rise is not shown:\n%s", h.dump())
+	}
+	h.tap("Nitrogen")
+	h.frames(2)
+	if h.hasLabel(safety.CautionCarbonDioxide) {
+		t.Error("nitrogen released, carbon dioxide caution still shown")
+	}
+	// The saved pass keeps the gas caution of the cylinder's numbers.
+	p := s.buildPass()
+	if !slices.Contains(p.Items[6].Cautions, safety.CautionCarbonDioxide) || !slices.Contains(p.Cautions, safety.CautionCarbonDioxide) {
+		t.Errorf("bench-log pass without the carbon dioxide caution: item %q, pass %q", p.Items[6].Cautions, p.Cautions)
 	}
 }
