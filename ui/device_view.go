@@ -4,6 +4,7 @@ import (
 	"gioui.org/layout"
 
 	"tubewright/calc/linear"
+	"tubewright/calc/units"
 )
 
 // deviceView is what the engine-onset and heat-pump screens share: a page
@@ -77,4 +78,39 @@ func (v *deviceView) top(gtx layout.Context, intro, heading string, field *Field
 	}
 	ws = append(ws, field.Layout)
 	return append(ws, v.editor.Layout(gtx, v.dev)...)
+}
+
+// shortStackRows shows calc/linear's quick short-stack estimates under the
+// solved results, each with what it means and when it holds; the
+// estimate's own warnings go with the results' warnings. With pump, the
+// zero-load span of a heat pump is shown and Γ is the solved span over
+// the critical one; otherwise (an engine at onset) the critical
+// temperature difference, with Γ the onset difference over it.
+func shortStackRows(r *Results, ss *linear.ShortStackResult, pump bool) {
+	if ss == nil {
+		return
+	}
+	if pump {
+		if ss.ZeroLoadRatio > 0 {
+			r.Add("Short-stack zero-load span (quick estimate)", ss.ZeroLoadSpan, units.DimTemperatureDifference)
+			r.AddNote("with no load and no heat conducted back; compare with the solved span")
+		} else {
+			r.AddText("Short-stack zero-load span (quick estimate)", "none")
+			r.AddNote("viscous losses outweigh the pumping in this estimate")
+		}
+		r.Add("Short-stack Γ (solved span / critical)", ss.GradientRatio, units.DimNone)
+		r.AddNote("below 1 the stack pumps heat; at 1, the critical gradient, pumping stops")
+	} else {
+		r.Add("Short-stack critical ΔT (quick estimate)", ss.CriticalDifference, units.DimTemperatureDifference)
+		r.AddNote("gas at ambient temperature, stack centre from the closed end")
+		r.Add("Short-stack Γ (onset ΔT / critical)", ss.GradientRatio, units.DimNone)
+		r.AddNote("above 1 the stack can drive sound; losses elsewhere push onset higher")
+	}
+	r.Add("k·Δx of the stack", ss.KDeltaX, units.DimNone)
+	r.AddNote("the short-stack estimate needs k·Δx much less than 1; rough above 0.3")
+	r.Add("δκ / y0 of the stack", ss.DepthRatio, units.DimNone)
+	r.AddNote("its boundary-layer form needs δκ much smaller than y0; rough above 0.5")
+	for _, w := range ss.Warnings {
+		r.Warn("Short-stack estimate: " + w)
+	}
 }

@@ -103,7 +103,8 @@ func (s *heatPumpScreen) show(o *pumpOutcome, err error) {
 	}
 	r.Add("Drive frequency", x.Frequency, units.DimFrequency)
 	r.Add("Pressure amplitude at the driver", x.DriverPressure, units.DimPressure)
-	r.Add("Volume-velocity amplitude at the driver", x.DriverFlow, units.DimVolumeFlow)
+	r.AddIn("Volume-velocity amplitude at the driver", x.DriverFlow, "L/s")
+	shortStackRows(r, x.ShortStack, true)
 	r.Warn(x.Warnings...)
 	s.caution.Lines = []string{
 		"Sound: " + units.Format(x.DriverPressure, units.DimPressure) + " of pressure amplitude in the tube is a very high sound level; a leak or an open end can harm hearing. Wear hearing protection; check the level on the Safety pass.",

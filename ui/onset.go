@@ -102,11 +102,7 @@ func (s *onsetScreen) show(o *onsetOutcome, err error) {
 	r.Add("Frequency", res.Frequency, units.DimFrequency)
 	r.Add("Hot / ambient temperature", res.TemperatureRatio, units.DimNone)
 	r.AddText("Newton iterations", fmt.Sprint(res.Iterations))
-	if ss := res.ShortStack; ss != nil {
-		r.Add("Short-stack critical ΔT (quick estimate)", ss.CriticalDifference, units.DimTemperatureDifference)
-		r.AddNote(fmt.Sprintf("ambient gas, stack centre from the closed end; k·Δx = %.2f and δκ/y0 = %.2f should be small", ss.KDeltaX, ss.DepthRatio))
-		r.Warn(ss.Warnings...)
-	}
+	shortStackRows(r, res.ShortStack, false)
 	switch {
 	case o.probe <= 0:
 	case o.merr != nil:

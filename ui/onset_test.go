@@ -60,6 +60,15 @@ func TestOnsetScreenEdits(t *testing.T) {
 	if len(s.caution.Lines) == 0 || !strings.Contains(s.caution.Lines[0], "Hot parts") {
 		t.Errorf("no hot-parts caution beside the onset temperature: %q", s.caution.Lines)
 	}
+	// Γ of the short-stack estimate, as calc/linear gives it.
+	d0, _ := s.editor.File().Validate()
+	o0, err := linear.Onset(d0, nil)
+	if err != nil || o0.ShortStack == nil {
+		t.Fatalf("calc/linear onset: %v, short stack %v", err, o0.ShortStack)
+	}
+	if got, want := rowValue(s.results, "Short-stack Γ (onset ΔT / critical)"), units.Format(o0.ShortStack.GradientRatio, units.DimNone); got != want {
+		t.Errorf("onset Γ %q, want %q", got, want)
+	}
 	// Open the stack and break its porosity: one message naming part and field.
 	h.click(h.mustDesc("Edit part 4").Desc.Bounds)
 	h.retype("Porosity (open fraction)", "0.76", "1.4")
@@ -146,6 +155,33 @@ func TestHeatPumpScreen(t *testing.T) {
 	}
 	if got, want := rowValue(s.results, "Temperature span"), units.Format(r.TemperatureSpan, units.DimTemperatureDifference); got != want {
 		t.Errorf("span %q, want %q", got, want)
+	}
+	// The driver's volume velocity in L/s, the short-stack estimates as
+	// calc/linear gives them (its tests check them against Swift 1988).
+	if got, want := rowValue(s.results, "Volume-velocity amplitude at the driver"), mustIn(t, r.DriverFlow, "L/s"); got != want || !strings.HasSuffix(got, " L/s") {
+		t.Errorf("driver volume velocity %q, want %q", got, want)
+	}
+	ss := r.ShortStack
+	if ss == nil {
+		t.Fatal("calc/linear gave no short-stack estimate for the example pump")
+	}
+	for _, c := range []struct {
+		row  string
+		v    float64
+		dim  units.Dimension
+		note string
+	}{
+		{"Short-stack zero-load span (quick estimate)", ss.ZeroLoadSpan, units.DimTemperatureDifference, "no load"},
+		{"Short-stack Γ (solved span / critical)", ss.GradientRatio, units.DimNone, "below 1"},
+		{"k·Δx of the stack", ss.KDeltaX, units.DimNone, "k·Δx much less than 1"},
+		{"δκ / y0 of the stack", ss.DepthRatio, units.DimNone, "δκ much smaller than y0"},
+	} {
+		if got, want := rowValue(s.results, c.row), units.Format(c.v, c.dim); got != want {
+			t.Errorf("%s: %q, want %q", c.row, got, want)
+		}
+		if !strings.Contains(s.results.String(), c.note) {
+			t.Errorf("%s: validity note %q missing:\n%s", c.row, c.note, s.results.String())
+		}
 	}
 	h.retype("Cooling load at the cold side", "0 W", "100 mW")
 	waitSolved(t, h, s.job.Running, s.job.Has)
