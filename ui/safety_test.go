@@ -118,6 +118,11 @@ func TestSafetyWalkToSavedLog(t *testing.T) {
 	if v, _ := h.shown("MAWP of this wall (gauge)"); !strings.Contains(v, "barg") {
 		t.Errorf("MAWP shown as %q, want barg", v)
 	}
+	// Beside the MAWP, calc/safety's reminder to enter the thinnest wall
+	// (ASME BPVC VIII-1 UG-16(d), pipe under-tolerance).
+	if !h.hasLabel("UG-16(d)") {
+		t.Errorf("no thinnest-wall reminder beside the MAWP:\n%s", h.dump())
+	}
 	// Gauge versus absolute: 30 bar absolute loads the wall 1.013 bar less.
 	h.retype("Design pressure", "30 barg", "30 bar")
 	if v, _ := h.shown("Pressure on the wall (gauge)"); v != "28.99 barg" {
