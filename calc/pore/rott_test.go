@@ -1,13 +1,12 @@
 package pore
 
 import (
-	"bufio"
 	"math"
 	"math/cmplx"
-	"os"
 	"strconv"
-	"strings"
 	"testing"
+
+	"tubewright/internal/reftable"
 )
 
 // fRow is one line of testdata/rott_f.csv: Rott's f computed with
@@ -21,29 +20,10 @@ type fRow struct {
 
 func readF(t testing.TB) []fRow {
 	t.Helper()
-	fh, err := os.Open("../../testdata/rott_f.csv")
-	if err != nil {
-		t.Fatalf("reference table: %v (regenerate with /usr/bin/python3 testdata/gen_rott.py)", err)
-	}
-	defer fh.Close()
 	var rows []fRow
-	sc := bufio.NewScanner(fh)
-	for sc.Scan() {
-		line := sc.Text()
-		if strings.HasPrefix(line, "#") || strings.HasPrefix(line, "shape,") {
-			continue
-		}
-		p := strings.Split(line, ",")
-		if len(p) != 5 {
-			t.Fatalf("bad row %q", line)
-		}
-		var v [4]float64
-		for i := range v {
-			if v[i], err = strconv.ParseFloat(p[i+1], 64); err != nil {
-				t.Fatalf("bad number in %q: %v", line, err)
-			}
-		}
-		rows = append(rows, fRow{p[0], v[0], v[1], complex(v[2], v[3])})
+	for _, r := range reftable.Read(t, "../../testdata/rott_f.csv", 4, 1, "testdata/gen_rott.py") {
+		v := r.Values
+		rows = append(rows, fRow{r.Name, v[0], v[1], complex(v[2], v[3])})
 	}
 	return rows
 }

@@ -1,13 +1,12 @@
 package special
 
 import (
-	"bufio"
 	"math"
 	"math/cmplx"
-	"os"
-	"strconv"
 	"strings"
 	"testing"
+
+	"tubewright/internal/reftable"
 )
 
 // refRow is one line of testdata/rott_bessel.csv: scipy.special 1.10.1
@@ -19,33 +18,10 @@ type refRow struct {
 
 func readBessel(t testing.TB) []refRow {
 	t.Helper()
-	fh, err := os.Open("../../testdata/rott_bessel.csv")
-	if err != nil {
-		t.Fatalf("reference table: %v (regenerate with /usr/bin/python3 testdata/gen_rott.py)", err)
-	}
-	defer fh.Close()
 	var rows []refRow
-	sc := bufio.NewScanner(fh)
-	for sc.Scan() {
-		line := sc.Text()
-		if strings.HasPrefix(line, "#") || strings.HasPrefix(line, "func,") {
-			continue
-		}
-		p := strings.Split(line, ",")
-		if len(p) != 5 {
-			t.Fatalf("bad row %q", line)
-		}
-		var f [4]float64
-		for i := range f {
-			f[i], err = strconv.ParseFloat(p[i+1], 64)
-			if err != nil {
-				t.Fatalf("bad number in %q: %v", line, err)
-			}
-		}
-		rows = append(rows, refRow{p[0], complex(f[0], f[1]), complex(f[2], f[3])})
-	}
-	if len(rows) < 1000 {
-		t.Fatalf("only %d reference rows", len(rows))
+	for _, r := range reftable.Read(t, "../../testdata/rott_bessel.csv", 4, 1000, "testdata/gen_rott.py") {
+		v := r.Values
+		rows = append(rows, refRow{r.Name, complex(v[0], v[1]), complex(v[2], v[3])})
 	}
 	return rows
 }
