@@ -90,7 +90,8 @@ func (m *Mixture) checkPressure(t, pa float64, nonIdeal bool, warn []string) ([]
 	switch {
 	case nonIdeal && math.Abs(d) > nonIdealLimit:
 		e := units.NewRangeError("pressure", pa, 0, nonIdealLimit*R*t/math.Abs(b), "Pa")
-		e.Why = "second-virial correction for " + m.String()
+		e.Why = "the second-virial correction for " + m.String() + " holds only while |Bp/RT| ≤ " +
+			strconv.FormatFloat(nonIdealLimit, 'g', 2, 64) + "; denser gas is close to condensing or supercritical"
 		return nil, e
 	case math.Abs(d) > nonIdealWarnAt && !nonIdeal:
 		warn = append(warn, "at this pressure the real gas departs from the ideal gas by about "+

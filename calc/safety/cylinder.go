@@ -1,6 +1,8 @@
 package safety
 
 import (
+	"errors"
+
 	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
@@ -75,6 +77,10 @@ func CylinderContents(m gasprops.Mixture, V float64, p units.Pressure, T units.T
 	// non-ideal, so that its advice to correct is not repeated here).
 	props, err := m.Properties(T, p, &gasprops.Options{NonIdeal: true})
 	if err != nil {
+		var re *units.RangeError
+		if errors.As(err, &re) && re.Field == "pressure" && condensable(m) {
+			re.Why += "; a full cylinder of a gas that liquefies at room temperature (carbon dioxide) holds liquid: take its contents from the filled mass on its label"
+		}
 		return Contents{}, err
 	}
 	c.Warnings = append(c.Warnings, props.Warnings...)
@@ -88,4 +94,17 @@ func CylinderContents(m gasprops.Mixture, V float64, p units.Pressure, T units.T
 	}
 	c.NonIdeal = c.Ideal / c.Z
 	return c, nil
+}
+
+// condensable reports whether m holds carbon dioxide, the one gas here that
+// is sold as a liquid under its own vapour pressure at room temperature
+// (critical temperature 304.1 K; Span & Wagner, J. Phys. Chem. Ref. Data
+// 25, 1509 (1996), from memory).
+func condensable(m gasprops.Mixture) bool {
+	for _, c := range m.Components() {
+		if c.Species.Name == "carbon dioxide" {
+			return true
+		}
+	}
+	return false
 }

@@ -57,3 +57,27 @@ func TestCylinderContents(t *testing.T) {
 	_, err = CylinderContents(he, 0.05, -1, 288.15, StandardISO13443)
 	wantRangeError(t, err, "fill pressure (absolute)")
 }
+
+// TestCylinderCarbonDioxideLiquid: a carbon dioxide cylinder at a fill
+// pressure where the gas models no longer apply (5.7 MPa at 15 °C, where a
+// real cylinder holds liquid: CO2's vapour pressure at 15 °C is about
+// 5.1 MPa, Span & Wagner 1996, from memory) is refused with advice to use
+// the mass on the label; helium at the same pressure is not.
+func TestCylinderCarbonDioxideLiquid(t *testing.T) {
+	t.Parallel()
+	co2, err := gasprops.ParseMixture("carbon dioxide")
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, err = CylinderContents(co2, 0.05, 5.7e6, 288.15, StandardISO13443)
+	if err == nil || !strings.Contains(err.Error(), "filled mass on its label") {
+		t.Errorf("CO2 at 57 bar: error %v, want advice about the filled mass", err)
+	}
+	he, err := gasprops.ParseMixture("helium")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := CylinderContents(he, 0.05, 5.7e6, 288.15, StandardISO13443); err != nil {
+		t.Errorf("helium at 57 bar: %v", err)
+	}
+}
