@@ -17,7 +17,7 @@ func ExampleParse() {
 	q, _ = units.Parse("1 1/2 in", units.DimLength)
 	fmt.Printf("%.4f m\n", q.Value)
 
-	q, _ = units.Parse("567 Hz ± 8 Hz", units.DimFrequency)
+	q, _ = units.Parse("440 Hz ± 5 Hz", units.DimFrequency)
 	fmt.Println(q.Value, q.Uncertainty)
 
 	_, err = units.Parse("10 bar", units.DimLength)
@@ -25,7 +25,7 @@ func ExampleParse() {
 	// Output:
 	// 3.101325e+06 barg true
 	// 0.0381 m
-	// 567 8
+	// 440 5
 	// "10 bar" is a pressure, not a length; accepted: m, mm, cm, µm, in, ft
 }
 
@@ -40,17 +40,17 @@ func ExampleParseWith() {
 }
 
 func ExampleFormat() {
-	fmt.Println(units.Format(578.34, units.DimFrequency))
+	fmt.Println(units.Format(440.34, units.DimFrequency))
 	fmt.Println(units.Format(1.01325e7, units.DimPressure))
-	fmt.Println(units.FormatPM(567, 8, units.DimFrequency))
+	fmt.Println(units.FormatPM(440, 5, units.DimFrequency))
 	s, _ := units.FormatIn(300, "degC")
 	fmt.Println(s)
 	s, _ = units.FormatGauge(31e5, 1e5, "bar")
 	fmt.Println(s)
 	// Output:
-	// 578.3 Hz
+	// 440.3 Hz
 	// 1.013e7 Pa
-	// 567 ± 8 Hz
+	// 440 ± 5 Hz
 	// 26.85 °C
 	// 30 barg
 }
