@@ -90,7 +90,7 @@ func (r *report) inputQuantity(name string, q units.Quantity, typed string) {
 		Uncertainty *float64 `json:"uncertainty,omitempty"`
 		Typed       string   `json:"typed"`
 	}{Value: q.Value, Unit: units.SIUnit(q.Dim), Typed: typed}
-	si := units.Format(q.Value, q.Dim)
+	si := exactSI(q.Value, q.Dim)
 	if q.Uncertainty > 0 {
 		v.Uncertainty = &q.Uncertainty
 		si = units.FormatPM(q.Value, q.Uncertainty, q.Dim)
@@ -110,6 +110,17 @@ func (r *report) inputSI(name string, v float64, dim units.Dimension) {
 		return
 	}
 	r.put(&r.inputs, "input", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, shownSI(v, 0, dim))
+}
+
+// exactSI formats an input's SI value as units.Format does when that is
+// exact, and otherwise with all the digits it needs ("101325 Pa" for 1 atm
+// rather than "101300 Pa"), so that the echo shows what was used.
+func exactSI(v float64, dim units.Dimension) string {
+	s := units.Format(v, dim)
+	if q, err := units.ParseWith(s, dim, units.Options{AllowNegative: true}); err == nil && q.Value == v {
+		return s
+	}
+	return strconv.FormatFloat(v, 'g', 10, 64) + " " + units.SIUnit(dim)
 }
 
 // resultJSON is the JSON form of one numeric result. Basis is "gauge" for a

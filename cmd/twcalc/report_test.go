@@ -133,3 +133,38 @@ func TestReportStringerValue(t *testing.T) {
 		t.Errorf("JSON %s does not contain %s", js.String(), want)
 	}
 }
+
+// TestReportInputEcho: a typed input is echoed with the SI value it was read
+// as, with every digit that matters (1 atm = 101325 Pa exactly, BIPM SI
+// Brochure 2019; 20 °C = 293.15 K).
+func TestReportInputEcho(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		typed string
+		dim   units.Dimension
+		want  string
+	}{
+		{"1atm", units.DimPressure, "1atm  (= 101325 Pa)"},
+		{"20degC", units.DimTemperature, "20degC  (= 293.15 K)"},
+		{"12mm", units.DimLength, "12mm  (= 0.012 m)"},
+		{"0.5m", units.DimLength, "0.5m\n"},
+	}
+	for _, c := range cases {
+		t.Run(c.typed, func(t *testing.T) {
+			t.Parallel()
+			q, err := units.Parse(c.typed, c.dim)
+			if err != nil {
+				t.Fatal(err)
+			}
+			r := newReport()
+			r.inputQuantity("x", q, c.typed)
+			var text bytes.Buffer
+			if err := r.writeText(&text); err != nil {
+				t.Fatal(err)
+			}
+			if !strings.Contains(text.String(), c.want) {
+				t.Errorf("table %q does not contain %q", text.String(), c.want)
+			}
+		})
+	}
+}
