@@ -34,7 +34,8 @@ type HeatPumpResult struct {
 	// ShortStack is the quick short-stack estimate for the stack at the
 	// drive frequency (nil when it cannot be formed): its ZeroLoadSpan is
 	// the short-stack zero-load span, its GradientRatio Γ the solved span
-	// over the critical one, with the validity numbers kΔx and δκ/y0. The
+	// over the critical one (negative when the span is: heat pumped the
+	// other way), with the validity numbers kΔx and δκ/y0. The
 	// stack's place in the standing wave is measured from the far end when
 	// that is closed, else from the driver.
 	ShortStack *ShortStackResult
@@ -225,6 +226,9 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	res.Warnings = m.warnings(f, ta)
 	last := dev.Parts[len(dev.Parts)-1].Kind
 	if ss, err := m.shortStack(f, res.TemperatureSpan, last == KindClosedEnd); err == nil {
+		if res.TemperatureSpan < 0 {
+			ss.GradientRatio = -ss.GradientRatio // heat pumped the other way
+		}
 		res.ShortStack = &ss
 	}
 	if res.TemperatureSpan < 0 {

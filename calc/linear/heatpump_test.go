@@ -380,3 +380,30 @@ func TestHeatPumpShortStackEstimate(t *testing.T) {
 		t.Errorf("onset short-stack Γ %+v, want (Th - Ta)/critical difference", on.ShortStack)
 	}
 }
+
+// TestHeatPumpWrongWay: at 200 Hz the short-stack pump of the tests pumps
+// heat the other way (the cold side ends warmer than ambient; seen when
+// scanning 200-900 Hz). The span is then negative, a warning says so, and
+// the short-stack Γ carries the same sign, Γ = span / critical difference
+// (Swift 1988, Γ = ∇Tm/∇Tcrit; the definition of the ratio).
+func TestHeatPumpWrongWay(t *testing.T) {
+	t.Parallel()
+	d := shortStackPump(t, 0.02)
+	r, err := HeatPump(d, &HeatPumpSettings{Settings: Settings{Gas: testAir, NoProfile: true}, Frequency: 200})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.TemperatureSpan >= 0 {
+		t.Fatalf("span %g K at 200 Hz, want negative", r.TemperatureSpan)
+	}
+	if r.ShortStack == nil || !scalar.EqualWithinRel(r.ShortStack.GradientRatio, r.TemperatureSpan/r.ShortStack.CriticalDifference, 1e-12) {
+		t.Errorf("Γ %+v, want span/critical difference = %g", r.ShortStack, r.TemperatureSpan/r.ShortStack.CriticalDifference)
+	}
+	found := false
+	for _, w := range r.Warnings {
+		found = found || strings.Contains(w, "other way")
+	}
+	if !found {
+		t.Errorf("no warning about heat pumped the other way: %q", r.Warnings)
+	}
+}
