@@ -337,3 +337,18 @@ func TestCommandTable(t *testing.T) {
 		}
 	}
 }
+
+// decodeRun runs twcalc with args and --json, wants exit 0, and decodes the
+// printed object into a T.
+func decodeRun[T any](t *testing.T, args ...string) T {
+	t.Helper()
+	var o, e bytes.Buffer
+	if code := run(append(args, "--json"), &o, &e); code != exitOK {
+		t.Fatalf("twcalc %q: exit %d: %s", args, code, e.String())
+	}
+	var out T
+	if err := json.Unmarshal(o.Bytes(), &out); err != nil {
+		t.Fatalf("%v\n%s", err, o.String())
+	}
+	return out
+}

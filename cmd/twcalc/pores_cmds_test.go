@@ -25,15 +25,7 @@ type poreOut struct {
 
 func runPoreJSON(t *testing.T, args ...string) poreOut {
 	t.Helper()
-	var o, e bytes.Buffer
-	if code := run(append(args, "--json"), &o, &e); code != exitOK {
-		t.Fatalf("twcalc %q: exit %d: %s", args, code, e.String())
-	}
-	var out poreOut
-	if err := json.Unmarshal(o.Bytes(), &out); err != nil {
-		t.Fatalf("%v\n%s", err, o.String())
-	}
-	return out
+	return decodeRun[poreOut](t, args...)
 }
 
 func (o poreOut) num(t *testing.T, name, unit string) float64 {

@@ -31,15 +31,7 @@ type jsonReport struct {
 // runJSON runs twcalc with --json and decodes the object.
 func runJSON(t *testing.T, args ...string) jsonReport {
 	t.Helper()
-	var o, e bytes.Buffer
-	if code := run(append(args, "--json"), &o, &e); code != exitOK {
-		t.Fatalf("twcalc %q: exit %d: %s", args, code, e.String())
-	}
-	var rep jsonReport
-	if err := json.Unmarshal(o.Bytes(), &rep); err != nil {
-		t.Fatalf("%v in %s", err, o.String())
-	}
-	return rep
+	return decodeRun[jsonReport](t, args...)
 }
 
 func num(t *testing.T, rep jsonReport, name string) (v float64, u *float64) {

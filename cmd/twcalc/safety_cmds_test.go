@@ -46,14 +46,7 @@ func keys[V any](m map[string]V) []string {
 // cautions array starting with the general caution.
 func runSafetyJSON(t *testing.T, args ...string) safetyOut {
 	t.Helper()
-	var o, e bytes.Buffer
-	if code := run(append(args, "--json"), &o, &e); code != exitOK {
-		t.Fatalf("twcalc %q: exit %d: %s", args, code, e.String())
-	}
-	var out safetyOut
-	if err := json.Unmarshal(o.Bytes(), &out); err != nil {
-		t.Fatalf("%v\n%s", err, o.String())
-	}
+	out := decodeRun[safetyOut](t, args...)
 	if len(out.Cautions) == 0 || out.Cautions[0] != safety.CautionGeneral {
 		t.Errorf("twcalc %q: cautions %q, want the general caution first", args, out.Cautions)
 	}
