@@ -92,12 +92,7 @@ examples:
 	r.addValue("iterations", res.Iterations)
 	if ss := res.ShortStack; ss != nil {
 		r.add("short_stack_zero_load_span", ss.ZeroLoadSpan, units.DimTemperatureDifference)
-		r.add("short_stack_gradient_ratio", ss.GradientRatio, units.DimNone)
-		r.add("short_stack_k_dx", ss.KDeltaX, units.DimNone)
-		r.add("short_stack_depth_ratio", ss.DepthRatio, units.DimNone)
-		for _, w := range ss.Warnings {
-			r.warn("short-stack estimate: " + w)
-		}
+		addShortStack(r, ss)
 	}
 	if load.Value == 0 {
 		r.warn("at zero load the COP is zero by definition; give --load to see the COP against Carnot")

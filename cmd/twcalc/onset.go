@@ -181,12 +181,7 @@ examples:
 	r.addValue("iterations", res.Iterations)
 	if ss := res.ShortStack; ss != nil {
 		r.add("short_stack_critical_difference", ss.CriticalDifference, units.DimTemperatureDifference)
-		r.add("short_stack_gradient_ratio", ss.GradientRatio, units.DimNone)
-		r.add("short_stack_k_dx", ss.KDeltaX, units.DimNone)
-		r.add("short_stack_depth_ratio", ss.DepthRatio, units.DimNone)
-		for _, w := range ss.Warnings {
-			r.warn("short-stack estimate: " + w)
-		}
+		addShortStack(r, ss)
 	}
 	for _, w := range res.Warnings {
 		r.warn(w)
@@ -245,4 +240,16 @@ func profileRows(p *linear.Profile) [][]float64 {
 		rows[i] = []float64{p.X[i], p.PressureAmp[i], p.FlowAmp[i], p.Phase[i], p.Temperature[i], p.AcousticPower[i]}
 	}
 	return rows
+}
+
+// addShortStack reports the ratio Γ and the validity numbers of a
+// short-stack estimate, and its warnings, after the headline number that
+// onset and heatpump each give first.
+func addShortStack(r *report, ss *linear.ShortStackResult) {
+	r.add("short_stack_gradient_ratio", ss.GradientRatio, units.DimNone)
+	r.add("short_stack_k_dx", ss.KDeltaX, units.DimNone)
+	r.add("short_stack_depth_ratio", ss.DepthRatio, units.DimNone)
+	for _, w := range ss.Warnings {
+		r.warn("short-stack estimate: " + w)
+	}
 }
