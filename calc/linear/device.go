@@ -143,6 +143,7 @@ type FieldError struct {
 	Msg   string // what is wrong, with the value
 }
 
+// Error reads "part 3 (stack): field \"porosity\" ..." naming the part and field.
 func (e *FieldError) Error() string {
 	if e.Part < 0 {
 		if e.Field == "" {

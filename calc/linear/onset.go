@@ -68,9 +68,10 @@ type ConvergenceError struct {
 	Iterations int       // iterations done
 	Last       []float64 // last iterate, in the order of Names
 	Names      []string  // names with units, e.g. "hot temperature (K)"
-	Why        string
+	Why        string    // why the iteration stopped
 }
 
+// Error says which solve failed, why, and the last iterate with its units.
 func (e *ConvergenceError) Error() string {
 	s := fmt.Sprintf("%s solve did not converge after %d iterations (%s); last iterate:", e.Solve, e.Iterations, e.Why)
 	for i, v := range e.Last {

@@ -61,8 +61,11 @@ type ShortStackResult struct {
 	Warnings     []string
 }
 
-// ShortStack evaluates the short-stack estimates. Errors name the field
-// that is not positive and finite.
+// ShortStack evaluates the short-stack estimates of Swift 1988: the
+// critical gradient (CriticalGradient), Γ, the zero-load ratio Γ0 and the
+// validity numbers kΔx and δκ/y0 (formulas on ShortStackResult), with a
+// warning when kΔx or δκ/y0 is not small. Errors name the field that is
+// not positive and finite.
 func ShortStack(in ShortStackInput) (ShortStackResult, error) {
 	for _, f := range []struct {
 		name string
