@@ -104,7 +104,7 @@ func Binary(first, second *Species, x2 float64) (Mixture, error) {
 		panic("gasprops: Binary of nil species")
 	}
 	if !(x2 >= 0 && x2 <= 1) {
-		return Mixture{}, units.NewRangeError("mole fraction of "+second.Name, x2, 0, 1, "")
+		return Mixture{}, units.NewRangeError("mole fraction of "+second.Name, x2, 0, 1, "").Of(units.SubjectComposition)
 	}
 	switch x2 {
 	case 0:
@@ -166,7 +166,7 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 		return Properties{}, ErrEmptyMixture
 	}
 	if !(pa >= MinPressure) || math.IsInf(pa, 1) {
-		return Properties{}, units.NewRangeError("pressure", pa, MinPressure, math.Inf(1), "Pa")
+		return Properties{}, units.NewRangeError("pressure", pa, MinPressure, math.Inf(1), "Pa").Of(units.SubjectPressure)
 	}
 	warn, err := m.checkTemperature(t)
 	if err != nil {
@@ -211,7 +211,7 @@ func (m Mixture) Properties(T units.Temperature, p units.Pressure, o *Options) (
 	if !finite(pr) {
 		// not reached for valid states; kept so that NaN or Inf never
 		// leaves the package
-		e := units.NewRangeError("pressure", pa, MinPressure, math.Inf(1), "Pa")
+		e := units.NewRangeError("pressure", pa, MinPressure, math.Inf(1), "Pa").Of(units.SubjectPressure)
 		e.Why = "the " + m.String() + " properties overflow at this state"
 		return Properties{}, e
 	}

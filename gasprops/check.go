@@ -23,7 +23,7 @@ func (m *Mixture) checkTemperature(t float64) ([]string, error) {
 		return nil, nil
 	}
 	if !(t > lo*(1-warnMargin)) || !(t < hi*(1+warnMargin)) {
-		e := units.NewRangeError("temperature", t, lo*(1-warnMargin), hi*(1+warnMargin), "K")
+		e := units.NewRangeError("temperature", t, lo*(1-warnMargin), hi*(1+warnMargin), "K").Of(units.SubjectTemperature)
 		e.Why = who.m.source
 		return nil, e
 	}
@@ -89,7 +89,7 @@ func (m *Mixture) checkPressure(t, pa float64, nonIdeal bool, warn []string) ([]
 	d := b * pa / (R * t)
 	switch {
 	case nonIdeal && math.Abs(d) > nonIdealLimit:
-		e := units.NewRangeError("pressure", pa, 0, nonIdealLimit*R*t/math.Abs(b), "Pa")
+		e := units.NewRangeError("pressure", pa, 0, nonIdealLimit*R*t/math.Abs(b), "Pa").Of(units.SubjectPressure)
 		e.Why = "the second-virial correction for " + m.String() + " holds only while |Bp/RT| ≤ " +
 			strconv.FormatFloat(nonIdealLimit, 'g', 2, 64) + "; denser gas is close to condensing or supercritical"
 		return nil, e

@@ -51,7 +51,7 @@ func (m *Mixture) checkCondensation(t, pa float64, warn []string) ([]string, err
 		pp := c.X * pa
 		switch {
 		case pp >= ps:
-			e := units.NewRangeError("pressure", pa, 0, ps/c.X, "Pa")
+			e := units.NewRangeError("pressure", pa, 0, ps/c.X, "Pa").Of(units.SubjectPressure)
 			e.Why = c.Species.Name + " condenses at " + fmtK(t) + " above this pressure (Lee–Kesler vapour pressure); the gas models do not apply"
 			return nil, e
 		case pp >= 0.8*ps:

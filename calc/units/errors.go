@@ -17,6 +17,29 @@ type RangeError struct {
 	Max   float64 // upper bound in Unit; +Inf when there is none
 	Unit  string  // unit symbol of Value, Min and Max, normally the SI one ("K", "m")
 	Why   string  // optional: whose range it is, e.g. "helium model"
+	// Subject says, typed, which kind of input the value is, set where the
+	// value is checked, so that a front end finds the field by equality
+	// (never by reading Field or the message). Zero when not set.
+	Subject Subject
+}
+
+// Subject is the kind of input a RangeError is about.
+type Subject int
+
+// The subjects a calculator input can be. SubjectNone means not said.
+const (
+	SubjectNone        Subject = iota
+	SubjectTemperature         // a gas temperature
+	SubjectPressure            // a mean or charge pressure
+	SubjectFrequency           // an operating or measured frequency
+	SubjectComposition         // a mixture fraction
+)
+
+// Of returns e with its Subject set, for chaining at the place of the
+// check: units.NewRangeError(...).Of(units.SubjectTemperature).
+func (e *RangeError) Of(s Subject) *RangeError {
+	e.Subject = s
+	return e
 }
 
 // NewRangeError returns a RangeError for field with the given value, bounds
