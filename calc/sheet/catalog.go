@@ -1,0 +1,85 @@
+package sheet
+
+// ID identifies a calculator or an app page: the terminal command name and
+// the screen's identifier (also used in screenshot file names).
+type ID string
+
+// The identifiers of the catalog, in one place.
+const (
+	IDGas       ID = "gas"
+	IDResonance ID = "resonance"
+	IDDiagnose  ID = "diagnose"
+	IDDepths    ID = "depths"
+	IDPores     ID = "pores"
+	IDPlacement ID = "placement"
+	IDOnset     ID = "onset"
+	IDHeatPump  ID = "heatpump"
+	IDVessel    ID = "vessel"
+	IDEnergy    ID = "energy"
+	IDOxygen    ID = "oxygen"
+	IDSPL       ID = "spl"
+	IDSafety    ID = "safety"
+	IDBenchLog  ID = "benchlog"
+)
+
+// Place says where a catalog entry appears.
+type Place int
+
+// The places; an entry may be in both.
+const (
+	InApp Place = 1 << iota
+	InTerminal
+	Everywhere = InApp | InTerminal
+)
+
+// Entry is one line of the catalog: a calculator (Sheet set) or an app page
+// that is not one calculator (the guided safety pass, the bench log).
+type Entry struct {
+	ID      ID
+	Title   string
+	Summary string
+	Sheet   *Sheet
+	Place   Place
+}
+
+// catalog is the one table of calculators and pages, in the order the app
+// shows them and the terminal lists them. Adding a calculator adds one line.
+var catalog = []Entry{
+	{ID: IDGas, Sheet: gasSheet, Place: Everywhere},
+	{ID: IDResonance, Title: "Tube resonance", Summary: "Frequency from length or length from frequency of a quarter- or half-wave tube, with end corrections, Q and bandwidth", Place: Everywhere},
+	{ID: IDDiagnose, Title: "What the pitch says", Summary: "Gas temperature or mixture fraction from a measured resonance frequency, with its ±", Place: Everywhere},
+	{ID: IDDepths, Title: "Penetration depths", Summary: "Thermal and viscous penetration depths at your gas, temperature, pressure and frequency, with the pore sizes they call for", Place: Everywhere},
+	{ID: IDPores, Title: "Pores and packing", Summary: "Plates, pores, pins, screens, metal wool or honeycomb: porosity, hydraulic radius, Rott's functions and a verdict for a stack or regenerator", Place: Everywhere},
+	{ID: IDPlacement, Title: "Stack placement", Summary: "Where a short stack sits in the standing wave: heat-flux and loss factors, critical temperature difference, gas displacement and exchanger length", Place: Everywhere},
+	{ID: IDOnset, Title: "Engine onset", Summary: "Build an engine from parts and find the hot temperature and frequency at which it starts to sing, with profiles and onset against pressure", Place: Everywhere},
+	{ID: IDHeatPump, Title: "Heat pump span", Summary: "Build a loudspeaker-driven heat pump from parts: cold temperature, span, acoustic power and COP, and the best drive frequency", Place: Everywhere},
+	{ID: IDSafety, Title: "Safety pass", Summary: "Walk the checks before pressurising: wall stress, relief, test pressure, stored energy, room oxygen, hearing; save the pass in the bench log", Place: InApp},
+	{ID: IDVessel, Title: "Vessel wall", Summary: "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)", Place: InTerminal},
+	{ID: IDEnergy, Title: "Stored energy", Summary: "stored energy of a gas charge and its TNT equivalent (safety)", Place: InTerminal},
+	{ID: IDOxygen, Title: "Room oxygen", Summary: "oxygen left in a room after a gas release (safety)", Place: InTerminal},
+	{ID: IDSPL, Title: "Sound level", Summary: "sound pressure level of a pressure amplitude against hearing limits (safety)", Place: InTerminal},
+	{ID: IDBenchLog, Title: "Bench log", Summary: "Saved safety passes with date and time, exported as text", Place: InApp},
+}
+
+// Catalog returns the entries in order; an entry with a Sheet takes its
+// title and summary from it.
+func Catalog() []Entry {
+	out := make([]Entry, len(catalog))
+	for i, e := range catalog {
+		if e.Sheet != nil {
+			e.Title, e.Summary = e.Sheet.Title, e.Sheet.Summary
+		}
+		out[i] = e
+	}
+	return out
+}
+
+// Lookup returns the sheet of calculator id.
+func Lookup(id ID) (*Sheet, bool) {
+	for _, e := range catalog {
+		if e.ID == id && e.Sheet != nil {
+			return e.Sheet, true
+		}
+	}
+	return nil, false
+}
