@@ -1,5 +1,7 @@
 package main
 
+import "tubewright/calc/sheet"
+
 // command is one subcommand of twcalc: its name as typed, a one-line summary
 // for `twcalc help`, and the function that parses its flags and computes.
 //
@@ -14,8 +16,19 @@ type command struct {
 // commands is the table of subcommands in the order `twcalc help` lists
 // them. Each calculator adds ONE line here; its run function lives in its own
 // file cmd/twcalc/<name>.go.
-var commands = []command{
-	{"gas", "properties of a working gas or mixture", runGas},
+var commands = append([]command{sheetCommand(mustSheet(sheet.IDGas))}, legacyCommands...)
+
+// mustSheet returns the description of calculator id.
+func mustSheet(id sheet.ID) *sheet.Sheet {
+	s, ok := sheet.Lookup(id)
+	if !ok {
+		panic("twcalc: no calculator " + string(id))
+	}
+	return s
+}
+
+// legacyCommands are the commands not yet built from a description.
+var legacyCommands = []command{
 	{"resonance", "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps", runResonance},
 	{"diagnose", "gas temperature or mixture fraction from a measured resonance frequency", runDiagnose},
 	{"vessel", "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)", runVessel},

@@ -10,6 +10,7 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
@@ -30,7 +31,9 @@ type report struct {
 	warnings  []string
 	cautions  []string
 	tableData *sweepTable
-	err       error // first programming error found while building
+	notes     []string        // plain remarks on how the result was obtained
+	verdicts  []sheet.Verdict // the rows that are checks
+	err       error           // first programming error found while building
 }
 
 // entry is one named input or result.
@@ -226,6 +229,15 @@ func (r *report) addValue(name string, v any) {
 	}{v, ""}, shown)
 }
 
+// addObjectShown records a result that is a JSON object v, shown in the
+// table as text: JSON {"value":v,"unit":""}.
+func (r *report) addObjectShown(name string, v any, shown string) {
+	r.put(&r.results, "result", name, struct {
+		Value any    `json:"value"`
+		Unit  string `json:"unit"`
+	}{v, ""}, shown)
+}
+
 // addComplex records a dimensionless complex result as
 // {"value":{"re":..,"im":..},"unit":"1"}.
 func (r *report) addComplex(name string, c complex128) {
@@ -294,6 +306,24 @@ func (r *report) writeJSON(w io.Writer) error {
 		}
 		fmt.Fprintf(&b, `,%q:%s`, list.key, raw)
 	}
+	verdicts := r.verdicts
+	if verdicts == nil {
+		verdicts = []sheet.Verdict{}
+	}
+	raw, err := json.Marshal(verdicts)
+	if err != nil {
+		return err
+	}
+	b.WriteString(`,"verdicts":`)
+	b.Write(raw)
+	if len(r.notes) > 0 {
+		raw, err := json.Marshal(r.notes)
+		if err != nil {
+			return err
+		}
+		b.WriteString(`,"notes":`)
+		b.Write(raw)
+	}
 	if t := r.tableData; t != nil {
 		raw, err := json.Marshal(struct {
 			Columns []string    `json:"columns"`
@@ -311,7 +341,7 @@ func (r *report) writeJSON(w io.Writer) error {
 		return err
 	}
 	out.WriteString("\n")
-	_, err := w.Write(out.Bytes())
+	_, err = w.Write(out.Bytes())
 	return err
 }
 
@@ -363,6 +393,15 @@ func (r *report) writeText(w io.Writer) error {
 	if err := tw.Flush(); err != nil {
 		return err
 	}
+	if len(r.verdicts) > 0 {
+		b.WriteString("checks\n")
+		for _, v := range r.verdicts {
+			fmt.Fprintf(&b, "  %s  %s: %s\n", outcomeMark(v.Outcome), v.Check, v.Why)
+		}
+	}
+	for _, n := range r.notes {
+		fmt.Fprintf(&b, "note: %s\n", n)
+	}
 	if len(r.warnings) > 0 {
 		b.WriteString("warnings\n")
 		for _, s := range r.warnings {
@@ -377,4 +416,16 @@ func (r *report) writeText(w io.Writer) error {
 	}
 	_, err := w.Write(b.Bytes())
 	return err
+}
+
+// outcomeMark is how the table shows a check's outcome: a failure cannot
+// be mistaken for a pass.
+func outcomeMark(o string) string {
+	switch o {
+	case "fail":
+		return "FAIL ✗"
+	case "warn":
+		return "WARN !"
+	}
+	return "pass ✓"
 }
