@@ -5,39 +5,64 @@ import "tubewright/calc/sheet"
 // command is one subcommand of twcalc: its name as typed, a one-line summary
 // for `twcalc help`, and the function that parses its flags and computes.
 //
-// A run function parses its own arguments with newFlags, returns a report on
-// success, and returns an error naming the flag and value on bad input. It
-// never prints: run() in main.go writes the table or the JSON object.
+// A run function parses its own arguments, returns a report on success, and
+// returns an error naming the flag and value on bad input. It never prints:
+// run() in main.go writes the table or the JSON object.
 type command struct {
 	name, summary string
 	run           func(args []string) (*report, error)
 }
 
 // commands is the table of subcommands in the order `twcalc help` lists
-// them. Each calculator adds ONE line here; its run function lives in its own
-// file cmd/twcalc/<name>.go.
-var commands = append([]command{sheetCommand(mustSheet(sheet.IDGas))}, legacyCommands...)
+// them: the terminal entries of the one catalog in calc/sheet, each built
+// from its calculator's description.
+var commands = terminalCommands()
 
-// mustSheet returns the description of calculator id.
-func mustSheet(id sheet.ID) *sheet.Sheet {
-	s, ok := sheet.Lookup(id)
-	if !ok {
-		panic("twcalc: no calculator " + string(id))
+func terminalCommands() []command {
+	var out []command
+	for _, e := range sheet.Catalog() {
+		if e.Place&sheet.InTerminal == 0 {
+			continue
+		}
+		if e.Sheet != nil {
+			out = append(out, sheetCommand(e.Sheet))
+			continue
+		}
+		run, ok := legacyCommands[e.ID]
+		if !ok {
+			panic("twcalc: no command for catalog entry " + string(e.ID))
+		}
+		out = append(out, command{name: string(e.ID), summary: legacySummaries[e.ID], run: run})
 	}
-	return s
+	return out
 }
 
 // legacyCommands are the commands not yet built from a description.
-var legacyCommands = []command{
-	{"resonance", "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps", runResonance},
-	{"diagnose", "gas temperature or mixture fraction from a measured resonance frequency", runDiagnose},
-	{"vessel", "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)", runVessel},
-	{"energy", "stored energy of a gas charge and its TNT equivalent (safety)", runEnergy},
-	{"oxygen", "oxygen left in a room after a gas release (safety)", runOxygen},
-	{"spl", "sound pressure level of a pressure amplitude against hearing limits (safety)", runSPL},
-	{"depths", "thermal and viscous penetration depths of a gas at a frequency", runDepths},
-	{"pores", "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator", runPores},
-	{"placement", "where a short stack sits in a standing wave, displacement and exchanger length", runPlacement},
-	{"onset", "hot temperature and frequency at which a device described in a file starts to sing", runOnset},
-	{"heatpump", "cold temperature, span and COP of a driven heat pump described in a file", runHeatPump},
+var legacyCommands = map[sheet.ID]func(args []string) (*report, error){
+	sheet.IDResonance: runResonance,
+	sheet.IDDiagnose:  runDiagnose,
+	sheet.IDVessel:    runVessel,
+	sheet.IDEnergy:    runEnergy,
+	sheet.IDOxygen:    runOxygen,
+	sheet.IDSPL:       runSPL,
+	sheet.IDDepths:    runDepths,
+	sheet.IDPores:     runPores,
+	sheet.IDPlacement: runPlacement,
+	sheet.IDOnset:     runOnset,
+	sheet.IDHeatPump:  runHeatPump,
+}
+
+// legacySummaries are the help lines of the legacy commands.
+var legacySummaries = map[sheet.ID]string{
+	sheet.IDResonance: "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps",
+	sheet.IDDiagnose:  "gas temperature or mixture fraction from a measured resonance frequency",
+	sheet.IDVessel:    "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)",
+	sheet.IDEnergy:    "stored energy of a gas charge and its TNT equivalent (safety)",
+	sheet.IDOxygen:    "oxygen left in a room after a gas release (safety)",
+	sheet.IDSPL:       "sound pressure level of a pressure amplitude against hearing limits (safety)",
+	sheet.IDDepths:    "thermal and viscous penetration depths of a gas at a frequency",
+	sheet.IDPores:     "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator",
+	sheet.IDPlacement: "where a short stack sits in the standing wave, displacement and exchanger length",
+	sheet.IDOnset:     "hot temperature and frequency at which a device described in a file starts to sing",
+	sheet.IDHeatPump:  "cold temperature, span and COP of a driven heat pump described in a file",
 }
