@@ -219,7 +219,7 @@ func (sv *solver) search(g0 Geometry, rhLo, rhHi float64) (*Geometry, string, in
 			}
 			return v
 		}
-		pos := bound(pos0*math.Exp(x[0]), minHotSpace+minExchanger, positionMax(w, t))
+		pos := bound(pos0*math.Exp(x[0]), minHotSpace+minExchanger, positionMax(w))
 		dx := bound(dx0*math.Exp(x[1]), w.minStack(pos, sv.set.DriveRatio), w.lambda/8)
 		rh := bound(rh0*math.Exp(x[2]), rhLo, rhHi)
 		pores, phi, gap := poresFor(t.Stack, rh, t.wire())

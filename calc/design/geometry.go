@@ -153,8 +153,8 @@ func (t *Target) file(g Geometry, name, notes string) linear.DeviceFile {
 	return linear.DeviceFile{
 		Name:               name,
 		Gas:                t.Gas,
-		MeanPressure:       strconv.FormatFloat(t.MeanPressure/1e5, 'f', -1, 64) + " bar",
-		AmbientTemperature: strconv.FormatFloat(t.Ambient, 'f', -1, 64) + " K",
+		MeanPressure:       trimFull(t.MeanPressure/1e5) + " bar",
+		AmbientTemperature: trimFull(t.Ambient) + " K",
 		Notes:              notes,
 		PartsList: []linear.PartFile{
 			{Kind: linear.KindClosedEnd, Label: "closed end"},
@@ -200,3 +200,6 @@ func mm(v float64, dec int) string {
 
 // frac writes a fraction with four decimals.
 func frac(v float64) string { return fmt.Sprintf("%.4f", v) }
+
+// trimFull writes v with all the digits it needs to read back exactly.
+func trimFull(v float64) string { return strconv.FormatFloat(v, 'f', -1, 64) }

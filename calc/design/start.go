@@ -118,7 +118,7 @@ func (t *Target) startGeometry(w wave, driveRatio float64, rhLo, rhHi float64) G
 	pores, phi, gap := poresFor(t.Stack, rh, t.wire())
 	total := w.tubeGuess(t)
 	best, bestPos := math.Inf(1), 0.0
-	hi := positionMax(w, t)
+	hi := positionMax(w)
 	for i := 1; i <= 200; i++ {
 		pos := minHotSpace + (hi-minHotSpace)*float64(i)/200
 		dx := w.minStack(pos, driveRatio)
@@ -149,7 +149,7 @@ func (t *Target) place(g *Geometry, w wave, pos, dx, driveRatio float64) {
 // positionMax is the farthest the stack's hot face may sit from the closed
 // end: 3λ/16, beyond λ/8 where engine stacks commonly sit (common
 // practice, no published source), and well short of the velocity antinode.
-func positionMax(w wave, t *Target) float64 {
+func positionMax(w wave) float64 {
 	return 3 * w.lambda / 16
 }
 
