@@ -67,6 +67,9 @@ type Quantity struct {
 	Dim         Dimension // dimension of Value
 	Unit        string    // the unit as recognised, canonical spelling, e.g. "bar", "degC", "in"
 	Gauge       bool      // pressure was typed as gauge (barg, psig); Value is still absolute
+	// Assumed marks a pressure whose unit named neither gauge nor
+	// absolute and was read as gauge (Options.BareGauge); Gauge is set too.
+	Assumed bool
 }
 
 // Options adjusts ParseWith.
@@ -82,4 +85,9 @@ type Options struct {
 	// is otherwise absurd (length, volume, mass ...). Temperatures below
 	// absolute zero and absolute pressures below zero are always errors.
 	AllowNegative bool
+	// BareGauge reads a pressure whose unit says neither gauge nor
+	// absolute ("30 bar", "145 psi") as gauge, the way a gauge shows it;
+	// "bara", "psia" and the vacuum units torr and mmHg stay absolute (see
+	// gaugeread.go).
+	BareGauge bool
 }

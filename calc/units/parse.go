@@ -133,6 +133,10 @@ func (p *parser) parse() (Quantity, error) {
 	if err != nil {
 		return Quantity{}, err
 	}
+	assumed := false
+	if p.opt.BareGauge && p.dim == DimPressure {
+		def, assumed = bareAsGauge(def, valUnit)
+	}
 	atm := p.opt.Atmosphere
 	if atm == 0 {
 		atm = StandardAtmosphere
@@ -147,6 +151,7 @@ func (p *parser) parse() (Quantity, error) {
 		q.Value = fromUnit(val.x, def, atm)
 		q.Unit = def.name
 		q.Gauge = def.gauge
+		q.Assumed = assumed
 	}
 	if err := p.checkValue(q.Value); err != nil {
 		return Quantity{}, err
