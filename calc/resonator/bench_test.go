@@ -28,14 +28,26 @@ func BenchmarkSolveFrequency(b *testing.B) {
 			sinkResult, _ = s.SolveFrequency()
 		}
 	})
+	s.Losses = WallLosses
+	b.Run("uncertain_wall_losses", func(b *testing.B) {
+		b.ReportAllocs()
+		for b.Loop() {
+			sinkResult, _ = s.SolveFrequency()
+		}
+	})
 }
 
 func BenchmarkDiagnoseTemperature(b *testing.B) {
 	s := Setup{Tube: Tube{Ends: ClosedOpen, Correction: Unflanged, Mode: 1, Length: 0.6, Radius: 0.012},
 		Gas: mixture(b, "air"), Pressure: 101325, U: Uncertainty{Frequency: 2}}
-	b.ReportAllocs()
-	for b.Loop() {
-		sinkEstimate, _ = s.DiagnoseTemperature(140)
+	for _, l := range []Losses{LossFree, WallLosses} {
+		s.Losses = l
+		b.Run(l.String(), func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				sinkEstimate, _ = s.DiagnoseTemperature(140)
+			}
+		})
 	}
 }
 

@@ -15,7 +15,15 @@
 // small (Q ≫ 1) and computed by perturbation from the lossless mode shape;
 // end corrections are the published ones for a thin-walled open end
 // (unflanged) or an end in an infinite baffle (flanged). Each function
-// documents its own formula, domain and source. Inputs outside the domain
+// documents its own formula, domain and source.
+//
+// Wall losses in the frequency: with Tube.Losses (or ZonedTube.Losses) set
+// to WallLosses the frequency comes from Rott's complex wave number of the
+// circular duct (WaveNumber), so the boundary layers lower it as they do
+// in the onset solver of calc/linear; the zero value LossFree keeps the
+// adiabatic sound speed. The Q is computed the same way in both. A
+// warning is given when the mean free path is not small against the
+// radius (Knudsen number above KnudsenLimit). Inputs outside the domain
 // return a *units.RangeError naming the field, the value and the valid
 // range; results are never NaN.
 //

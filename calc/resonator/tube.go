@@ -19,6 +19,10 @@ type Tube struct {
 	Mode       int           // harmonic number n ≥ 1 (1 = fundamental)
 	Length     float64       // physical length, m (ignored by TubeLength)
 	Radius     float64       // inner radius, m
+	// Losses selects the model of the frequency: LossFree (the zero value,
+	// the adiabatic sound speed) or WallLosses (Rott's complex wave
+	// number, see WaveNumber). The Q is the same in both.
+	Losses Losses
 }
 
 // Result is a solved uniform-tube resonance. Sigma fields are the
@@ -35,6 +39,16 @@ type Result struct {
 	Q               Quality // quality factor by loss mechanism
 	Bandwidth       float64 // -3 dB (half-power) bandwidth f/Q, Hz
 	DecayTime       float64 // amplitude 1/e decay time Q/(πf), s
+	// Losses is the model that gave Frequency (or Length).
+	Losses Losses
+	// LossFreeFrequency is the resonance of the same tube without wall
+	// losses, Hz (equal to Frequency with LossFree).
+	LossFreeFrequency float64
+	// MeanFreePath is the mean free path of the gas molecules, m, and
+	// Knudsen its ratio to the radius (see MeanFreePath; a warning is
+	// added above KnudsenLimit).
+	MeanFreePath float64
+	Knudsen      float64
 
 	FrequencySigma, LengthSigma, EndCorrectionSigma float64
 	QSigma, BandwidthSigma, DecayTimeSigma          float64
@@ -57,6 +71,9 @@ func (t Tube) check(needLength bool) error {
 	}
 	if t.Correction < NoCorrection || t.Correction > Flanged {
 		panic("resonator: unknown EndCorrection")
+	}
+	if t.Losses != LossFree && t.Losses != WallLosses {
+		panic("resonator: unknown Losses")
 	}
 	if t.Mode < 1 || t.Mode > MaxMode {
 		return units.NewRangeError("mode", float64(t.Mode), 1, MaxMode, "")
@@ -82,6 +99,12 @@ func (t Tube) check(needLength bool) error {
 // Because δ depends on ka and so on f, the equation is solved with Brent's
 // method. Losses: see KirchhoffAttenuation and Quality. Errors: length,
 // radius not positive, mode outside 1-50, incomplete gas properties.
+//
+// With t.Losses = WallLosses the frequency is that of the lossy duct: the
+// loss-free mode is followed to the complex frequency at which the
+// far-end condition holds with Rott's complex wave number (see
+// ZonedModesLosses and WaveNumber), and Frequency is Re ω/2π; the Q is
+// computed as without losses. LossFreeFrequency keeps the loss-free value.
 func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
 	if err := t.check(true); err != nil {
 		return Result{}, err
@@ -89,6 +112,23 @@ func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
 	if err := checkProps(g); err != nil {
 		return Result{}, err
 	}
+	f, err := lossFreeFrequency(t, g)
+	if err != nil {
+		return Result{}, err
+	}
+	f0 := f
+	if t.Losses == WallLosses {
+		if f, err = wallFrequency(t, g, f0); err != nil {
+			return Result{}, err
+		}
+	}
+	r := finish(t, g, f)
+	r.LossFreeFrequency = f0
+	return r, nil
+}
+
+// lossFreeFrequency is the loss-free resonance of a checked tube.
+func lossFreeFrequency(t Tube, g gasprops.Properties) (float64, error) {
 	c, m, nOpen := g.SoundSpeed, t.modeFactor(), float64(t.Ends.OpenEnds())
 	f0 := m * c / t.Length
 	f := f0
@@ -101,11 +141,31 @@ func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
 		lo := m * c / (t.Length + nOpen*FlangedLimit*t.Radius*1.001)
 		r, err := numeric.Brent(h, lo, f0, &numeric.RootSettings{RelTol: 1e-13})
 		if err != nil {
-			return Result{}, fmt.Errorf("resonator: end-corrected frequency: %w", err)
+			return 0, fmt.Errorf("resonator: end-corrected frequency: %w", err)
 		}
 		f = r.X
 	}
-	return finish(t, g, f), nil
+	return f, nil
+}
+
+// wallFrequency follows the loss-free resonance f0 of tube t to the
+// resonance with wall losses (see ZonedModesLosses): Re ω/2π.
+func wallFrequency(t Tube, g gasprops.Properties, f0 float64) (float64, error) {
+	w, err := newWaveTube(t.Ends, t.Correction, []Section{sectionOf(t, g)})
+	if err != nil {
+		return 0, err
+	}
+	omega, err := w.solve(f0)
+	if err != nil {
+		return 0, err
+	}
+	return real(omega) / (2 * math.Pi), nil
+}
+
+// sectionOf is the uniform tube t as one section.
+func sectionOf(t Tube, g gasprops.Properties) Section {
+	return Section{Length: t.Length, Radius: t.Radius, SoundSpeed: g.SoundSpeed, Density: g.Density,
+		Gamma: g.Gamma, KinematicViscosity: g.KinematicViscosity, ThermalDiffusivity: g.ThermalDiffusivity}
 }
 
 // TubeLength returns the physical length of a tube (t.Length is ignored)
@@ -113,7 +173,11 @@ func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
 //
 //	L = m c / f - δ(ka)·(number of open ends)
 //
-// with m as in TubeFrequency. It is an error when the end corrections alone
+// with m as in TubeFrequency. With t.Losses = WallLosses the length is
+// the one whose wall-loss resonance (see TubeFrequency) is f, found by
+// Brent's method from the loss-free length, which is too long; the
+// result's LossFreeFrequency is that length's loss-free resonance.
+// It is an error when the end corrections alone
 // are longer than the acoustic length (the frequency is too high for this
 // radius and mode): the RangeError gives the highest frequency possible.
 func TubeLength(t Tube, f float64, g gasprops.Properties) (Result, error) {
@@ -142,7 +206,49 @@ func TubeLength(t Tube, f float64, g gasprops.Properties) (Result, error) {
 		return Result{}, e
 	}
 	t.Length = L
-	return finish(t, g, f), nil
+	if t.Losses == WallLosses {
+		var err error
+		if t.Length, err = wallLength(t, g, f); err != nil {
+			return Result{}, err
+		}
+	}
+	r := finish(t, g, f)
+	r.LossFreeFrequency = f
+	if t.Losses == WallLosses {
+		if f0, err := lossFreeFrequency(t, g); err == nil {
+			r.LossFreeFrequency = f0
+		}
+	}
+	return r, nil
+}
+
+// wallLength returns the length of tube t (t.Length holds the loss-free
+// answer, which is too long) that resonates at f with wall losses, by
+// Brent's method on L: the frequency falls as L grows.
+func wallLength(t Tube, g gasprops.Properties, f float64) (float64, error) {
+	h := func(L float64) float64 {
+		tt := t
+		tt.Length = L
+		f0, err := lossFreeFrequency(tt, g)
+		if err != nil {
+			return math.NaN()
+		}
+		fw, err := wallFrequency(tt, g, f0)
+		if err != nil {
+			return math.NaN()
+		}
+		return fw - f
+	}
+	hi := t.Length
+	lo := hi / 2
+	for i := 0; i < 40 && h(lo) < 0; i++ {
+		hi, lo = lo, lo/2
+	}
+	r, err := numeric.Brent(h, lo, hi, &numeric.RootSettings{RelTol: 1e-12})
+	if err != nil {
+		return 0, fmt.Errorf("resonator: tube length with wall losses: %w", err)
+	}
+	return r.X, nil
 }
 
 // finish fills the result for a tube t resonating at f.
@@ -156,6 +262,7 @@ func finish(t Tube, g gasprops.Properties, f float64) Result {
 		d, warn = 0, ""
 	}
 	r := Result{
+		Losses:          t.Losses,
 		Frequency:       f,
 		Length:          t.Length,
 		EndCorrection:   d,
@@ -175,6 +282,11 @@ func finish(t Tube, g gasprops.Properties, f float64) Result {
 		r.Warnings = append(r.Warnings, w)
 	}
 	r.Attenuation = alpha
+	r.MeanFreePath = MeanFreePath(g)
+	r.Knudsen = r.MeanFreePath / t.Radius
+	if w := knudsenWarning(g, t.Radius); w != "" {
+		r.Warnings = append(r.Warnings, w)
+	}
 	r.Q = tubeQuality(t, g, f, k, d)
 	r.Bandwidth = f / r.Q.Total
 	r.DecayTime = r.Q.Total / (math.Pi * f)
