@@ -5,8 +5,6 @@ import (
 	"fmt"
 
 	"gioui.org/layout"
-	"gonum.org/v1/plot"
-	"gonum.org/v1/plot/plotter"
 
 	"tubewright/calc/resonator"
 	"tubewright/calc/units"
@@ -133,7 +131,7 @@ func (s *diagnoseScreen) compute() {
 		r.Warn(e.Warnings...)
 		s.env.Bench.SetGas(s.picker.Text())
 		s.env.Bench.SetFrequency(fq.Value, s.Title())
-		s.plot.Set(frequencyPlot(setup, e.Value, fq.Value, "Frequency against temperature"))
+		s.plot.Set(frequencyPlot(setup, e.Value, fq.Value, "Frequency against temperature").WithError(e.Sigma, fq.Uncertainty))
 		return
 	}
 	a, _ := gasprops.Lookup(s.first.Selected())
@@ -157,17 +155,17 @@ func (s *diagnoseScreen) compute() {
 	r.AddNote(fmt.Sprintf("%s in %s, by mole (≈ by volume for ideal gases)", b.Name, a.Name))
 	r.Warn(e.Warnings...)
 	s.env.Bench.SetFrequency(fq.Value, s.Title())
-	s.plot.Set(fractionPlot(setup, a, b, e.Value, fq.Value))
+	s.plot.Set(fractionPlot(setup, a, b, e.Value, fq.Value).WithError(e.Sigma, fq.Uncertainty))
 }
 
 // fractionPlot sweeps the frequency over mole fractions 0..1 and marks the
 // measurement.
-func fractionPlot(setup resonator.Setup, a, b *gasprops.Species, x, f float64) *plot.Plot {
+func fractionPlot(setup resonator.Setup, a, b *gasprops.Species, x, f float64) *Chart {
 	pts, err := setup.SweepFraction(a, b, 0, 1, 51)
 	if err != nil {
 		return nil
 	}
-	xy := make(plotter.XYs, len(pts))
+	xy := make(XYs, len(pts))
 	for i, p := range pts {
 		xy[i].X, xy[i].Y = p.X, p.Frequency
 	}

@@ -5,7 +5,6 @@ import (
 	"fmt"
 
 	"gioui.org/layout"
-	"gonum.org/v1/plot/plotter"
 
 	"tubewright/calc/linear"
 	"tubewright/calc/units"
@@ -113,21 +112,21 @@ func (s *heatPumpScreen) show(o *pumpOutcome, err error) {
 		"A linear estimate without heat leaks through walls or the stack's solid: measured spans are smaller.",
 	}
 	pr := &x.Profile
-	tm := make(plotter.XYs, len(pr.X))
-	pa := make(plotter.XYs, len(pr.X))
-	e2 := make(plotter.XYs, len(pr.X))
+	tm := make(XYs, len(pr.X))
+	pa := make(XYs, len(pr.X))
+	e2 := make(XYs, len(pr.X))
 	for k := range pr.X {
-		tm[k] = plotter.XY{X: pr.X[k], Y: pr.Temperature[k]}
-		pa[k] = plotter.XY{X: pr.X[k], Y: pr.PressureAmp[k]}
-		e2[k] = plotter.XY{X: pr.X[k], Y: pr.AcousticPower[k]}
+		tm[k] = XY{X: pr.X[k], Y: pr.Temperature[k]}
+		pa[k] = XY{X: pr.X[k], Y: pr.PressureAmp[k]}
+		e2[k] = XY{X: pr.X[k], Y: pr.AcousticPower[k]}
 	}
 	s.plots[0].Set(lineXY(tm, "Position from the driver", "m", "Mean temperature Tm", "K", "Mean temperature along the device"))
 	s.plots[1].Set(lineXY(pa, "Position from the driver", "m", "|p1|", "Pa", "Pressure amplitude along the device"))
 	s.plots[2].Set(lineXY(e2, "Position from the driver", "m", "Acoustic power", "W", "Acoustic power along the device"))
-	var sp plotter.XYs
+	var sp XYs
 	for _, p := range o.sweep {
 		if p.Err == nil {
-			sp = append(sp, plotter.XY{X: p.Frequency, Y: p.Result.TemperatureSpan})
+			sp = append(sp, XY{X: p.Frequency, Y: p.Result.TemperatureSpan})
 		}
 	}
 	s.plots[3].Set(lineXY(sp, "Drive frequency", "Hz", "Span", "K", "Span against drive frequency"))

@@ -5,8 +5,6 @@ import (
 	"fmt"
 
 	"gioui.org/layout"
-	"gonum.org/v1/plot"
-	"gonum.org/v1/plot/plotter"
 
 	"tubewright/calc/linear"
 	"tubewright/calc/units"
@@ -125,17 +123,16 @@ func (s *onsetScreen) show(o *onsetOutcome, err error) {
 		"A linear estimate: heat leaks, streaming and construction change real onset; approach it slowly.",
 	}
 	setProfilePlots(s.plots[:4], &res.Profile)
-	var xy plotter.XYs
+	var xy XYs
 	for _, p := range o.sweep {
 		if p.Err == nil {
-			xy = append(xy, plotter.XY{X: p.Pressure / 1e5, Y: p.HotTemperature})
+			xy = append(xy, XY{X: p.Pressure / 1e5, Y: p.HotTemperature})
 		}
 	}
 	pp := lineXY(xy, "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure")
 	if pp != nil {
 		// Pressures are spaced geometrically: a log axis shows the U.
-		pp.X.Scale = plot.LogScale{}
-		pp.X.Tick.Marker = plot.LogTicks{Prec: -1}
+		pp.X.Log = true
 	}
 	s.plots[4].Set(pp)
 }
@@ -172,26 +169,22 @@ func setProfilePlots(plots []*Plot, pr *linear.Profile) {
 		if i >= len(plots) {
 			break
 		}
-		xy := make(plotter.XYs, len(pr.X))
+		xy := make(XYs, len(pr.X))
 		for k := range pr.X {
-			xy[k] = plotter.XY{X: pr.X[k], Y: c.y[k]}
+			xy[k] = XY{X: pr.X[k], Y: c.y[k]}
 		}
 		plots[i].Set(lineXY(xy, "Position from the start end", "m", c.label, c.unit, c.label+" along the device"))
 	}
 }
 
 // lineXY is a titled line plot; nil when there are fewer than two points.
-func lineXY(xy plotter.XYs, xl, xu, yl, yu, title string) *plot.Plot {
+func lineXY(xy XYs, xl, xu, yl, yu, title string) *Chart {
 	if len(xy) < 2 {
 		return nil
 	}
 	p := NewXYPlot(xl, xu, yl, yu)
-	p.Title.Text = title
-	l, err := plotter.NewLine(xy)
-	if err != nil {
-		return nil
-	}
-	p.Add(l)
+	p.Title = title
+	p.AddLine(xy)
 	return p
 }
 

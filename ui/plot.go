@@ -2,79 +2,182 @@ package ui
 
 import (
 	"image"
-	"image/draw"
+	"math"
 
+	"gioui.org/io/event"
+	"gioui.org/io/pointer"
 	"gioui.org/layout"
 	"gioui.org/op/clip"
-	"gioui.org/op/paint"
 	"gioui.org/unit"
-	"gonum.org/v1/plot"
-	"gonum.org/v1/plot/font"
-	"gonum.org/v1/plot/vg"
-	vgdraw "gonum.org/v1/plot/vg/draw"
-	"gonum.org/v1/plot/vg/vgimg"
+	"gioui.org/widget"
 )
 
-// Plot shows a gonum plot at the available width and a fixed height. The
-// plot is rasterised on the CPU with gonum's vgimg (plot v0.17.0 has no Gio
-// back end) and the image is kept until the plot or the size changes.
-//
-// Give the axes their units: NewXYPlot("Length", "m", "Frequency", "Hz").
+// XY is one point of a series, in SI units.
+type XY struct{ X, Y float64 }
+
+// XYs is a series of points, in the order they are joined.
+type XYs []XY
+
+// Axis is one axis of a Chart.
+type Axis struct {
+	// Label names the quantity: "Mean pressure".
+	Label string
+	// Unit is the SI unit symbol of the values ("Pa", "m³/s", "K"; "" or
+	// "1" for a pure number). The plot writes the numbers with a prefix
+	// (kPa) or one power of ten in the title, never an exponent on a tick.
+	Unit string
+	// Log draws the axis on a log scale (only when every value is
+	// positive). The x axis also turns logarithmic by itself when its
+	// positive values span two decades or more.
+	Log bool
+}
+
+// Mark is a point drawn over the lines, such as the current operating
+// point or a measurement, with ± half-widths DX and DY (0: no bar).
+type Mark struct {
+	X, Y, DX, DY float64
+}
+
+// Chart is what a Plot draws: lines through swept points and marked
+// points, in SI units. Build it with NewXYPlot, AddLine and AddMark when
+// the data change, and hand it to Plot.Set.
+type Chart struct {
+	// Title is shown above the plot.
+	Title string
+	// X and Y are the axes.
+	X, Y Axis
+	// Lines are the sweeps, each drawn as a line and listed in the table.
+	Lines []XYs
+	// Marks are single points drawn over the lines.
+	Marks []Mark
+}
+
+// NewXYPlot returns an empty chart whose axes carry their units:
+// NewXYPlot("Length", "m", "Frequency", "Hz").
+func NewXYPlot(xLabel, xUnit, yLabel, yUnit string) *Chart {
+	return &Chart{X: Axis{Label: xLabel, Unit: xUnit}, Y: Axis{Label: yLabel, Unit: yUnit}}
+}
+
+// AddLine adds a sweep drawn as a line; points with NaN or infinite
+// coordinates break the line.
+func (c *Chart) AddLine(xy XYs) { c.Lines = append(c.Lines, xy) }
+
+// AddMark marks the point (x, y) with ± half-widths dx and dy (0: none).
+func (c *Chart) AddMark(x, y, dx, dy float64) {
+	c.Marks = append(c.Marks, Mark{X: x, Y: y, DX: dx, DY: dy})
+}
+
+// WithError sets the ± half-widths of the last mark and returns c; on a
+// nil chart or one without marks it does nothing. Non-finite or negative
+// widths are dropped.
+func (c *Chart) WithError(dx, dy float64) *Chart {
+	if c == nil || len(c.Marks) == 0 {
+		return c
+	}
+	m := &c.Marks[len(c.Marks)-1]
+	if finite(dx) && dx > 0 {
+		m.DX = dx
+	}
+	if finite(dy) && dy > 0 {
+		m.DY = dy
+	}
+	return c
+}
+
+// Plot draws a Chart with Gio vector paths in the app's font, ticks placed
+// by LinearTicks or LogTicks. A touch or hover reads the nearest point
+// with its units under the plot; a Table button switches to a table of
+// every sweep that can be copied.
 type Plot struct {
-	// Height is the plot's height; zero means 260 dp.
+	// Height is the height of the drawing (without title and readout);
+	// zero means 260 dp.
 	Height unit.Dp
 
-	env  *Env
-	p    *plot.Plot
-	img  *image.RGBA
-	op   paint.ImageOp
-	size image.Point
-	ppdp float32
+	env   *Env
+	chart *Chart
+
+	table        bool
+	tableBtn     widget.Clickable
+	copyBtn      widget.Clickable
+	copied       bool
+	sel          pick // the point read by touch or hover
+	headerHeight int  // of the last frame: the drawing starts this far down
+	hovering     bool
+	geom         plotGeom // mapping of the last frame, for pointer events
+	cacheSize    image.Point
+	cache        plotCache
 }
 
-// plotMargin is the blank space kept at the plot's right edge (half of it
-// at the top).
-const plotMargin = vg.Length(10) // points
+// pick names a point of the chart: line l, index i (l = -1: mark i).
+type pick struct {
+	ok   bool
+	l, i int
+}
 
-// NewPlot returns an empty plot widget; Set gives it a plot.
+// NewPlot returns an empty plot widget; Set gives it a chart.
 func NewPlot(env *Env) *Plot { return &Plot{env: env} }
 
-// NewXYPlot returns a gonum plot with axis labels that carry their units,
-// e.g. "Frequency (Hz)", in a sans-serif face that sits well beside the
-// app's text.
-func NewXYPlot(xLabel, xUnit, yLabel, yUnit string) *plot.Plot {
-	p := plot.New()
-	p.X.Label.Text = axisLabel(xLabel, xUnit)
-	p.Y.Label.Text = axisLabel(yLabel, yUnit)
-	for _, f := range []*font.Font{
-		&p.Title.TextStyle.Font, &p.Legend.TextStyle.Font,
-		&p.X.Label.TextStyle.Font, &p.Y.Label.TextStyle.Font,
-		&p.X.Tick.Label.Font, &p.Y.Tick.Label.Font,
-	} {
-		f.Variant = "Sans"
-	}
-	return p
-}
-
-func axisLabel(label, unit string) string {
-	if unit == "" || unit == "1" {
-		return label
-	}
-	return label + " (" + unit + ")"
-}
-
-// Set replaces the plot; nil shows nothing. Call it when the data change,
+// Set replaces the chart; nil shows nothing. Call it when the data change,
 // not every frame.
-func (w *Plot) Set(p *plot.Plot) {
-	w.p = p
-	w.img = nil
+func (w *Plot) Set(c *Chart) {
+	w.chart = c
+	w.sel = pick{}
+	w.copied = false
+	w.cacheSize = image.Point{}
 }
 
-// Layout draws the plot across the available width.
+// Chart returns the chart shown, or nil.
+func (w *Plot) Chart() *Chart { return w.chart }
+
+// Layout draws the title, the plot or table, and the readout across the
+// available width.
 func (w *Plot) Layout(gtx layout.Context) layout.Dimensions {
-	if w.p == nil {
+	if w.chart == nil || !w.chart.hasData() {
 		return layout.Dimensions{}
 	}
+	if w.tableBtn.Clicked(gtx) {
+		w.table = !w.table
+		w.copied = false
+	}
+	if w.copyBtn.Clicked(gtx) {
+		w.copyTable(gtx)
+		w.copied = true
+	}
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			d := w.layoutHeader(gtx)
+			w.headerHeight = d.Size.Y
+			return d
+		}),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			if w.table {
+				return w.layoutTable(gtx)
+			}
+			return w.layoutPlot(gtx)
+		}),
+	)
+}
+
+// hasData reports whether the chart has at least one finite point.
+func (c *Chart) hasData() bool {
+	for _, l := range c.Lines {
+		for _, p := range l {
+			if finite(p.X) && finite(p.Y) {
+				return true
+			}
+		}
+	}
+	for _, m := range c.Marks {
+		if finite(m.X) && finite(m.Y) {
+			return true
+		}
+	}
+	return false
+}
+
+// layoutPlot draws the axes and data, handles pointer input and writes the
+// readout under the plot.
+func (w *Plot) layoutPlot(gtx layout.Context) layout.Dimensions {
 	h := w.Height
 	if h == 0 {
 		h = 260
@@ -83,30 +186,86 @@ func (w *Plot) Layout(gtx layout.Context) layout.Dimensions {
 	if size.X <= 0 || size.Y <= 0 {
 		return layout.Dimensions{}
 	}
-	if w.img == nil || w.size != size || w.ppdp != gtx.Metric.PxPerDp {
-		w.render(size, gtx.Metric.PxPerDp)
-	}
-	defer clip.Rect{Max: size}.Push(gtx.Ops).Pop()
-	w.op.Add(gtx.Ops)
-	paint.PaintOp{}.Add(gtx.Ops)
-	return layout.Dimensions{Size: size}
+	w.pointer(gtx)
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(Described("Plot drawing", func(gtx layout.Context) layout.Dimensions {
+			w.draw(gtx, size)
+			area := clip.Rect{Max: size}.Push(gtx.Ops)
+			pointer.CursorCrosshair.Add(gtx.Ops)
+			event.Op(gtx.Ops, w)
+			area.Pop()
+			return layout.Dimensions{Size: size}
+		})),
+		layout.Rigid(w.layoutReadout),
+	)
 }
 
-// render rasterises the plot at size pixels; plot text is sized for 96 dpi
-// at one pixel per dp.
-func (w *Plot) render(size image.Point, pxPerDp float32) {
-	img := image.NewRGBA(image.Rectangle{Max: size})
-	dpi := int(96*pxPerDp + 0.5)
-	c := vgimg.NewWith(vgimg.UseImage(img), vgimg.UseDPI(dpi))
-	// A margin on the right and at the top, so that the last tick label
-	// and a curve running to the end of its range stay clear of the edge.
-	w.p.Draw(vgdraw.Crop(vgdraw.New(c), 0, -plotMargin, 0, -plotMargin/2))
-	// The canvas draws into its own copy of the image.
-	out, ok := c.Image().(*image.RGBA)
-	if !ok {
-		out = image.NewRGBA(c.Image().Bounds())
-		draw.Draw(out, out.Bounds(), c.Image(), image.Point{}, draw.Src)
+// pointer handles touches and hovering: the nearest point to the pointer
+// becomes the one read out. A tap keeps its point; hovering clears it when
+// the pointer leaves.
+func (w *Plot) pointer(gtx layout.Context) {
+	for {
+		ev, ok := gtx.Event(pointer.Filter{Target: w,
+			Kinds: pointer.Press | pointer.Drag | pointer.Move | pointer.Enter | pointer.Leave})
+		if !ok {
+			break
+		}
+		e, ok := ev.(pointer.Event)
+		if !ok {
+			continue
+		}
+		switch e.Kind {
+		case pointer.Leave:
+			if w.hovering {
+				w.sel = pick{}
+			}
+			w.hovering = false
+		case pointer.Move, pointer.Enter:
+			w.hovering = e.Source == pointer.Mouse
+			w.sel = w.nearest(e.Position.X, e.Position.Y)
+		case pointer.Press, pointer.Drag:
+			w.hovering = false
+			w.sel = w.nearest(e.Position.X, e.Position.Y)
+		}
 	}
-	w.img, w.size, w.ppdp = out, size, pxPerDp
-	w.op = paint.NewImageOp(out)
+}
+
+// nearest returns the data point drawn closest to the pixel (px, py) of
+// the last frame, the marks first on a tie.
+func (w *Plot) nearest(px, py float32) pick {
+	g := &w.geom
+	if !g.ok {
+		return pick{}
+	}
+	best := pick{}
+	bestD := math.Inf(1)
+	try := func(l, i int, x, y float64) {
+		sx, sy, ok := g.toPx(x, y)
+		if !ok {
+			return
+		}
+		dx, dy := float64(px)-sx, float64(py)-sy
+		if d := dx*dx + dy*dy; d < bestD {
+			best, bestD = pick{ok: true, l: l, i: i}, d
+		}
+	}
+	for i, m := range w.chart.Marks {
+		try(-1, i, m.X, m.Y)
+	}
+	for l, line := range w.chart.Lines {
+		for i, p := range line {
+			try(l, i, p.X, p.Y)
+		}
+	}
+	return best
+}
+
+// point returns the coordinates of a pick.
+func (w *Plot) point(p pick) (x, y float64) {
+	if p.l < 0 {
+		m := w.chart.Marks[p.i]
+		return m.X, m.Y
+	}
+	q := w.chart.Lines[p.l][p.i]
+	return q.X, q.Y
 }

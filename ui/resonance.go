@@ -3,7 +3,6 @@ package ui
 import (
 	"errors"
 	"fmt"
-	"image/color"
 	"math"
 	"strings"
 
@@ -11,10 +10,6 @@ import (
 	"gioui.org/unit"
 	"gioui.org/widget"
 	"gioui.org/widget/material"
-	"gonum.org/v1/plot"
-	"gonum.org/v1/plot/plotter"
-	"gonum.org/v1/plot/vg"
-	"gonum.org/v1/plot/vg/draw"
 
 	"tubewright/calc/resonator"
 	"tubewright/calc/units"
@@ -284,7 +279,7 @@ func (s *resonanceScreen) computeTube() {
 	r.AddText("Wall attenuation", fmt.Sprintf("%.3g Np/m", res.Attenuation))
 	r.AddNote("Kirchhoff boundary-layer loss of a travelling wave")
 	r.Warn(res.Warnings...)
-	s.plot.Set(s.sweepPlot(setup, tq.Value, res.Frequency))
+	s.plot.Set(s.sweepPlot(setup, tq.Value, res.Frequency).WithError(tq.Uncertainty, res.FrequencySigma))
 }
 
 func plural(n int) string {
@@ -317,7 +312,7 @@ func qText(q float64) string {
 
 // sweepPlot draws the frequency against the gas temperature around T with
 // the current point marked; nil when the sweep fails.
-func (s *resonanceScreen) sweepPlot(setup resonator.Setup, T, f float64) *plot.Plot {
+func (s *resonanceScreen) sweepPlot(setup resonator.Setup, T, f float64) *Chart {
 	return frequencyPlot(setup, T, f, "Frequency against gas temperature")
 }
 
@@ -449,7 +444,7 @@ func headline(env *Env, label, value string) layout.Widget {
 
 // frequencyPlot sweeps the resonance frequency over temperatures around T
 // (within the gas model's range) and marks the point (T, f).
-func frequencyPlot(setup resonator.Setup, T, f float64, title string) *plot.Plot {
+func frequencyPlot(setup resonator.Setup, T, f float64, title string) *Chart {
 	tmin, tmax := setup.Gas.Range()
 	lo := math.Max(tmin, math.Min(T-100, 0.7*T))
 	hi := math.Min(tmax, math.Max(T+200, 1.5*T))
@@ -460,7 +455,7 @@ func frequencyPlot(setup resonator.Setup, T, f float64, title string) *plot.Plot
 	if err != nil {
 		return nil
 	}
-	xy := make(plotter.XYs, len(pts))
+	xy := make(XYs, len(pts))
 	for i, p := range pts {
 		xy[i].X, xy[i].Y = p.X, p.Frequency
 	}
@@ -468,24 +463,12 @@ func frequencyPlot(setup resonator.Setup, T, f float64, title string) *plot.Plot
 }
 
 // linePlot draws xy as a line and marks (x0, y0) when finite.
-func linePlot(xy plotter.XYs, x0, y0 float64, xLabel, xUnit, title string) *plot.Plot {
+func linePlot(xy XYs, x0, y0 float64, xLabel, xUnit, title string) *Chart {
 	p := NewXYPlot(xLabel, xUnit, "Resonance frequency", "Hz")
-	p.Title.Text = title
-	line, err := plotter.NewLine(xy)
-	if err != nil {
-		return nil
-	}
-	line.Color = color.NRGBA{0x23, 0x63, 0x6b, 0xff}
-	line.Width = vg.Points(1.5)
-	p.Add(line)
+	p.Title = title
+	p.AddLine(xy)
 	if finite(x0) && finite(y0) {
-		sc, err := plotter.NewScatter(plotter.XYs{{X: x0, Y: y0}})
-		if err == nil {
-			sc.GlyphStyle.Shape = draw.CircleGlyph{}
-			sc.GlyphStyle.Radius = vg.Points(4)
-			sc.GlyphStyle.Color = color.NRGBA{0xb5, 0x4a, 0x1c, 0xff}
-			p.Add(sc)
-		}
+		p.AddMark(x0, y0, 0, 0)
 	}
 	return p
 }
