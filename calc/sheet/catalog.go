@@ -48,7 +48,7 @@ var catalog = []Entry{
 	{ID: IDGas, Sheet: gasSheet, Place: Everywhere},
 	{ID: IDResonance, Title: "Tube resonance", Summary: "Frequency from length or length from frequency of a quarter- or half-wave tube, with end corrections, Q and bandwidth", Place: Everywhere},
 	{ID: IDDiagnose, Title: "What the pitch says", Summary: "Gas temperature or mixture fraction from a measured resonance frequency, with its ±", Place: Everywhere},
-	{ID: IDDepths, Title: "Penetration depths", Summary: "Thermal and viscous penetration depths at your gas, temperature, pressure and frequency, with the pore sizes they call for", Place: Everywhere},
+	{ID: IDDepths, Sheet: depthsSheet, Place: Everywhere},
 	{ID: IDPores, Title: "Pores and packing", Summary: "Plates, pores, pins, screens, metal wool or honeycomb: porosity, hydraulic radius, Rott's functions and a verdict for a stack or regenerator", Place: Everywhere},
 	{ID: IDPlacement, Title: "Stack placement", Summary: "Where a short stack sits in the standing wave: heat-flux and loss factors, critical temperature difference, gas displacement and exchanger length", Place: Everywhere},
 	{ID: IDOnset, Title: "Engine onset", Summary: "Build an engine from parts and find the hot temperature and frequency at which it starts to sing, with profiles and onset against pressure", Place: Everywhere},
