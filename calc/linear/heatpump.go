@@ -64,125 +64,192 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 		in = *hs
 	}
 	set := in.Settings.values()
+	drv, f, err := pumpDrive(dev, &in)
+	if err != nil {
+		return nil, err
+	}
+	m, err := newModel(dev, set.Gas, set.RelTol)
+	if err != nil {
+		return nil, err
+	}
+	coldRight, err := pumpStack(m, dev)
+	if err != nil {
+		return nil, err
+	}
+	ps := &pumpSolve{m: m, set: set, ta: dev.AmbientTemperature, load: in.CoolingLoad,
+		coldRight: coldRight, usePressure: drv.PressureAmplitude > 0, ampScale: 1}
+	m.omega = complex(2*math.Pi*f, 0)
+	ps.amp = complex(drv.PressureAmplitude, 0)
+	if !ps.usePressure {
+		ps.amp = complex(drv.VolumeVelocityAmplitude, 0)
+	}
+	free, err := ps.linearStart(drv)
+	if err != nil {
+		return nil, err
+	}
+	x, iters, evals, err := ps.solve(free)
+	if err != nil {
+		return nil, err
+	}
+	res := &HeatPumpResult{Frequency: f, Iterations: iters, Evaluations: evals, CoolingLoad: ps.load}
+	if err := ps.finish(res, x, dev, f); err != nil {
+		return nil, err
+	}
+	return res, nil
+}
+
+// pumpDrive checks the heat pump's driver, frequency and load, and returns
+// the driver and the drive frequency (Hz).
+func pumpDrive(dev *Device, in *HeatPumpSettings) (*Part, float64, error) {
 	drv := dev.Driver()
 	if drv == nil {
-		return nil, &FieldError{Part: 0, Kind: dev.Parts[0].Kind, Field: "kind", Msg: "must be a driver for a heat pump"}
+		return nil, 0, &FieldError{Part: 0, Kind: dev.Parts[0].Kind, Field: "kind", Msg: "must be a driver for a heat pump"}
 	}
 	f := in.Frequency
 	if f <= 0 {
 		f = drv.Frequency
 	}
 	if f <= 0 {
-		return nil, &FieldError{Part: 0, Kind: KindDriver, Field: "frequency", Msg: "is missing: the heat pump needs the drive frequency"}
+		return nil, 0, &FieldError{Part: 0, Kind: KindDriver, Field: "frequency", Msg: "is missing: the heat pump needs the drive frequency"}
 	}
 	if !(in.CoolingLoad >= 0) || math.IsInf(in.CoolingLoad, 0) {
-		return nil, fmt.Errorf("heat pump: cooling load %g W must be zero or positive", in.CoolingLoad)
+		return nil, 0, fmt.Errorf("heat pump: cooling load %g W must be zero or positive", in.CoolingLoad)
 	}
-	m, err := newModel(dev, set.Gas, set.RelTol)
-	if err != nil {
-		return nil, err
-	}
+	return drv, f, nil
+}
+
+// pumpStack finds the device's one stack, checks that exactly one of its
+// neighbours is cold, sets the hot temperature where parts are "hot", and
+// reports whether the cold side lies beyond the stack (x larger).
+func pumpStack(m *model, dev *Device) (coldRight bool, err error) {
 	stack := -1
 	for i, s := range m.segs {
 		if s.kind == KindStack {
 			if stack >= 0 {
-				return nil, &FieldError{Part: i, Kind: KindStack, Msg: "is a second stack; the heat pump solve handles one"}
+				return false, &FieldError{Part: i, Kind: KindStack, Msg: "is a second stack; the heat pump solve handles one"}
 			}
 			stack = i
 		}
 	}
 	if stack < 0 {
-		return nil, &FieldError{Part: -1, Msg: "the device has no stack: a heat pump needs one"}
+		return false, &FieldError{Part: -1, Msg: "the device has no stack: a heat pump needs one"}
 	}
 	st := &m.segs[stack]
-	coldRight := st.rightRef == TempCold
+	coldRight = st.rightRef == TempCold
 	if coldRight == (st.leftRef == TempCold) {
-		return nil, &FieldError{Part: stack, Kind: KindStack, Msg: "needs exactly one neighbour at \"cold\" (the side it cools) and the other at \"ambient\" or a value"}
+		return false, &FieldError{Part: stack, Kind: KindStack, Msg: "needs exactly one neighbour at \"cold\" (the side it cools) and the other at \"ambient\" or a value"}
 	}
 	if dev.has(TempHot) {
 		if dev.HotTemperature <= 0 {
-			return nil, &FieldError{Part: -1, Field: "hot_temperature", Msg: "is needed: some parts are at \"hot\""}
+			return false, &FieldError{Part: -1, Field: "hot_temperature", Msg: "is needed: some parts are at \"hot\""}
 		}
 		m.th = dev.HotTemperature
 	}
-	ta := dev.AmbientTemperature
-	m.omega = complex(2*math.Pi*f, 0)
-	usePressure := drv.PressureAmplitude > 0
-	amp := complex(drv.PressureAmplitude, 0)
-	if !usePressure {
-		amp = complex(drv.VolumeVelocityAmplitude, 0)
+	return coldRight, nil
+}
+
+// pumpSolve is the state of one heat-pump solve: the model, the drive and
+// the scales of the Newton problem.
+type pumpSolve struct {
+	m           *model
+	set         Settings
+	ta          float64    // ambient temperature, K
+	load        float64    // cooling load, W
+	coldRight   bool       // the cold side lies beyond the stack
+	usePressure bool       // the driver's pressure amplitude is given
+	amp         complex128 // the given drive amplitude
+	ampScale    float64    // drive amplitude factor, < 1 during continuation
+	fs, rs      float64    // scales of the free amplitude and of the residual
+}
+
+// start returns p1 and U1 at the driver for a free amplitude.
+func (ps *pumpSolve) start(free complex128) (p0, u0 complex128) {
+	a := ps.amp * complex(ps.ampScale, 0)
+	if ps.usePressure {
+		return a, free
 	}
-	ampScale := 1.0 // drive amplitude factor, < 1 during continuation
-	start := func(free complex128) (p0, u0 complex128) {
-		a := amp * complex(ampScale, 0)
-		if usePressure {
-			return a, free
-		}
-		return free, a
+	return free, a
+}
+
+// setPower sets the total power H2 through the stack for the driver state.
+func (ps *pumpSolve) setPower(p0, u0 complex128) {
+	if ps.coldRight {
+		ps.m.h2 = -ps.load
+	} else {
+		ps.m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + ps.load
 	}
-	// Start: the linear answer with every part at ambient (two integrations).
-	m.tc, m.runMode = ta, modeLinear
-	p0, u0 := start(0)
+}
+
+// linearStart returns the free amplitude of the linear answer with every
+// part at ambient (two integrations: the residual is linear in the state at
+// fixed temperatures), and sets the scales of the Newton problem.
+func (ps *pumpSolve) linearStart(drv *Part) (complex128, error) {
+	m := ps.m
+	m.tc, m.runMode = ps.ta, modeLinear
+	p0, u0 := ps.start(0)
 	ya, err := m.run(p0, u0, nil)
 	if err != nil {
-		return nil, err
+		return 0, err
 	}
 	ra := m.residual(ya)
 	pe, ue := complex128(0), complex128(1) // unit free amplitude, no drive
-	if !usePressure {
+	if !ps.usePressure {
 		pe, ue = 1, 0
 	}
 	yb, err := m.run(pe, ue, nil)
 	if err != nil {
-		return nil, err
+		return 0, err
 	}
-	rb := m.residual(yb) // the residual is linear in the state at fixed temperatures
+	rb := m.residual(yb)
 	if rb == 0 {
-		return nil, errors.New("heat pump: the driver cannot excite the device (degenerate start)")
+		return 0, errors.New("heat pump: the driver cannot excite the device (degenerate start)")
 	}
 	free := -ra / rb
-	fs := math.Max(cmplx.Abs(free), 1e-30)
-	rs := drv.PressureAmplitude // residual scale, Pa
-	if !usePressure {
-		rs = fs // the free amplitude is the driver's pressure
+	ps.fs = math.Max(cmplx.Abs(free), 1e-30)
+	ps.rs = drv.PressureAmplitude // residual scale, Pa
+	if !ps.usePressure {
+		ps.rs = ps.fs // the free amplitude is the driver's pressure
 	}
 	m.runMode = modeHeatPump
-	load := in.CoolingLoad
-	newProblem := func(x0 []float64) *newtonProblem {
-		return &newtonProblem{
-			n: 3, x: x0, scale: []float64{fs, fs, ta},
-			lo: []float64{-1e3 * fs, -1e3 * fs, 0.05 * ta}, hi: []float64{1e3 * fs, 1e3 * fs, 3 * ta},
-			maxStep: []float64{10 * fs, 10 * fs, 0.1 * ta},
-			tol:     set.Tolerance, maxIter: 2 * set.MaxIterations,
-			f: func(x, r []float64) error {
-				m.tc = x[2]
-				p0, u0 := start(complex(x[0], x[1]))
-				if coldRight {
-					m.h2 = -load
-				} else {
-					m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + load
-				}
-				y, err := m.run(p0, u0, nil)
-				if err != nil {
-					return err
-				}
-				z := m.residual(y)
-				r[0], r[1], r[2] = real(z)/rs, imag(z)/rs, m.stackMis/ta
-				return nil
-			},
-		}
+	return free, nil
+}
+
+// problem is the Newton problem in (Re free, Im free, Tc) from x0.
+func (ps *pumpSolve) problem(x0 []float64) *newtonProblem {
+	fs, ta, m := ps.fs, ps.ta, ps.m
+	return &newtonProblem{
+		n: 3, x: x0, scale: []float64{fs, fs, ta},
+		lo: []float64{-1e3 * fs, -1e3 * fs, 0.05 * ta}, hi: []float64{1e3 * fs, 1e3 * fs, 3 * ta},
+		maxStep: []float64{10 * fs, 10 * fs, 0.1 * ta},
+		tol:     ps.set.Tolerance, maxIter: 2 * ps.set.MaxIterations,
+		f: func(x, r []float64) error {
+			m.tc = x[2]
+			p0, u0 := ps.start(complex(x[0], x[1]))
+			ps.setPower(p0, u0)
+			y, err := m.run(p0, u0, nil)
+			if err != nil {
+				return err
+			}
+			z := m.residual(y)
+			r[0], r[1], r[2] = real(z)/ps.rs, imag(z)/ps.rs, m.stackMis/ta
+			return nil
+		},
 	}
-	pb := newProblem([]float64{real(free), imag(free), ta})
+}
+
+// solve runs Newton from the linear start and, when that fails, by
+// continuation in the drive amplitude: from a tenth of it, where the
+// linear start is good, up to the full amplitude, each step starting from
+// the last answer scaled to the new amplitude.
+func (ps *pumpSolve) solve(free complex128) (x []float64, iters, evals int, err error) {
+	pb := ps.problem([]float64{real(free), imag(free), ps.ta})
 	err = pb.solve()
-	iters, evals := pb.iterations, pb.evaluations
+	iters, evals = pb.iterations, pb.evaluations
 	if err != nil {
-		// Continuation in the drive amplitude: from a tenth of it, where
-		// the linear start is good, up to the full amplitude, each step
-		// starting from the last answer scaled to the new amplitude.
-		x := []float64{0.1 * real(free), 0.1 * imag(free), ta}
+		x := []float64{0.1 * real(free), 0.1 * imag(free), ps.ta}
 		for k := 1; k <= 10; k++ {
-			ampScale = float64(k) / 10
-			pb = newProblem(x)
+			ps.ampScale = float64(k) / 10
+			pb = ps.problem(x)
 			err = pb.solve()
 			iters += pb.iterations
 			evals += pb.evaluations
@@ -194,36 +261,39 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 		}
 	}
 	if err != nil {
-		return nil, &ConvergenceError{Solve: "heat pump", Iterations: iters, Last: pb.x,
+		return nil, iters, evals, &ConvergenceError{Solve: "heat pump", Iterations: iters, Last: pb.x,
 			Names: []string{"real part of free amplitude", "imaginary part of free amplitude", "cold temperature (K)"}, Why: err.Error()}
 	}
-	res := &HeatPumpResult{Frequency: f, Iterations: iters, Evaluations: evals, CoolingLoad: load}
-	m.tc = pb.x[2]
-	p0, u0 = start(complex(pb.x[0], pb.x[1]))
-	if coldRight {
-		m.h2 = -load
-	} else {
-		m.h2 = 0.5*real(p0*cmplx.Conj(u0)) + load
-	}
+	return pb.x, iters, evals, nil
+}
+
+// finish integrates once more at the solution x and fills res: the cold
+// temperature, span, power, COP, the driver's amplitudes, the profile,
+// the short-stack estimate and the warnings.
+func (ps *pumpSolve) finish(res *HeatPumpResult, x []float64, dev *Device, f float64) error {
+	m := ps.m
+	m.tc = x[2]
+	p0, u0 := ps.start(complex(x[0], x[1]))
+	ps.setPower(p0, u0)
 	var prof *Profile
-	if !set.NoProfile {
+	if !ps.set.NoProfile {
 		prof = &res.Profile
 	}
 	if _, err := m.run(p0, u0, prof); err != nil {
-		return nil, err
+		return err
 	}
 	res.ColdTemperature = m.tc
-	res.TemperatureSpan = ta - m.tc
+	res.TemperatureSpan = ps.ta - m.tc
 	res.AcousticPower = 0.5 * real(p0*cmplx.Conj(u0))
 	res.DriverPressure, res.DriverFlow = cmplx.Abs(p0), cmplx.Abs(u0)
 	if res.AcousticPower > 0 {
-		res.COP = load / res.AcousticPower
+		res.COP = ps.load / res.AcousticPower
 	}
 	if res.TemperatureSpan > 0 {
 		res.CarnotCOP = m.tc / res.TemperatureSpan
 		res.COPRelative = res.COP / res.CarnotCOP
 	}
-	res.Warnings = m.warnings(f, ta)
+	res.Warnings = m.warnings(f, ps.ta)
 	last := dev.Parts[len(dev.Parts)-1].Kind
 	if ss, err := m.shortStack(f, res.TemperatureSpan, last == KindClosedEnd); err == nil {
 		if res.TemperatureSpan < 0 {
@@ -234,5 +304,5 @@ func HeatPump(dev *Device, hs *HeatPumpSettings) (*HeatPumpResult, error) {
 	if res.TemperatureSpan < 0 {
 		res.Warnings = append(res.Warnings, "the cold side ends up warmer than ambient: the stack pumps heat the other way at this frequency and position")
 	}
-	return res, nil
+	return nil
 }
