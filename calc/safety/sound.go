@@ -1,6 +1,7 @@
 package safety
 
 import (
+	"fmt"
 	"math"
 )
 
@@ -101,21 +102,76 @@ func AmplitudeOfSPL(L float64) float64 {
 	return math.Sqrt2 * ReferencePressure * math.Pow(10, L/20)
 }
 
+// OSHAMaxLevel is the highest sound level of OSHA 29 CFR 1910.95 Table
+// G-16, dBA: "¼ or less" hour at 115 dBA. The table permits no exposure
+// above it (a limit of 15 min per day at 115 dB is the usual reading, e.g.
+// "Exposure Guidelines", progressivegardening.com); Appendix A's Table
+// G-16a goes on to 130 dBA only to compute a dose from measured levels.
+const OSHAMaxLevel = 115.0
+
+// OSHAExposure is the OSHA 1910.95 permitted daily exposure at one level.
+type OSHAExposure struct {
+	Level     float64 // A-weighted level where the person stands, dBA
+	Permitted bool    // false above OSHAMaxLevel (and for a level that is not a number)
+	Hours     float64 // permitted hours per day; 0 when not permitted
+	Note      string  // plain words, e.g. "not permitted: 120 dBA is above 115 dBA, the highest level of OSHA 1910.95 Table G-16"
+}
+
+// OSHAPermitted returns the daily exposure OSHA 1910.95 permits at a
+// steady A-weighted level L (dBA):
+//
+//	T = 8 / 2^((L − 90)/5) hours   for L ≤ 115 dBA
+//	no permitted time              for L > 115 dBA
+//
+// Table G-16 of 29 CFR 1910.95(b): 90 dBA 8 h, 92 6, 95 4, 97 3, 100 2,
+// 102 1½, 105 1, 110 ½, 115 ¼ or less (as reproduced by CEJN, "OSHA
+// 1910.95(b)(1)"); the formula is that of Appendix A, which reproduces the
+// table's entries within its rounding. Above 115 dBA the result is "not
+// permitted" with Hours 0, never an extrapolation. Below 90 dBA the
+// formula's time is longer than a working day (the 85 dBA action level
+// still applies: see the Limits of Level).
+func OSHAPermitted(L float64) OSHAExposure {
+	e := OSHAExposure{Level: L}
+	switch {
+	case math.IsNaN(L):
+		e.Note = "not permitted: the level is not a number"
+	case L > OSHAMaxLevel:
+		e.Note = fmt.Sprintf("not permitted: %.1f dBA is above %g dBA, the highest level of OSHA 1910.95 Table G-16", L, OSHAMaxLevel)
+	default:
+		e.Permitted = true
+		e.Hours = ReferenceDurationHours(L)
+		e.Note = fmt.Sprintf("%.3g h per day at %.1f dBA (OSHA 1910.95 Table G-16)", e.Hours, L)
+	}
+	return e
+}
+
+// ReferenceDurationHours is the reference duration T of OSHA 1910.95
+// Appendix A, hours, used to add up a daily dose from measured levels:
+//
+//	T = 8 / 2^((L − 90)/5)
+//
+// It reproduces Appendix A's Table G-16a (osha.gov, "Appendix A to
+// § 1910.95 - Noise Exposure Computation"), 80 to 130 dBA. It is not a
+// permitted time above 115 dBA: use OSHAPermitted for that.
+func ReferenceDurationHours(L float64) float64 {
+	return 8 / math.Pow(2, (L-90)/5)
+}
+
 // PermittedHours returns the daily exposure time, hours, allowed at a
 // steady A-weighted level L (dB(A)) where a person stands:
 //
-//	OSHA 1910.95, Table G-16 and Appendix A:  T = 8 / 2^((L − 90)/5)
-//	EU 2003/10/EC, equal energy:               T = 8 × 10^((87 − L)/10)
+//	OSHA 1910.95, Table G-16:   T = 8 / 2^((L − 90)/5) up to 115 dBA,
+//	                            0 (not permitted) above (see OSHAPermitted)
+//	EU 2003/10/EC, equal energy: T = 8 × 10^((87 − L)/10)
 //
 // The EU value is the time that brings L_EX,8h to the 87 dB(A) exposure
 // limit value, which takes hearing protection into account; the upper
 // action value 85 dB(A) already requires protection to be worn. Sources:
-// 29 CFR 1910.95 Appendix A (formula T = 8/2^((L−90)/5)); Directive
-// 2003/10/EC Article 2 (L_EX,8h definition, from memory). The OSHA form
-// reproduces Table G-16a of 1910.95 Appendix A (osha.gov): 95 dB 4 h,
-// 100 dB 2 h, 115 dB 0.25 h, 87 dB 12.1 h.
+// 29 CFR 1910.95 Table G-16 and Appendix A (formula T = 8/2^((L−90)/5));
+// Directive 2003/10/EC Article 2 (L_EX,8h definition, from memory). An
+// osha of 0 means no permitted time: OSHAPermitted says so in words.
 func PermittedHours(L float64) (osha, eu float64) {
-	osha = 8 / math.Pow(2, (L-90)/5)
+	osha = OSHAPermitted(L).Hours
 	eu = 8 * math.Pow(10, (87-L)/10)
 	return osha, eu
 }

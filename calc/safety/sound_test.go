@@ -2,6 +2,7 @@ package safety
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -91,15 +92,52 @@ func TestPermittedHours(t *testing.T) {
 	// OSHA 1910.95 Appendix A, Table G-16a, reference durations T (hours)
 	// as printed (osha.gov, "Appendix A to § 1910.95 - Noise Exposure
 	// Computation"), to the digits printed: the formula must round to them.
+	// They are for adding up a dose, not permitted times.
 	table := []struct{ L, T, halfDigit float64 }{
 		{80, 32, 0.5}, {85, 16, 0.5}, {87, 12.1, 0.05}, {91, 7.0, 0.05},
 		{92, 6.1, 0.05}, {97, 3.0, 0.05}, {106, 0.87, 0.005},
 		{110, 0.5, 0.05}, {120, 0.125, 0.0005}, {130, 0.031, 0.0005},
 	}
 	for _, r := range table {
-		o, _ := PermittedHours(r.L)
-		if math.Abs(o-r.T) > r.halfDigit {
+		if o := ReferenceDurationHours(r.L); math.Abs(o-r.T) > r.halfDigit {
 			t.Errorf("OSHA %g dBA: %.4g h, Table G-16a prints %g h", r.L, o, r.T)
 		}
+	}
+	// Above 115 dBA PermittedHours gives no time for OSHA, and the EU
+	// time stays the equal-energy one.
+	for _, L := range []float64{115.01, 120, 130} {
+		o, e := PermittedHours(L)
+		if o != 0 {
+			t.Errorf("OSHA %g dBA: %g h permitted, want none", L, o)
+		}
+		near(t, "EU above 115", e, 8*math.Pow(10, (87-L)/10), 1e-12)
+	}
+}
+
+// OSHA 1910.95(b) Table G-16, permissible noise exposures: the printed
+// durations (as reproduced by CEJN, "OSHA 1910.95(b)(1)"), which the
+// formula reproduces within the table's rounding (2 %: 92 dBA is 6.06 h by
+// the formula, printed 6). Above 115 dBA ("¼ or less" is the last row) no
+// time is permitted: the 15 min at 115 dB of the usual reading
+// ("Exposure Guidelines", progressivegardening.com) is the last one.
+func TestOSHAPermitted(t *testing.T) {
+	t.Parallel()
+	table := []struct{ L, hours float64 }{
+		{90, 8}, {92, 6}, {95, 4}, {97, 3}, {100, 2}, {102, 1.5}, {105, 1}, {110, 0.5}, {115, 0.25},
+	}
+	for _, r := range table {
+		e := OSHAPermitted(r.L)
+		if !e.Permitted || math.Abs(e.Hours-r.hours) > 0.02*r.hours {
+			t.Errorf("%g dBA: %+v, Table G-16 prints %g h", r.L, e, r.hours)
+		}
+	}
+	for _, L := range []float64{115.05, 116, 120, 140, math.Inf(1), math.NaN()} {
+		e := OSHAPermitted(L)
+		if e.Permitted || e.Hours != 0 || !strings.Contains(e.Note, "not permitted") {
+			t.Errorf("%g dBA: %+v, want not permitted", L, e)
+		}
+	}
+	if e := OSHAPermitted(120); !strings.Contains(e.Note, "115 dBA") {
+		t.Errorf("120 dBA: note %q does not name the table's limit", e.Note)
 	}
 }
