@@ -35,6 +35,7 @@ const (
 	DimPerLength                              // 1/m (mesh counts: "200 /in", "8 per mm")
 	DimPerArea                                // 1/m² (cell densities: "400 cpsi", "400 /in²")
 	DimSoundLevel                             // dB re 20 µPa (dB)
+	DimTemperatureGradient                    // K/m (K/cm, K/mm): a mean-temperature gradient along a stack
 )
 
 // Typed SI quantities for package borders. Inside tight loops use float64.

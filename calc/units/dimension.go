@@ -43,6 +43,7 @@ var dims = [...]dimInfo{
 	DimPerLength:             {"count per length", "1/m", false, 1e9, "200 /in"},
 	DimPerArea:               {"count per area", "1/m²", false, 1e15, "400 cpsi"},
 	DimSoundLevel:            {"sound level", "dB", true, 300, "94 dB"},
+	DimTemperatureGradient:   {"temperature gradient", "K/m", true, 1e9, "500 K/m"},
 }
 
 func (d Dimension) valid() bool { return d >= 0 && int(d) < len(dims) }

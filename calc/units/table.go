@@ -207,4 +207,8 @@ var unitTable = []unitDef{
 
 	u(DimSoundLevel, "dB", "dB", 1, "dB SPL", "dBSPL"),
 	u(DimSoundLevel, "dBA", "dB(A)", 1, "dB(A)", "dB A"),
+
+	u(DimTemperatureGradient, "K/m", "K/m", 1, "K per m", "K per metre", "K per meter"),
+	u(DimTemperatureGradient, "K/cm", "K/cm", 1e2, "K per cm"),
+	u(DimTemperatureGradient, "K/mm", "K/mm", 1e3, "K per mm"),
 }
