@@ -312,35 +312,30 @@ func (d *Device) Length() float64 {
 
 func (pf *PartFile) validate(i int) (Part, error) {
 	p := Part{Kind: pf.Kind, Label: pf.Label}
-	fe := func(field, msg string) error { return &FieldError{Part: i, Kind: pf.Kind, Field: field, Msg: msg} }
-	used := map[string]bool{}
+	used, err := pf.validateKind(i, &p)
+	if err != nil {
+		return p, err
+	}
+	return p, pf.checkUnused(i, used)
+}
+
+// fieldError is a FieldError about field of this part (index i).
+func (pf *PartFile) fieldError(i int, field, msg string) error {
+	return &FieldError{Part: i, Kind: pf.Kind, Field: field, Msg: msg}
+}
+
+// validateKind reads the fields of pf's kind into p and returns the names
+// of the fields that apply to it.
+func (pf *PartFile) validateKind(i int, p *Part) (used map[string]bool, err error) {
+	used = map[string]bool{}
 	need := func(fields ...string) {
 		for _, f := range fields {
 			used[f] = true
 		}
 	}
-	var err error
-	length := func() {
-		if err != nil {
-			return
-		}
-		p.Length, err = positive(pf.Length, units.DimLength, "length", i, pf.Kind, 1e-6, 100)
-	}
-	diameter := func() {
-		if err != nil {
-			return
-		}
-		p.Diameter, err = positive(pf.Diameter, units.DimLength, "diameter", i, pf.Kind, 1e-5, 10)
-	}
-	temperature := func(def TempRef) {
-		if err != nil {
-			return
-		}
-		p.Temp, p.Temperature, err = tempRef(pf.Temperature, def, i, pf.Kind)
-	}
 	switch pf.Kind {
 	case "":
-		return p, fe("kind", fmt.Sprintf("is missing; use one of %s", strings.Join(Kinds, ", ")))
+		return used, pf.fieldError(i, "kind", fmt.Sprintf("is missing; use one of %s", strings.Join(Kinds, ", ")))
 	case KindClosedEnd:
 	case KindOpenEnd:
 		need("flange")
@@ -349,70 +344,100 @@ func (pf *PartFile) validate(i int) (Part, error) {
 		case "infinite":
 			p.Flanged = true
 		default:
-			return p, fe("flange", fmt.Sprintf("= %q must be \"none\" or \"infinite\"", pf.Flange))
+			return used, pf.fieldError(i, "flange", fmt.Sprintf("= %q must be \"none\" or \"infinite\"", pf.Flange))
 		}
 	case KindTube:
 		need("length", "diameter", "temperature")
-		length()
-		diameter()
-		temperature(TempAmbient)
+		err = pf.validateDuct(i, p)
+		if err == nil {
+			p.Temp, p.Temperature, err = tempRef(pf.Temperature, TempAmbient, i, pf.Kind)
+		}
 	case KindStack, KindExchanger:
 		need("length", "diameter", "porosity", "pores")
-		length()
-		diameter()
 		if pf.Kind == KindExchanger {
 			need("temperature")
-			if err == nil && pf.Temperature == "" {
-				err = fe("temperature", "is missing: an exchanger is held at \"ambient\", \"hot\", \"cold\" or a value")
-			}
-			temperature(TempAmbient)
 		}
-		if err != nil {
-			return p, err
-		}
-		if pf.Porosity == "" {
-			return p, fe("porosity", "is missing (the open fraction of the cross-section, e.g. \"0.7\")")
-		}
-		if p.Porosity, err = quantity(pf.Porosity, units.DimNone, "porosity", i, pf.Kind); err != nil {
-			return p, err
-		}
-		if !(p.Porosity > 0 && p.Porosity <= 1) {
-			return p, fe("porosity", fmt.Sprintf("= %s must be in (0, 1]", pf.Porosity))
-		}
-		if pf.Pores == nil {
-			return p, fe("pores", fmt.Sprintf("is missing (e.g. {\"shape\": \"plates\", \"half_gap\": \"0.3 mm\"}; shapes: %s)", strings.Join(PoreShapes, ", ")))
-		}
-		if p.Pores, err = pf.Pores.validate(i, pf.Kind); err != nil {
-			return p, err
-		}
+		err = pf.validatePorous(i, p)
 	case KindCavity:
 		need("volume", "temperature")
 		if p.Volume, err = positive(pf.Volume, units.DimVolume, "volume", i, pf.Kind, 1e-12, 100); err != nil {
-			return p, err
+			return used, err
 		}
-		temperature(TempAmbient)
+		p.Temp, p.Temperature, err = tempRef(pf.Temperature, TempAmbient, i, pf.Kind)
 	case KindDriver:
 		need("pressure_amplitude", "volume_velocity_amplitude", "frequency", "diameter")
-		switch {
-		case pf.PressureAmplitude != "" && pf.VolumeVelocityAmplitude != "":
-			return p, fe("pressure_amplitude", "and \"volume_velocity_amplitude\" are both given; give one")
-		case pf.PressureAmplitude != "":
-			p.PressureAmplitude, err = positive(pf.PressureAmplitude, units.DimPressure, "pressure_amplitude", i, pf.Kind, 1e-6, 10e6)
-		case pf.VolumeVelocityAmplitude != "":
-			p.VolumeVelocityAmplitude, err = positive(pf.VolumeVelocityAmplitude, units.DimVolumeFlow, "volume_velocity_amplitude", i, pf.Kind, 1e-15, 10)
-		default:
-			return p, fe("pressure_amplitude", "is missing: a driver needs \"pressure_amplitude\" or \"volume_velocity_amplitude\"")
-		}
-		if err == nil && pf.Frequency != "" {
-			p.Frequency, err = positive(pf.Frequency, units.DimFrequency, "frequency", i, pf.Kind, 0.1, 1e6)
-		}
+		err = pf.validateDriver(i, p)
 	default:
-		return p, fe("kind", fmt.Sprintf("= %q is not a part kind; use one of %s", pf.Kind, strings.Join(Kinds, ", ")))
+		return used, pf.fieldError(i, "kind", fmt.Sprintf("= %q is not a part kind; use one of %s", pf.Kind, strings.Join(Kinds, ", ")))
+	}
+	return used, err
+}
+
+// validateDuct reads the length and diameter of a tube, stack or
+// exchanger.
+func (pf *PartFile) validateDuct(i int, p *Part) error {
+	var err error
+	if p.Length, err = positive(pf.Length, units.DimLength, "length", i, pf.Kind, 1e-6, 100); err != nil {
+		return err
+	}
+	p.Diameter, err = positive(pf.Diameter, units.DimLength, "diameter", i, pf.Kind, 1e-5, 10)
+	return err
+}
+
+// validatePorous reads a stack or exchanger: its duct, an exchanger's
+// temperature, the porosity and the pores.
+func (pf *PartFile) validatePorous(i int, p *Part) error {
+	err := pf.validateDuct(i, p)
+	if pf.Kind == KindExchanger {
+		if err == nil && pf.Temperature == "" {
+			err = pf.fieldError(i, "temperature", "is missing: an exchanger is held at \"ambient\", \"hot\", \"cold\" or a value")
+		}
+		if err == nil {
+			p.Temp, p.Temperature, err = tempRef(pf.Temperature, TempAmbient, i, pf.Kind)
+		}
 	}
 	if err != nil {
-		return p, err
+		return err
 	}
-	// Fields that do not apply to this kind are an error, not ignored.
+	if pf.Porosity == "" {
+		return pf.fieldError(i, "porosity", "is missing (the open fraction of the cross-section, e.g. \"0.7\")")
+	}
+	if p.Porosity, err = quantity(pf.Porosity, units.DimNone, "porosity", i, pf.Kind); err != nil {
+		return err
+	}
+	if !(p.Porosity > 0 && p.Porosity <= 1) {
+		return pf.fieldError(i, "porosity", fmt.Sprintf("= %s must be in (0, 1]", pf.Porosity))
+	}
+	if pf.Pores == nil {
+		return pf.fieldError(i, "pores", fmt.Sprintf("is missing (e.g. {\"shape\": \"plates\", \"half_gap\": \"0.3 mm\"}; shapes: %s)", strings.Join(PoreShapes, ", ")))
+	}
+	p.Pores, err = pf.Pores.validate(i, pf.Kind)
+	return err
+}
+
+// validateDriver reads a driver: exactly one amplitude, and the frequency
+// when given.
+func (pf *PartFile) validateDriver(i int, p *Part) error {
+	var err error
+	switch {
+	case pf.PressureAmplitude != "" && pf.VolumeVelocityAmplitude != "":
+		return pf.fieldError(i, "pressure_amplitude", "and \"volume_velocity_amplitude\" are both given; give one")
+	case pf.PressureAmplitude != "":
+		p.PressureAmplitude, err = positive(pf.PressureAmplitude, units.DimPressure, "pressure_amplitude", i, pf.Kind, 1e-6, 10e6)
+	case pf.VolumeVelocityAmplitude != "":
+		p.VolumeVelocityAmplitude, err = positive(pf.VolumeVelocityAmplitude, units.DimVolumeFlow, "volume_velocity_amplitude", i, pf.Kind, 1e-15, 10)
+	default:
+		return pf.fieldError(i, "pressure_amplitude", "is missing: a driver needs \"pressure_amplitude\" or \"volume_velocity_amplitude\"")
+	}
+	if err == nil && pf.Frequency != "" {
+		p.Frequency, err = positive(pf.Frequency, units.DimFrequency, "frequency", i, pf.Kind, 0.1, 1e6)
+	}
+	return err
+}
+
+// checkUnused refuses fields that do not apply to the part's kind (used
+// names those that do), rather than ignoring them.
+func (pf *PartFile) checkUnused(i int, used map[string]bool) error {
 	for _, kv := range []struct{ key, val string }{
 		{"length", pf.Length}, {"diameter", pf.Diameter}, {"temperature", pf.Temperature},
 		{"porosity", pf.Porosity}, {"flange", pf.Flange}, {"volume", pf.Volume},
@@ -420,13 +445,13 @@ func (pf *PartFile) validate(i int) (Part, error) {
 		{"frequency", pf.Frequency},
 	} {
 		if kv.val != "" && !used[kv.key] {
-			return p, fe(kv.key, fmt.Sprintf("does not apply to a %s", pf.Kind))
+			return pf.fieldError(i, kv.key, fmt.Sprintf("does not apply to a %s", pf.Kind))
 		}
 	}
 	if pf.Pores != nil && !used["pores"] {
-		return p, fe("pores", fmt.Sprintf("does not apply to a %s", pf.Kind))
+		return pf.fieldError(i, "pores", fmt.Sprintf("does not apply to a %s", pf.Kind))
 	}
-	return p, nil
+	return nil
 }
 
 func (pf *PoresFile) validate(i int, kind string) (Pores, error) {
