@@ -1,8 +1,10 @@
 package safety
 
 import (
+	"errors"
 	"fmt"
 	"math"
+	"strconv"
 
 	"tubewright/calc/units"
 )
@@ -77,8 +79,13 @@ type Shell struct {
 	ClauseMAWPCircum  string
 	ClauseMAWPLong    string
 	WallEnough        bool // Wall ≥ MinThickness
-	Warnings          []string
-	Cautions          []string
+	// NoWall is true when no wall thickness can hold Pressure at the
+	// allowable stress (Pressure ≥ S·E; ASMEShell then also returns an
+	// error matching ErrNoWall). The thickness fields are then zero and
+	// mean nothing; the MAWP of a given wall is still computed.
+	NoWall   bool
+	Warnings []string
+	Cautions []string
 }
 
 // Clause names used in Shell.
@@ -130,6 +137,17 @@ const (
 // vs pipe tolerance calculations for shell thickness",
 // industrialmonitordirect.com).
 //
+// No wall at all: when P ≥ S E no thickness keeps the hoop stress within
+// the allowable stress. By Lamé's solution the hoop stress at the bore,
+// P (ro² + ri²)/(ro² − ri²), exceeds P for every finite wall (see
+// ThickWallStress), and the earlier editions' 1-2(a)(1) formula
+// t = R(√Z − 1), Z = (S E + P)/(S E − P), has no solution there; the
+// logarithmic form would return an ever thicker wall (1.3e42 m for
+// P = 100 S E and R = 50 mm). ASMEShell then returns a *NoWallError
+// (matching ErrNoWall) together with a Shell whose NoWall is set, whose
+// thickness fields are zero and whose MAWP fields are those of the given
+// wall, if any.
+//
 // Errors: P < 0, R ≤ 0, S ≤ 0, E outside (0, 1], c < 0 and wall ≤ c (when
 // a wall is given) are *units.RangeError. Wall = 0 means "no wall given": the MAWP
 // fields are then zero.
@@ -169,9 +187,16 @@ func ASMEShell(in ShellInput) (Shell, error) {
 	s := Shell{Family: FamilyASME, Cautions: cautions(CautionStress)}
 
 	// Required thickness.
-	s.ThicknessCircum, s.ClauseThickCircum = thicknessCircum(P, R, SE)
-	s.ThicknessLong, s.ClauseThickLong = thicknessLong(P, R, SE)
-	s.MinThickness = math.Max(s.ThicknessCircum, s.ThicknessLong) + in.Corrosion
+	var noWall error
+	if P >= SE {
+		s.NoWall = true
+		noWall = &NoWallError{Pressure: in.Pressure, Stress: SE}
+		s.Warnings = append(s.Warnings, noWall.Error())
+	} else {
+		s.ThicknessCircum, s.ClauseThickCircum = thicknessCircum(P, R, SE)
+		s.ThicknessLong, s.ClauseThickLong = thicknessLong(P, R, SE)
+		s.MinThickness = math.Max(s.ThicknessCircum, s.ThicknessLong) + in.Corrosion
+	}
 
 	// MAWP of the given wall.
 	if in.Wall > 0 {
@@ -181,17 +206,44 @@ func ASMEShell(in ShellInput) (Shell, error) {
 		s.MAWPCircum, s.ClauseMAWPCircum = GaugePressure(pc), cc
 		s.MAWPLong, s.ClauseMAWPLong = GaugePressure(pl), cl
 		s.MAWP = GaugePressure(math.Min(pc, pl))
-		s.WallEnough = in.Wall >= s.MinThickness
+		s.WallEnough = !s.NoWall && in.Wall >= s.MinThickness
 		s.Warnings = append(s.Warnings, "the MAWP is for the wall as entered: enter the thinnest wall, not the nominal one; pipe ordered by nominal wall may be 12.5 % thinner (UG-16(d))")
-		if !s.WallEnough {
+		if !s.WallEnough && !s.NoWall {
 			s.Warnings = append(s.Warnings, fmt.Sprintf("the wall is thinner than the required %.4g m", s.MinThickness))
 		}
 	}
 	if s.ClauseThickCircum == Clause1_2a1 || s.ClauseMAWPCircum == Clause1_2a1 {
 		s.Warnings = append(s.Warnings, "thick shell: the Appendix 1-2 formulas were used, outside the UG-27 limits (t ≤ R/2, P ≤ 0.385 S E)")
 	}
-	return s, nil
+	return s, noWall
 }
+
+// ErrNoWall is matched (errors.Is) by the *NoWallError of ASMEShell.
+var ErrNoWall = errors.New("no wall thickness can hold this pressure at this allowable stress")
+
+// NoWallError says that no wall of any thickness holds the pressure at the
+// allowable stress: the pressure is at or above S·E (see ASMEShell).
+type NoWallError struct {
+	Pressure GaugePressure // the design pressure, Pa gauge
+	Stress   float64       // S·E, Pa
+}
+
+// Error names both values and what would help.
+func (e *NoWallError) Error() string {
+	return fmt.Sprintf("no wall can hold %s (gauge) at an allowable stress of %s (S·E): the pressure must be below S·E whatever the thickness; choose a stronger material, lower the pressure or have the vessel designed by a qualified engineer",
+		formatIn(float64(e.Pressure), "bar"), formatIn(e.Stress, "MPa"))
+}
+
+// formatIn formats v (SI) in unit, falling back to the SI form.
+func formatIn(v float64, unit string) string {
+	if s, err := units.FormatIn(v, unit); err == nil {
+		return s
+	}
+	return strconv.FormatFloat(v, 'g', 4, 64) + " Pa"
+}
+
+// Is lets errors.Is(err, ErrNoWall) match.
+func (e *NoWallError) Is(target error) bool { return target == ErrNoWall }
 
 // thicknessCircum is UG-27(c)(1), or 1-2(a)(1) beyond its limits.
 func thicknessCircum(P, R, SE float64) (float64, string) {

@@ -1,6 +1,7 @@
 package safety
 
 import (
+	"errors"
 	"math"
 	"strings"
 	"testing"
@@ -112,7 +113,7 @@ func TestASMEShellRoundTrip(t *testing.T) {
 	// the round trip must only never exceed P.
 	const S, R = 120e6, 0.04
 	for _, E := range []float64{1, 0.85, 0.7} {
-		for _, frac := range []float64{0.001, 0.05, 0.2, 0.38, 0.39, 0.4, 0.5, 0.6, 1.0, 1.5} {
+		for _, frac := range []float64{0.001, 0.05, 0.2, 0.38, 0.39, 0.4, 0.5, 0.6, 0.9, 0.99} {
 			P := frac * S * E
 			s, err := ASMEShell(ShellInput{Pressure: GaugePressure(P), InnerRadius: R, Allowable: S, JointEfficiency: E})
 			if err != nil {
@@ -141,7 +142,7 @@ func TestASMEShellMonotonic(t *testing.T) {
 	t.Parallel()
 	// Property: required thickness rises with pressure and falls with S·E.
 	prev := 0.0
-	for P := 0.5e6; P < 200e6; P *= 1.3 {
+	for P := 0.5e6; P < 138e6; P *= 1.3 {
 		s, err := ASMEShell(ShellInput{Pressure: GaugePressure(P), InnerRadius: 0.05, Allowable: 138e6, JointEfficiency: 1})
 		if err != nil {
 			t.Fatal(err)
@@ -156,6 +157,49 @@ func TestASMEShellMonotonic(t *testing.T) {
 	if b.MinThickness <= a.MinThickness {
 		t.Errorf("E = 0.7 gives %g, not thicker than E = 1 (%g)", b.MinThickness, a.MinThickness)
 	}
+}
+
+// A hopeless wall: at or above P = S·E no thickness holds the pressure
+// (Lamé: the bore hoop stress P(ro²+ri²)/(ro²−ri²) exceeds P for every
+// wall, Timoshenko & Goodier, Theory of Elasticity, 3rd ed. 1970, §28,
+// section from memory; the earlier 1-2(a)(1) formula's Z = (SE+P)/(SE−P)
+// has no value there). Issue 12's 1.3e42 m is R(e^100 − 1) for R = 50 mm
+// and P = 100 S E. Just below S·E the Appendix 1-2 thickness
+// R(e^(P/SE) − 1) is still returned (hand calculation: 0.99 → 1.6912 R).
+func TestASMEShellNoWall(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct {
+		name string
+		P    float64
+	}{{"at S·E", 138e6}, {"1.5 S·E", 207e6}, {"issue's 1.3e42 m", 100 * 138e6}} {
+		s, err := ASMEShell(ShellInput{Pressure: GaugePressure(c.P), InnerRadius: 0.05, Wall: 0.02, Allowable: 138e6, JointEfficiency: 1})
+		if !errors.Is(err, ErrNoWall) {
+			t.Fatalf("%s: error %v, want ErrNoWall", c.name, err)
+		}
+		var nw *NoWallError
+		if !errors.As(err, &nw) || nw.Stress != 138e6 || float64(nw.Pressure) != c.P {
+			t.Errorf("%s: %#v", c.name, err)
+		}
+		if msg := err.Error(); !strings.Contains(msg, "138 MPa") || !strings.Contains(msg, "no wall") {
+			t.Errorf("%s: message %q does not name S·E", c.name, msg)
+		}
+		if !s.NoWall || s.MinThickness != 0 || s.ThicknessCircum != 0 || s.WallEnough {
+			t.Errorf("%s: %+v", c.name, s)
+		}
+		// the given wall's MAWP is still there, and below the pressure:
+		// UG-27(c)(1) for t = 20 mm ≤ R/2, SE t/(R + 0.6 t) = 44.516 MPa
+		// (hand calculation)
+		want := 138e6 * 0.02 / (0.05 + 0.6*0.02)
+		if !(float64(s.MAWP) > 0 && float64(s.MAWP) < c.P) || math.Abs(float64(s.MAWP)-want) > 1e-6*want {
+			t.Errorf("%s: MAWP %g Pa, want %g Pa", c.name, float64(s.MAWP), want)
+		}
+		wantGeneralCaution(t, s.Cautions)
+	}
+	s, err := ASMEShell(ShellInput{Pressure: 0.99 * 138e6, InnerRadius: 0.05, Allowable: 138e6, JointEfficiency: 1})
+	if err != nil || s.NoWall {
+		t.Fatalf("0.99 S·E: %v, %+v", err, s)
+	}
+	near(t, "0.99 S·E thickness", s.MinThickness, 0.05*math.Expm1(0.99), 1e-12)
 }
 
 func TestASMEShellErrors(t *testing.T) {
