@@ -2,6 +2,7 @@ package ui
 
 import (
 	"image"
+	"tubewright/calc/sheet"
 
 	"gioui.org/font"
 	"gioui.org/io/key"
@@ -34,8 +35,8 @@ const readable = unit.Dp(760)
 // screens and the top bar. Make one with NewApp and call Layout every frame.
 type App struct {
 	env     *Env
-	screens map[string]Screen
-	stack   []string
+	screens map[sheet.ID]Screen
+	stack   []sheet.ID
 	entries []widget.Clickable
 	list    widget.List
 	back    widget.Clickable
@@ -47,7 +48,7 @@ type App struct {
 func NewApp(invalidate func()) *App {
 	a := &App{
 		env:     NewEnv(invalidate),
-		screens: make(map[string]Screen),
+		screens: make(map[sheet.ID]Screen),
 		entries: make([]widget.Clickable, len(catalog)),
 	}
 	a.list.Axis = layout.Vertical
@@ -61,7 +62,7 @@ func (a *App) Env() *Env { return a.env }
 
 // Current returns the catalog ID of the screen on top, or "" when the
 // catalog itself is showing.
-func (a *App) Current() string {
+func (a *App) Current() sheet.ID {
 	if len(a.stack) == 0 {
 		return ""
 	}
@@ -73,7 +74,7 @@ func (a *App) Depth() int { return len(a.stack) }
 
 // Screen returns the screen with the catalog ID id, building it on first
 // use, or nil for an unknown ID.
-func (a *App) Screen(id string) Screen {
+func (a *App) Screen(id sheet.ID) Screen {
 	if s, ok := a.screens[id]; ok {
 		return s
 	}
@@ -88,7 +89,7 @@ func (a *App) Screen(id string) Screen {
 
 // Open pushes the screen with catalog ID id on the back stack. Unknown IDs
 // and the screen already on top are ignored.
-func (a *App) Open(id string) {
+func (a *App) Open(id sheet.ID) {
 	if id == a.Current() || a.Screen(id) == nil {
 		return
 	}
@@ -99,7 +100,7 @@ func (a *App) Open(id string) {
 }
 
 // openRoot shows id as the only screen on the stack (a tap in the catalog).
-func (a *App) openRoot(id string) {
+func (a *App) openRoot(id sheet.ID) {
 	if len(a.stack) == 1 && a.stack[0] == id {
 		return
 	}

@@ -7,6 +7,8 @@ import (
 	"testing"
 
 	"gioui.org/io/key"
+
+	"tubewright/calc/sheet"
 )
 
 // TestAppNavigation opens a screen from the catalog by tapping it, goes
@@ -94,10 +96,10 @@ func TestAppBackStack(t *testing.T) {
 // file names, titles and summaries present, constructors that build a
 // screen whose title matches the catalog's.
 func TestCatalogTable(t *testing.T) {
-	seen := map[string]bool{}
+	seen := map[sheet.ID]bool{}
 	env := NewEnv(nil)
 	for _, e := range Catalog() {
-		if e.ID == "" || strings.ContainsAny(e.ID, " /\\.") || seen[e.ID] {
+		if e.ID == "" || strings.ContainsAny(string(e.ID), " /\\.") || seen[e.ID] {
 			t.Errorf("bad or duplicate ID %q", e.ID)
 		}
 		seen[e.ID] = true

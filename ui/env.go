@@ -7,6 +7,7 @@ import (
 
 	"gioui.org/widget/material"
 
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
@@ -27,7 +28,7 @@ type Env struct {
 	// frequency from one screen to the next.
 	Bench *Bench
 
-	open   func(id string)
+	open   func(id sheet.ID)
 	notify atomic.Pointer[func()]
 	book   *benchBook // the bench log of the safety screens; see bookFor
 
@@ -37,7 +38,7 @@ type Env struct {
 // Open does nothing until an App owns the Env.
 func NewEnv(invalidate func()) *Env {
 	th, c := NewTheme()
-	e := &Env{Theme: th, Colors: c, Bench: new(Bench), open: func(string) {}}
+	e := &Env{Theme: th, Colors: c, Bench: new(Bench), open: func(sheet.ID) {}}
 	e.setInvalidate(invalidate)
 	// Widgets may keep the func value; it always calls the current target.
 	e.Invalidate = func() {
@@ -59,7 +60,7 @@ func (e *Env) setInvalidate(f func()) {
 
 // Open shows the screen with the catalog ID id on top of the current one
 // (Back returns). Unknown IDs are ignored.
-func (e *Env) Open(id string) { e.open(id) }
+func (e *Env) Open(id sheet.ID) { e.open(id) }
 
 // Bench is the small carry-over between screens: what the user last used,
 // so that, say, the penetration-depth screen can take the resonator's

@@ -14,6 +14,7 @@ import (
 	"gioui.org/widget"
 	"gioui.org/widget/material"
 
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
@@ -36,6 +37,10 @@ type Field struct {
 	// Hint is the line under the field when the input is good, e.g.
 	// "K, degC or degF". Empty means a hint for Dim.
 	Hint string
+	// In, when set, is the calculator input the field edits: the text is
+	// then read by sheet.ParseInput (the same parser as the terminal's),
+	// with its ± rule and range.
+	In *sheet.Input
 
 	env      *Env
 	editor   widget.Editor
@@ -156,7 +161,18 @@ func (f *Field) fresh() {
 func (f *Field) parse() {
 	f.parsedAs.dim, f.parsedAs.opt = f.Dim, f.Options
 	txt := f.editor.Text()
-	q, err := units.ParseWith(txt, f.Dim, f.Options)
+	var q units.Quantity
+	var err error
+	if f.In != nil {
+		var v sheet.Value
+		v, err = sheet.ParseInput(f.In, txt)
+		if fe, ok := sheet.AsFieldError(err); ok {
+			err = fe.Err
+		}
+		q = v.Q
+	} else {
+		q, err = units.ParseWith(txt, f.Dim, f.Options)
+	}
 	if err != nil {
 		f.err = &FieldError{Field: f.Label, Text: txt, Err: err}
 		return

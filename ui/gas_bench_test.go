@@ -20,7 +20,7 @@ func BenchmarkGasScreenFrame(b *testing.B) {
 		recompute bool
 	}{{"idle", false}, {"recompute", true}} {
 		b.Run(tc.name, func(b *testing.B) {
-			s := newGasScreen(NewEnv(nil)).(*gasScreen)
+			s := newGasScreen(NewEnv(nil)).(*sheetScreen)
 			var r input.Router
 			var ops op.Ops
 			gtx := layout.Context{
@@ -33,7 +33,9 @@ func BenchmarkGasScreenFrame(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {
 				ops.Reset()
-				s.dirty = tc.recompute
+				if tc.recompute {
+					s.form.Invalidate()
+				}
 				s.Layout(gtx)
 				r.Frame(&ops)
 			}

@@ -7,6 +7,7 @@ import (
 
 	"gioui.org/layout"
 
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
@@ -32,6 +33,12 @@ func wantGas(t *testing.T, gas string, T, p float64, pick func(gasprops.Properti
 
 func soundSpeed(p gasprops.Properties) float64 { return p.SoundSpeed }
 
+// newGasScreen builds the working-gas screen from its description.
+func newGasScreen(env *Env) Screen {
+	s, _ := sheet.Lookup(sheet.IDGas)
+	return newSheetScreen(s)(env)
+}
+
 // TestGasScreenTyping drives the working-gas screen through the input
 // router: it types a temperature, checks the shown sound speed against
 // gasprops directly, then types a bad value and checks the error under the
@@ -43,9 +50,10 @@ func TestGasScreenTyping(t *testing.T) {
 	s := newGasScreen(env)
 	h := newHarness(t, image.Pt(412, 1600), s.Layout)
 
-	// 300 K and 1 bar = 1e5 Pa are the screen's starting values.
+	// 300 K and 1 atm = 101325 Pa are the screen's starting values (the
+	// description's example and default).
 	got, ok := h.shown("Sound speed")
-	if want := wantGas(t, "helium", 300, 1e5, soundSpeed, "m/s"); !ok || got != want {
+	if want := wantGas(t, "helium", 300, 101325, soundSpeed, "m/s"); !ok || got != want {
 		t.Fatalf("initial sound speed shown %q (found %v), want %q", got, ok, want)
 	}
 	before := got
@@ -53,7 +61,7 @@ func TestGasScreenTyping(t *testing.T) {
 	// 327 degC = 600.15 K (ITS-90 offset 273.15, BIPM SI Brochure 2019, 2.3.1).
 	h.retype("Temperature", "300 K", "327 degC")
 	got, _ = h.shown("Sound speed")
-	if want := wantGas(t, "helium", 600.15, 1e5, soundSpeed, "m/s"); got != want {
+	if want := wantGas(t, "helium", 600.15, 101325, soundSpeed, "m/s"); got != want {
 		t.Fatalf("sound speed at 327 degC shown %q, want %q", got, want)
 	}
 	if got == before {
@@ -78,7 +86,7 @@ func TestGasScreenTyping(t *testing.T) {
 	// speed unchanged; density follows p. 145.0377 psi = 1e6 Pa (NIST SP
 	// 811, 2008, B.8: 1 psi = 6894.757 Pa).
 	h.retype("Temperature", "327 degQ", "300 K")
-	h.retype("Mean pressure", "1 bar", "145.0377 psi")
+	h.retype("Mean pressure", "1 atm", "145.0377 psi")
 	got, _ = h.shown("Density")
 	want := wantGas(t, "helium", 300, 145.0377*6894.757, func(p gasprops.Properties) float64 { return p.Density }, "kg/m3")
 	if got != want {
@@ -97,7 +105,7 @@ func TestGasScreenMixture(t *testing.T) {
 	// The picker starts a mixture at helium + 0.3 argon.
 	h.retype("Mole fraction of the second gas", "0.3", "40 %")
 	got, _ := h.shown("Molar mass")
-	want := wantGas(t, "helium:0.6,argon:0.4", 300, 1e5, func(p gasprops.Properties) float64 { return p.MolarMass }, "g/mol")
+	want := wantGas(t, "helium:0.6,argon:0.4", 300, 101325, func(p gasprops.Properties) float64 { return p.MolarMass }, "g/mol")
 	if got != want {
 		t.Fatalf("molar mass of He 60 %% + Ar 40 %% shown %q, want %q", got, want)
 	}
@@ -119,7 +127,7 @@ func TestGasScreenTakesBench(t *testing.T) {
 	a.Open("gas")
 	h := newHarness(t, image.Pt(412, 1600), func(gtx layout.Context) layout.Dimensions { return a.Layout(gtx) })
 	got, _ := h.shown("Sound speed")
-	if want := wantGas(t, "xenon", 350, 1e5, soundSpeed, "m/s"); got != want {
+	if want := wantGas(t, "xenon", 350, 101325, soundSpeed, "m/s"); got != want {
 		t.Fatalf("sound speed shown %q, want xenon at 350 K: %q", got, want)
 	}
 }
@@ -128,18 +136,14 @@ func TestGasScreenTakesBench(t *testing.T) {
 // mixture, and with a bad pressure, for looking at the error styling.
 func TestScreenshotGasStates(t *testing.T) {
 	env := NewEnv(nil)
-	s := newGasScreen(env).(*gasScreen)
-	if err := s.picker.SetText("helium:0.7,xenon:0.3"); err != nil {
-		t.Fatal(err)
-	}
-	s.press.SetText("10 bar")
-	s.dirty = true
+	s := newGasScreen(env).(*sheetScreen)
+	s.form.SetText("gas", "helium:0.7,xenon:0.3")
+	s.form.SetText("pressure", "10 bar")
 	shoot(t, "gas-mixture", env, s)
 
 	env = NewEnv(nil)
-	s = newGasScreen(env).(*gasScreen)
-	s.press.SetText("10 bra")
-	s.dirty = true
+	s = newGasScreen(env).(*sheetScreen)
+	s.form.SetText("pressure", "10 bra")
 	shoot(t, "gas-error", env, s)
 }
 

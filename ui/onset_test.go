@@ -8,6 +8,7 @@ import (
 	"time"
 
 	"tubewright/calc/linear"
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
@@ -226,8 +227,8 @@ func TestScreenshotOnsetSolved(t *testing.T) {
 				a := NewApp(nil)
 				a.env = env
 				env.open = a.Open
-				a.screens[id] = s
-				a.stack = []string{id}
+				a.screens[sheet.ID(id)] = s
+				a.stack = []sheet.ID{sheet.ID(id)}
 				shootApp(t, id+"-solved-"+sz.name, sz.size, a)
 			})
 		}

@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"tubewright/calc/resonator"
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
@@ -21,7 +22,7 @@ func TestScreenshotResonanceTall(t *testing.T) {
 	}
 	for _, id := range []string{"resonance", "diagnose"} {
 		a := NewApp(nil)
-		a.Open(id)
+		a.Open(sheet.ID(id))
 		shootApp(t, id+"-tallphone", image.Pt(412, 2900), a)
 	}
 }

@@ -10,6 +10,7 @@ import (
 	"gioui.org/unit"
 	"gioui.org/widget/material"
 
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
@@ -26,6 +27,7 @@ type Results struct {
 
 type resultRow struct {
 	label, value, note string
+	outcome            sheet.Outcome // set when the row is a check
 }
 
 // NewResults returns an empty results card.
@@ -47,7 +49,7 @@ const notDefined = "no finite value for these inputs"
 // Add appends a row with v (SI) formatted in the SI unit of dim.
 func (r *Results) Add(label string, v float64, dim units.Dimension) {
 	if !finite(v) {
-		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		r.rows = append(r.rows, resultRow{label: label, value: "—", note: notDefined})
 		return
 	}
 	r.rows = append(r.rows, resultRow{label: label, value: units.Format(v, dim)})
@@ -57,12 +59,12 @@ func (r *Results) Add(label string, v float64, dim units.Dimension) {
 // "mm".
 func (r *Results) AddIn(label string, v float64, unit string) {
 	if !finite(v) {
-		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		r.rows = append(r.rows, resultRow{label: label, value: "—", note: notDefined})
 		return
 	}
 	s, err := units.FormatIn(v, unit)
 	if err != nil {
-		r.rows = append(r.rows, resultRow{label, "—", err.Error()})
+		r.rows = append(r.rows, resultRow{label: label, value: "—", note: err.Error()})
 		return
 	}
 	r.rows = append(r.rows, resultRow{label: label, value: s})
@@ -73,9 +75,9 @@ func (r *Results) AddIn(label string, v float64, unit string) {
 func (r *Results) AddPM(label string, v, u float64, dim units.Dimension) {
 	switch {
 	case !finite(v):
-		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		r.rows = append(r.rows, resultRow{label: label, value: "—", note: notDefined})
 	case !finite(u):
-		r.rows = append(r.rows, resultRow{label, units.Format(v, dim), "uncertainty not available"})
+		r.rows = append(r.rows, resultRow{label: label, value: units.Format(v, dim), note: "uncertainty not available"})
 	default:
 		r.rows = append(r.rows, resultRow{label: label, value: units.FormatPM(v, u, dim)})
 	}
@@ -84,7 +86,7 @@ func (r *Results) AddPM(label string, v, u float64, dim units.Dimension) {
 // AddPMIn is AddPM shown in the chosen unit of dimension dim, e.g. "ms".
 func (r *Results) AddPMIn(label string, v, u float64, dim units.Dimension, unit string) {
 	if !finite(v) {
-		r.rows = append(r.rows, resultRow{label, "—", notDefined})
+		r.rows = append(r.rows, resultRow{label: label, value: "—", note: notDefined})
 		return
 	}
 	note := ""
@@ -93,7 +95,7 @@ func (r *Results) AddPMIn(label string, v, u float64, dim units.Dimension, unit 
 	}
 	s, err := units.FormatPMIn(v, u, dim, unit)
 	if err != nil {
-		r.rows = append(r.rows, resultRow{label, "—", err.Error()})
+		r.rows = append(r.rows, resultRow{label: label, value: "—", note: err.Error()})
 		return
 	}
 	r.rows = append(r.rows, resultRow{label: label, value: s, note: note})
@@ -196,6 +198,9 @@ func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) lay
 						return l.Layout(gtx)
 					}),
 					layout.Rigid(layout.Spacer{Width: 12}.Layout),
+					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+						return r.badge(gtx, row)
+					}),
 					layout.Rigid(Described(row.label, func(gtx layout.Context) layout.Dimensions {
 						l := material.Label(th, unit.Sp(17), row.value)
 						l.Color = c.Text
@@ -226,12 +231,36 @@ func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) lay
 	return dims
 }
 
+// badge draws a check's outcome as a coloured box with its word ("FAIL"
+// in white on red), readable in glare and by a screen reader; nothing for
+// a row that is not a check.
+func (r *Results) badge(gtx layout.Context, row resultRow) layout.Dimensions {
+	word, bg := outcomeLook(row.outcome)
+	if word == "" {
+		return layout.Dimensions{}
+	}
+	return layout.Inset{Right: 8}.Layout(gtx, Described(row.label+" outcome", func(gtx layout.Context) layout.Dimensions {
+		return background(gtx, bg, bg, gtx.Dp(4), 0, func(gtx layout.Context) layout.Dimensions {
+			return layout.Inset{Left: 6, Right: 6, Top: 2, Bottom: 2}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				l := material.Label(r.env.Theme, unit.Sp(14), word)
+				l.Color = rgb(0xffffff)
+				l.Font.Weight = 700
+				return l.Layout(gtx)
+			})
+		})
+	}))
+}
+
 // String lists the rows as "label: value" lines, each row's note on an
 // indented line below it (for tests and logs).
 func (r *Results) String() string {
 	s := ""
 	for _, row := range r.rows {
-		s += fmt.Sprintf("%s: %s\n", row.label, row.value)
+		if word, _ := outcomeLook(row.outcome); word != "" {
+			s += fmt.Sprintf("%s: [%s] %s\n", row.label, word, row.value)
+		} else {
+			s += fmt.Sprintf("%s: %s\n", row.label, row.value)
+		}
 		if row.note != "" {
 			s += "  " + row.note + "\n"
 		}

@@ -13,6 +13,7 @@ import (
 	"gioui.org/widget/material"
 
 	"tubewright/calc/safety"
+	"tubewright/calc/sheet"
 	"tubewright/store"
 )
 
@@ -192,7 +193,7 @@ func (s *safetyScreen) update(gtx layout.Context) {
 		s.saveTo(true)
 	}
 	if s.openLog.Clicked(gtx) {
-		s.env.Open("benchlog")
+		s.env.Open(sheet.IDBenchLog)
 	}
 	if s.restart.Clicked(gtx) {
 		s.reset()

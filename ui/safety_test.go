@@ -10,6 +10,7 @@ import (
 	"time"
 
 	"tubewright/calc/safety"
+	"tubewright/calc/sheet"
 	"tubewright/store"
 )
 
@@ -32,7 +33,7 @@ func safetyApp(t *testing.T, path, id string, size image.Point) (*App, *harness)
 	t.Helper()
 	a := NewApp(nil)
 	useBookAt(a.Env(), path)
-	a.Open(id)
+	a.Open(sheet.ID(id))
 	h := newHarness(t, size, a.Layout)
 	h.frames(2)
 	return a, h
@@ -312,8 +313,8 @@ func shootTall(t *testing.T, name string, env *Env, s Screen) {
 		a := NewApp(nil)
 		a.env = env
 		env.open = a.Open
-		a.screens[name] = s
-		a.stack = []string{name}
+		a.screens[sheet.ID(name)] = s
+		a.stack = []sheet.ID{sheet.ID(name)}
 		shootApp(t, name+"-tallphone", image.Pt(412, 2600), a)
 	})
 }

@@ -42,6 +42,8 @@ import (
 	"gioui.org/layout"
 	"gioui.org/op"
 	"gioui.org/unit"
+
+	"tubewright/calc/sheet"
 )
 
 func TestMain(m *testing.M) {
@@ -50,7 +52,11 @@ func TestMain(m *testing.M) {
 	if os.Getenv("CI") != "" || os.Getenv("EGL_PLATFORM") == "" {
 		os.Setenv("EGL_PLATFORM", "surfaceless")
 	}
-	os.Exit(m.Run())
+	code := m.Run()
+	if twcalcDir != "" {
+		os.RemoveAll(twcalcDir)
+	}
+	os.Exit(code)
 }
 
 // shotSize is one of the window sizes screenshots are taken at.
@@ -76,7 +82,7 @@ func TestScreenshot(t *testing.T) {
 		}
 	})
 	for _, e := range Catalog() {
-		t.Run(e.ID, func(t *testing.T) {
+		t.Run(string(e.ID), func(t *testing.T) {
 			for _, sz := range shotSizes {
 				t.Run(sz.name, func(t *testing.T) {
 					a := NewApp(nil)
@@ -84,7 +90,7 @@ func TestScreenshot(t *testing.T) {
 					if a.Current() != e.ID {
 						t.Fatalf("could not open %q", e.ID)
 					}
-					shootApp(t, e.ID+"-"+sz.name, sz.size, a)
+					shootApp(t, string(e.ID)+"-"+sz.name, sz.size, a)
 				})
 			}
 		})
@@ -100,10 +106,10 @@ func TestScreenshotTall(t *testing.T) {
 		t.Skip("pictures for people only: set SHOT_DIR")
 	}
 	for _, e := range Catalog() {
-		t.Run(e.ID, func(t *testing.T) {
+		t.Run(string(e.ID), func(t *testing.T) {
 			a := NewApp(nil)
 			a.Open(e.ID)
-			shootApp(t, e.ID+"-tall", image.Pt(412, 6000), a)
+			shootApp(t, string(e.ID)+"-tall", image.Pt(412, 6000), a)
 		})
 	}
 }
@@ -118,8 +124,8 @@ func shoot(t *testing.T, name string, env *Env, s Screen) {
 			a := NewApp(nil)
 			a.env = env
 			env.open = a.Open
-			a.screens[name] = s
-			a.stack = []string{name}
+			a.screens[sheet.ID(name)] = s
+			a.stack = []sheet.ID{sheet.ID(name)}
 			if e, ok := s.(Enterer); ok {
 				e.Enter()
 			}

@@ -1,0 +1,364 @@
+package ui
+
+import (
+	"errors"
+	"strconv"
+
+	"gioui.org/layout"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/sheet"
+	"tubewright/calc/units"
+)
+
+// Form is a calculator's inputs as widgets, built from its description in
+// calc/sheet, and the card of its results. A screen keeps one Form, calls
+// Update at the start of each frame and lays out Inputs and Outputs; it may
+// add its own extras (plots, a device editor) around them.
+type Form struct {
+	// Sheet is the calculator described.
+	Sheet *sheet.Sheet
+	// Results is the card the rows go to.
+	Results *Results
+
+	env     *Env
+	items   []formItem
+	caution *Caution
+	result  *sheet.Result
+	err     error
+	dirty   bool
+}
+
+// formItem is the widget of one input; exactly one of the pointers is set.
+type formItem struct {
+	in    *sheet.Input
+	field *Field
+	gas   *GasPicker
+	pick  *Choice
+	on    *widget.Bool
+}
+
+// NewForm builds the widgets of s's inputs with their defaults (or
+// examples, for required inputs without a default).
+func NewForm(env *Env, s *sheet.Sheet) *Form {
+	f := &Form{Sheet: s, Results: NewResults(env), env: env, dirty: true,
+		caution: NewCaution(env, "Before you go on")}
+	for i := range s.Inputs {
+		in := &s.Inputs[i]
+		start := in.Default
+		if start == "" {
+			start = in.Example
+		}
+		it := formItem{in: in}
+		switch in.Kind {
+		case sheet.Gas:
+			it.gas = NewGasPicker(env, start)
+		case sheet.Pick:
+			keys, words := in.ChoiceKeys(), make([]string, len(in.Choices))
+			for j, c := range in.Choices {
+				words[j] = c.Words
+			}
+			it.pick = NewChoice(env, in.Label, keys, words)
+			it.pick.Select(start)
+		case sheet.Switch:
+			it.on = new(widget.Bool)
+			it.on.Value, _ = strconv.ParseBool(start)
+		default:
+			fd := NewField(env, in.Label, in.Dim, "")
+			fd.In = in
+			fd.Options = in.Units
+			fd.Hint = in.Hint
+			fd.SetText(start)
+			it.field = fd
+		}
+		f.items = append(f.items, it)
+	}
+	return f
+}
+
+// item returns the widget of input key; an unknown key is a programming
+// error.
+func (f *Form) item(key string) *formItem {
+	for i := range f.items {
+		if f.items[i].in.Key == key {
+			return &f.items[i]
+		}
+	}
+	panic("ui: calculator " + string(f.Sheet.ID) + " has no input " + key)
+}
+
+// Field returns the text field of input key (nil for a gas, choice or
+// switch input).
+func (f *Form) Field(key string) *Field { return f.item(key).field }
+
+// Gas returns the gas picker of input key.
+func (f *Form) Gas(key string) *GasPicker { return f.item(key).gas }
+
+// Pick returns the chips of input key.
+func (f *Form) Pick(key string) *Choice { return f.item(key).pick }
+
+// Switch returns the check box state of input key.
+func (f *Form) Switch(key string) *widget.Bool { return f.item(key).on }
+
+// Text returns the text of input key as the calculator reads it.
+func (f *Form) Text(key string) string { return f.item(key).text() }
+
+// SetText sets input key from code (not a user change) and marks the form
+// for recomputing.
+func (f *Form) SetText(key, text string) {
+	it := f.item(key)
+	switch {
+	case it.gas != nil:
+		_ = it.gas.SetText(text)
+	case it.pick != nil:
+		it.pick.Select(text)
+	case it.on != nil:
+		it.on.Value, _ = strconv.ParseBool(text)
+	default:
+		it.field.SetText(text)
+	}
+	f.dirty = true
+}
+
+func (it *formItem) text() string {
+	switch {
+	case it.gas != nil:
+		return it.gas.Text()
+	case it.pick != nil:
+		return it.pick.Selected()
+	case it.on != nil:
+		return strconv.FormatBool(it.on.Value)
+	default:
+		return it.field.Text()
+	}
+}
+
+// Texts returns every input's text by key.
+func (f *Form) Texts() map[string]string {
+	m := make(map[string]string, len(f.items))
+	for i := range f.items {
+		m[f.items[i].in.Key] = f.items[i].text()
+	}
+	return m
+}
+
+// Result returns the last result, or nil when the inputs gave none.
+func (f *Form) Result() *sheet.Result { return f.result }
+
+// Err returns why the last evaluation gave no result, or nil.
+func (f *Form) Err() error { return f.err }
+
+// Invalidate marks the form for recomputing at the next Update.
+func (f *Form) Invalidate() { f.dirty = true }
+
+// Update handles the widgets' events and recomputes when an input changed;
+// it reports whether it recomputed.
+func (f *Form) Update(gtx layout.Context) bool {
+	for i := range f.items {
+		it := &f.items[i]
+		changed := false
+		switch {
+		case it.gas != nil:
+			changed = it.gas.Update(gtx)
+		case it.pick != nil:
+			changed = it.pick.Update(gtx)
+		case it.on != nil:
+			changed = it.on.Update(gtx)
+		default:
+			changed = it.field.Update(gtx)
+		}
+		if changed {
+			f.dirty = true
+		}
+	}
+	if !f.dirty {
+		return false
+	}
+	f.dirty = false
+	f.Compute()
+	return true
+}
+
+// Compute evaluates the calculator on the current texts, fills the results
+// card, marks the fields an error is about (by key) and carries the shared
+// values to the Bench.
+func (f *Form) Compute() {
+	for i := range f.items {
+		if fd := f.items[i].field; fd != nil {
+			fd.SetError(nil)
+		}
+	}
+	f.result, f.err = f.Sheet.Evaluate(f.Texts())
+	r := f.Results
+	r.Reset()
+	f.caution.Lines = nil
+	if f.err != nil {
+		fes := sheet.FieldErrors(f.err)
+		for _, fe := range fes {
+			if fd := f.item(fe.Key).field; fd != nil {
+				fd.SetError(fe)
+			}
+		}
+		if len(fes) > 1 || (len(fes) == 1 && f.item(fes[0].Key).field != nil && fes[0].Text != "" && f.item(fes[0].Key).field.ErrorText() != "") {
+			r.Fail(errors.New("check the fields marked in red"))
+		} else {
+			r.Fail(f.err)
+		}
+		return
+	}
+	r.Show(f.result)
+	f.caution.Lines = f.result.Cautions
+	f.share()
+}
+
+// share carries the values of shared inputs to the Bench.
+func (f *Form) share() {
+	b := f.env.Bench
+	v := f.result.Values
+	for _, it := range f.items {
+		if !v.Has(it.in.Key) {
+			continue
+		}
+		switch it.in.Share {
+		case sheet.ShareGas:
+			b.SetGas(it.text())
+		case sheet.ShareTemperature:
+			b.SetTemperature(v.SI(it.in.Key))
+		case sheet.SharePressure:
+			b.SetPressure(v.SI(it.in.Key))
+		case sheet.ShareFrequency:
+			b.SetFrequency(v.SI(it.in.Key), f.Sheet.Title)
+		}
+	}
+}
+
+// Enter takes the shared values the Bench holds into the inputs that share
+// them, where they differ, and reports whether anything changed.
+func (f *Form) Enter() bool {
+	b := f.env.Bench
+	changed := false
+	for i := range f.items {
+		it := &f.items[i]
+		switch it.in.Share {
+		case sheet.ShareGas:
+			if it.gas != nil && b.Gas != "" && b.Gas != it.gas.Text() && it.gas.SetText(b.Gas) == nil {
+				changed = true
+			}
+		case sheet.ShareTemperature:
+			changed = takeValue(it.field, b.Temperature, units.Format(b.Temperature, units.DimTemperature)) || changed
+		case sheet.SharePressure:
+			changed = takeValue(it.field, b.Pressure, formatPressure(b.Pressure)) || changed
+		case sheet.ShareFrequency:
+			changed = takeValue(it.field, b.Frequency, units.Format(b.Frequency, units.DimFrequency)) || changed
+		}
+	}
+	if changed {
+		f.dirty = true
+	}
+	return changed
+}
+
+// takeValue sets fd to text when the Bench value v is set and differs from
+// the field's.
+func takeValue(fd *Field, v float64, text string) bool {
+	if fd == nil || v <= 0 {
+		return false
+	}
+	if cur, ok := fd.Value(); ok && near(cur, v) {
+		return false
+	}
+	fd.SetText(text)
+	return true
+}
+
+// Inputs returns the input widgets in order, advanced ones last.
+func (f *Form) Inputs() []layout.Widget {
+	var main, adv []layout.Widget
+	for i := range f.items {
+		w := f.items[i].widget(f.env)
+		if f.items[i].in.Advanced {
+			adv = append(adv, w)
+		} else {
+			main = append(main, w)
+		}
+	}
+	return append(main, adv...)
+}
+
+// InputWidget returns the widget of input key alone, for screens that
+// place inputs themselves.
+func (f *Form) InputWidget(key string) layout.Widget { return f.item(key).widget(f.env) }
+
+func (it *formItem) widget(env *Env) layout.Widget {
+	switch {
+	case it.gas != nil:
+		return it.gas.Layout
+	case it.pick != nil:
+		return it.pick.Layout
+	case it.on != nil:
+		return func(gtx layout.Context) layout.Dimensions {
+			cb := material.CheckBox(env.Theme, it.on, it.in.Label)
+			cb.Color = env.Colors.Text
+			cb.IconColor = env.Colors.Accent
+			return cb.Layout(gtx)
+		}
+	default:
+		return it.field.Layout
+	}
+}
+
+// Outputs returns the results card, the cautions (when there are any),
+// the result's notes and the calculator's model note.
+func (f *Form) Outputs() []layout.Widget {
+	ws := []layout.Widget{f.Results.Layout, f.CautionWidget}
+	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+		if f.result == nil || len(f.result.Notes) == 0 {
+			return layout.Dimensions{}
+		}
+		children := make([]layout.FlexChild, len(f.result.Notes))
+		for i, n := range f.result.Notes {
+			children[i] = layout.Rigid(Described("Model range", Note(f.env, n)))
+		}
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
+	})
+	if f.Sheet.About != "" {
+		ws = append(ws, Note(f.env, f.Sheet.About))
+	}
+	return ws
+}
+
+// CautionWidget draws the result's safety cautions, or nothing.
+func (f *Form) CautionWidget(gtx layout.Context) layout.Dimensions {
+	if len(f.caution.Lines) == 0 {
+		return layout.Dimensions{}
+	}
+	return f.caution.Layout(gtx)
+}
+
+// sheetScreen is the screen of a calculator that needs nothing beyond its
+// description: its inputs, then its results.
+type sheetScreen struct {
+	env  *Env
+	page *Page
+	form *Form
+}
+
+// newSheetScreen returns the constructor of s's plain screen.
+func newSheetScreen(s *sheet.Sheet) func(env *Env) Screen {
+	return func(env *Env) Screen {
+		return &sheetScreen{env: env, page: NewPage(env), form: NewForm(env, s)}
+	}
+}
+
+// Title implements Screen.
+func (s *sheetScreen) Title() string { return s.form.Sheet.Title }
+
+// Enter takes the shared values from the Bench.
+func (s *sheetScreen) Enter() { s.form.Enter() }
+
+// Layout implements Screen.
+func (s *sheetScreen) Layout(gtx layout.Context) layout.Dimensions {
+	s.form.Update(gtx)
+	return s.page.Layout(gtx, append(s.form.Inputs(), s.form.Outputs()...)...)
+}
