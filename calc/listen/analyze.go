@@ -121,6 +121,17 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	if math.IsInf(sigma2, 1) {
 		sigma2 = 0
 	}
+	// at least the rounding noise of the samples: a step q gives q²/12
+	// (Bennett, "Spectra of quantized signals", Bell Syst. Tech. J. 27,
+	// 446–472, 1948)
+	q := math.Exp2(-float64(rec.Encoding.Bits - 1))
+	if rec.Encoding.Float {
+		q = math.Exp2(-24)
+		if rec.Encoding.Bits == 64 {
+			q = math.Exp2(-53)
+		}
+	}
+	sigma2 = math.Max(sigma2, q*q/12)
 	noiseEnv := math.Sqrt(4 * sigma2 * gain)
 	var amp float64
 	for _, v := range env.a {
