@@ -94,7 +94,7 @@ DEVICES = [
     dict(name="quarter-wave open engine", gas=HELIUM, pm=3e5, Ta=300.0, guess=(700.0, 450.0), parts=[
         dict(kind="closed-end"),
         dict(kind="tube", L=mm(20), D=mm(30), T="hot"),
-        dict(kind="stack", L=mm(40), D=mm(30), porosity=0.7, pores=dict(shape="plates", y0=mm(0.3), t=mm(0.2))),
+        dict(kind="stack", L=mm(40), D=mm(30), porosity=0.7, pores=dict(shape="plates", y0=mm(0.3), t=mm(0.26))),
         dict(kind="tube", L=mm(500), D=mm(30), T="ambient"),
         dict(kind="open-end"),
     ]),

@@ -411,8 +411,10 @@ func (pf *PartFile) validatePorous(i int, p *Part) error {
 	if pf.Pores == nil {
 		return pf.fieldError(i, "pores", fmt.Sprintf("is missing (e.g. {\"shape\": \"plates\", \"half_gap\": \"0.3 mm\"}; shapes: %s)", strings.Join(PoreShapes, ", ")))
 	}
-	p.Pores, err = pf.Pores.validate(i, pf.Kind)
-	return err
+	if p.Pores, err = pf.Pores.validate(i, pf.Kind); err != nil {
+		return err
+	}
+	return checkPorosity(i, pf.Kind, p.Porosity, p.Pores)
 }
 
 // validateDriver reads a driver: exactly one amplitude, and the frequency
