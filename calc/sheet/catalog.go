@@ -50,7 +50,7 @@ var catalog = []Entry{
 	{ID: IDDiagnose, Title: "What the pitch says", Summary: "Gas temperature or mixture fraction from a measured resonance frequency, with its ±", Place: Everywhere},
 	{ID: IDDepths, Sheet: depthsSheet, Place: Everywhere},
 	{ID: IDPores, Title: "Pores and packing", Summary: "Plates, pores, pins, screens, metal wool or honeycomb: porosity, hydraulic radius, Rott's functions and a verdict for a stack or regenerator", Place: Everywhere},
-	{ID: IDPlacement, Title: "Stack placement", Summary: "Where a short stack sits in the standing wave: heat-flux and loss factors, critical temperature difference, gas displacement and exchanger length", Place: Everywhere},
+	{ID: IDPlacement, Sheet: placementSheet, Place: Everywhere},
 	{ID: IDOnset, Title: "Engine onset", Summary: "Build an engine from parts and find the hot temperature and frequency at which it starts to sing, with profiles and onset against pressure", Place: Everywhere},
 	{ID: IDHeatPump, Title: "Heat pump span", Summary: "Build a loudspeaker-driven heat pump from parts: cold temperature, span, acoustic power and COP, and the best drive frequency", Place: Everywhere},
 	{ID: IDSafety, Title: "Safety pass", Summary: "Walk the checks before pressurising: wall stress, relief, test pressure, stored energy, room oxygen, hearing; save the pass in the bench log", Place: InApp},
