@@ -26,6 +26,10 @@ const MaxAnalysedSamples = 1 << 20
 // still belong to the analysed stretch.
 const activeRange = 30.0
 
+// searchTol is the width (in bins of the fitted stretch) to which the
+// final frequency search narrows.
+const searchTol = 1e-5
+
 // silentPeak is the largest |sample| (after removing the mean) below which
 // a recording counts as silent: 2^-16, half a step of 16-bit audio
 // (-96 dBFS).
@@ -148,7 +152,7 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	fw := hann(len(fseg))
 	fit := newSineFit(fseg, fw, g)
 	if fit.uu > 0 {
-		omega = fit.refine(omega, 0.25*bin, 1e-4*bin)
+		omega = fit.refine(omega, 0.25*bin, searchTol*bin)
 	}
 	f := omega * fs / (2 * math.Pi)
 	res.Frequency = f
@@ -160,7 +164,10 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	}
 	res.FrequencyNoise = frequencySigma(fw, g, sigma2, fs)
 	res.FrequencyDrift = drift(res.Track, f, res.AnalysedFrom, res.AnalysedTo)
-	res.FrequencyUncertainty = math.Hypot(res.FrequencyNoise, res.FrequencyDrift)
+	// the search stops within ±searchTol/2 bin: a uniform error of
+	// standard deviation searchTol/√12 bin
+	res.FrequencyUncertainty = math.Sqrt(res.FrequencyNoise*res.FrequencyNoise + res.FrequencyDrift*res.FrequencyDrift +
+		math.Pow(searchTol*fs/float64(len(fseg))/math.Sqrt(12), 2))
 
 	res.Amplitude = amp
 	res.SNR = 200

@@ -11,8 +11,9 @@ type Harmonic struct {
 type Result struct {
 	// Frequency is the strongest peak in the analysed stretch, Hz.
 	Frequency float64
-	// FrequencyUncertainty is its standard uncertainty, Hz: FrequencyNoise
-	// and FrequencyDrift combined in quadrature.
+	// FrequencyUncertainty is its standard uncertainty, Hz: FrequencyNoise,
+	// FrequencyDrift and the resolution of the search (1e-5 of a bin)
+	// combined in quadrature.
 	FrequencyUncertainty float64
 	// FrequencyNoise is the standard deviation of Frequency caused by the
 	// noise, given the shape (width) of the peak: see frequencySigma.
