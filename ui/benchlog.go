@@ -9,7 +9,7 @@ import (
 	"gioui.org/widget/material"
 
 	"tubewright/calc/safety"
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // benchLogScreen lists the saved safety passes, newest first. Tapping one

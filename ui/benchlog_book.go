@@ -8,7 +8,7 @@ import (
 	"runtime"
 	"time"
 
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // benchBook is where the safety passes of one App are kept: the bench log

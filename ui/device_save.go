@@ -11,7 +11,7 @@ import (
 	"gioui.org/widget/material"
 
 	"tubewright/calc/linear"
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // deviceFile keeps one saved device per editor on the desktop, at

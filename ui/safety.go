@@ -14,7 +14,7 @@ import (
 
 	"tubewright/calc/safety"
 	"tubewright/calc/sheet"
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // safetyScreen walks the safety pass before pressurising: one checklist

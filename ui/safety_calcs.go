@@ -11,7 +11,7 @@ import (
 
 	"tubewright/calc/safety"
 	"tubewright/calc/units"
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // inlineCalc is the calculator shown inside a checklist item where a

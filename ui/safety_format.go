@@ -10,7 +10,7 @@ import (
 
 	"tubewright/calc/safety"
 	"tubewright/calc/units"
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // This file holds the small formatting and recording helpers of the safety

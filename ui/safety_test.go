@@ -11,7 +11,7 @@ import (
 
 	"tubewright/calc/safety"
 	"tubewright/calc/sheet"
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 // tallPhone is a phone's width with room for a whole step, so that tests

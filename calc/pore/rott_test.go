@@ -6,7 +6,7 @@ import (
 	"strconv"
 	"testing"
 
-	"tubewright/internal/reftable"
+	"tubewright/calc/internal/reftable"
 )
 
 // fRow is one line of testdata/rott_f.csv: Rott's f computed with

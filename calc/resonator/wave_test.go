@@ -7,9 +7,9 @@ import (
 
 	"gonum.org/v1/gonum/floats/scalar"
 
+	"tubewright/calc/internal/reftable"
 	"tubewright/calc/linear"
 	"tubewright/gasprops"
-	"tubewright/internal/reftable"
 )
 
 // props builds complete gas properties from the numbers a reference

@@ -6,7 +6,7 @@ import (
 	"strings"
 	"testing"
 
-	"tubewright/internal/reftable"
+	"tubewright/calc/internal/reftable"
 )
 
 // refRow is one line of testdata/rott_bessel.csv: scipy.special 1.10.1

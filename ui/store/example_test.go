@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"time"
 
-	"tubewright/store"
+	"tubewright/ui/store"
 )
 
 func ExamplePass_Text() {
