@@ -24,8 +24,9 @@ type Settings struct {
 	// published source: standing-wave engines commonly run at a few per
 	// cent).
 	DriveRatio float64
-	// MaxSolves bounds the onset (or heat-pump) solves of the search.
-	// Default 2000.
+	// MaxSolves bounds the solves of the search: onset solves for
+	// Design (default 2000), heat-pump and mode solves for DesignHeatPump
+	// (default 4000). A search stopped by it says so in the warnings.
 	MaxSolves int
 	// NoSensitivity skips the sensitivity table.
 	NoSensitivity bool
@@ -152,8 +153,12 @@ func Design(t Target, s *Settings) (Result, error) {
 		}
 	}
 	res.Geometry = *best
+	limited := sv.solves >= set.MaxSolves
 	if err := sv.finish(&res); err != nil {
 		return res, err
+	}
+	if limited {
+		res.Warnings = append(res.Warnings, fmt.Sprintf("the search stopped at its limit of %d solves; a longer search may find a lower onset", set.MaxSolves))
 	}
 	return res, sv.check(&res)
 }

@@ -130,7 +130,8 @@ const heatPumpRhOverDelta = 2.0
 
 // DesignHeatPump finds a driven heat pump for the target: the stack's
 // position and length that give the largest zero-load span at the driver
-// amplitude (gonum/optimize Nelder-Mead over linear.HeatPump), pores of
+// amplitude (gonum/optimize Nelder-Mead over linear.HeatPump, each
+// candidate driven at its own drive frequency), pores of
 // r_h = 2 δκ, exchangers and the shortest stack from the gas displacement
 // at the driver amplitude (as for Design), the resonator length solved by
 // Brent so that the tube at ambient resonates at the target frequency, and
@@ -143,6 +144,9 @@ const heatPumpRhOverDelta = 2.0
 // nearest design.
 func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 	set := s.values()
+	if s == nil || s.MaxSolves <= 0 {
+		set.MaxSolves = 4000 // each candidate costs more solves than an engine's
+	}
 	gas, err := t.validate()
 	if err != nil {
 		return HeatPumpResult{}, err
@@ -174,8 +178,12 @@ func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 		return res, &UnreachableError{Problem: fmt.Sprintf("no heat pump of this kind in a %s tube with %s at %s could be solved at a %s drive", mm(t.Diameter, 1), t.Gas, units.Format(t.MeanPressure, units.DimPressure), units.Format(t.DriverAmplitude, units.DimPressure))}
 	}
 	res.Geometry = *best
+	limited := hp.solves >= set.MaxSolves
 	if err := hp.write(&res); err != nil {
 		return res, err
+	}
+	if limited {
+		res.Warnings = append(res.Warnings, fmt.Sprintf("the search stopped at its limit of %d solves; a longer search may find a larger span", set.MaxSolves))
 	}
 	want := t.wanted()
 	res.Margin = res.Span - want
@@ -197,6 +205,7 @@ type pumpSolver struct {
 	w      wave
 	set    Settings
 	solves int
+	slope  float64 // d f_res(Tc(f)) / df at the last drive frequency solved
 }
 
 // place sets the driver space, exchangers and stack for a stack whose warm
@@ -253,7 +262,7 @@ func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc float64) (float64, er
 
 // tune solves g.Resonator so that the ambient resonance is the target
 // frequency, by Brent's method on f(L) - f_target.
-func (hp *pumpSolver) tune(g *HeatPumpGeometry) error {
+func (hp *pumpSolver) tune(g *HeatPumpGeometry, tol float64) error {
 	ft := hp.t.Frequency
 	lo := minResonator(&Target{Diameter: hp.t.Diameter})
 	F := func(lr float64) float64 {
@@ -295,7 +304,7 @@ func (hp *pumpSolver) tune(g *HeatPumpGeometry) error {
 		a = math.Max(a-delta, lo)
 		fa = F(a)
 	}
-	r, err := numeric.Brent(F, a, b, &numeric.RootSettings{AbsTol: 1e-6 * total, MaxIterations: 60})
+	r, err := numeric.Brent(F, a, b, &numeric.RootSettings{AbsTol: tol * total, MaxIterations: 60})
 	if err != nil {
 		return err
 	}
@@ -303,40 +312,102 @@ func (hp *pumpSolver) tune(g *HeatPumpGeometry) error {
 	return nil
 }
 
-// pump returns the zero-load heat pump of g at its drive frequency: the
-// resonance with the cold side at the cold temperature, by two rounds of
-// HeatPump then Mode from the ambient resonance f0.
+// pump returns the zero-load heat pump of g at its drive frequency f:
+// the resonance of the tube with its cold parts at the cold temperature
+// that driving at f gives. The cold temperature falls steeply as f moves,
+// and the resonance with it, so plain alternation oscillates; instead it
+// solves
+//
+//	h(f) = f_res(Tc(f)) - f = 0
+//
+// by secant steps from f0 (the first with the slope of the last solve),
+// falling back to Brent's method bracketed by the alternation's own
+// steps. tol is the relative tolerance of the solves and of f.
 func (hp *pumpSolver) pump(g HeatPumpGeometry, f0 float64, tol float64) (*linear.HeatPumpResult, float64, error) {
-	f := f0
-	var r *linear.HeatPumpResult
-	for range 3 {
-		var err error
+	type point struct {
+		r   *linear.HeatPumpResult
+		h   float64
+		err error
+	}
+	cache := map[float64]point{}
+	eval := func(f float64) point {
+		if p, ok := cache[f]; ok {
+			return p
+		}
 		hp.solves++
-		r, err = linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{NoProfile: true, RelTol: tol, Tolerance: tol}})
-		if err != nil {
-			return nil, 0, err
+		r, err := linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{NoProfile: true, RelTol: tol, Tolerance: tol}})
+		p := point{r: r, err: err, h: math.NaN()}
+		if err == nil {
+			fr, err := hp.resonance(g, f, r.ColdTemperature)
+			if err == nil {
+				p.h = fr - f
+			} else {
+				p.err = err
+			}
 		}
-		fn, err := hp.resonance(g, f, r.ColdTemperature)
-		if err != nil {
-			return nil, 0, err
-		}
-		if math.Abs(fn-f) < 1e-6*f {
+		cache[f] = p
+		return p
+	}
+	h := func(f float64) float64 { return eval(f).h }
+	a, ha := f0, h(f0)
+	if math.IsNaN(ha) {
+		return nil, 0, eval(f0).err
+	}
+	// Secant steps first, the first one with the slope of the last
+	// solve; they converge in a few solves from a near start.
+	slope := hp.slope
+	if !(slope < 0.9) {
+		slope = -1
+	}
+	x0, h0 := a, ha
+	x1 := x0 + h0/(1-slope)
+	for range 6 {
+		if math.Abs(x1-x0) <= tol*f0 {
 			break
 		}
-		f = fn
+		h1 := h(x1)
+		if math.IsNaN(h1) || h1 == h0 {
+			break
+		}
+		if math.Abs(h1) <= tol*f0 {
+			hp.slope = 1 + (h1-h0)/(x1-x0)
+			return eval(x1).r, x1, nil
+		}
+		x0, h0, x1 = x1, h1, x1-h1*(x1-x0)/(h1-h0)
 	}
-	return r, f, nil
+	// Fallback: bracket by the alternation's own steps and Brent.
+	if ha == 0 {
+		return eval(f0).r, f0, nil
+	}
+	b := a + ha
+	hb := h(b)
+	for i := 0; !(ha*hb <= 0); i++ {
+		if math.IsNaN(hb) || i >= 12 {
+			return nil, 0, fmt.Errorf("%w: the drive frequency (resonance of the cooled tube) could not be bracketed near %s", errSolve, units.Format(f0, units.DimFrequency))
+		}
+		a, ha = b, hb
+		b = a + 1.5*ha
+		hb = h(b)
+	}
+	lo, hi := math.Min(a, b), math.Max(a, b)
+	r, err := numeric.Brent(h, lo, hi, &numeric.RootSettings{AbsTol: tol * f0, MaxIterations: 60})
+	if err != nil {
+		return nil, 0, fmt.Errorf("%w: drive frequency: %v", errSolve, err)
+	}
+	p := eval(r.X)
+	return p.r, r.X, p.err
 }
 
 // search runs Nelder-Mead over the logarithms of the stack position and
 // length, each candidate tuned to the target frequency, minimising the
-// cold temperature at zero load.
+// cold temperature at zero load when driven at its own drive frequency.
 func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, int) {
 	w, t := hp.w, hp.t
 	var best *HeatPumpGeometry
 	bestTc := math.Inf(1)
 	pos0, dx0 := g0.Position(), g0.Stack
 	lastLr := g0.Resonator
+	lastF := t.Frequency
 	prob := optimize.Problem{Func: func(x []float64) float64 {
 		pen := 0.0
 		bound := func(v, lo, hi float64) float64 {
@@ -358,14 +429,15 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 		if hp.solves >= hp.set.MaxSolves {
 			return 2 * t.Ambient
 		}
-		if err := hp.tune(&g); err != nil {
+		if err := hp.tune(&g, 1e-5); err != nil {
 			return 2*t.Ambient + t.Ambient*pen
 		}
 		lastLr = g.Resonator
-		r, _, err := hp.pump(g, t.Frequency, 1e-7)
+		r, f, err := hp.pump(g, lastF, 1e-5)
 		if err != nil {
 			return 2*t.Ambient + t.Ambient*pen
 		}
+		lastF = f
 		if pen == 0 && r.ColdTemperature < bestTc {
 			bestTc = r.ColdTemperature
 			gg := g
@@ -374,8 +446,8 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 		return r.ColdTemperature + t.Ambient*pen
 	}}
 	settings := &optimize.Settings{
-		Converger:       &optimize.FunctionConverge{Absolute: 0.02, Iterations: 25},
-		FuncEvaluations: 200,
+		Converger:       &optimize.FunctionConverge{Absolute: 0.05, Iterations: 20},
+		FuncEvaluations: 150,
 	}
 	r, err := optimize.Minimize(prob, []float64{0, 0}, settings, &optimize.NelderMead{SimplexSize: 0.2})
 	if err != nil {
@@ -392,10 +464,10 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 func (hp *pumpSolver) write(res *HeatPumpResult) error {
 	t := hp.t
 	g := res.Geometry
-	if err := hp.tune(&g); err != nil {
+	if err := hp.tune(&g, 1e-8); err != nil {
 		return err
 	}
-	_, f, err := hp.pump(g, t.Frequency, 1e-9)
+	_, f, err := hp.pump(g, t.Frequency, 1e-8)
 	if err != nil {
 		return fmt.Errorf("design: heat pump of the final design: %w", err)
 	}
