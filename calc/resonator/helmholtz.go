@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 
+	"tubewright/calc/numeric"
+	"tubewright/calc/pore"
 	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
@@ -24,7 +26,20 @@ type HelmholtzResult struct {
 	EffectiveLength float64 // L + δ_inner + δ_outer, m
 	Wavelength      float64 // m
 	SoundSpeed      float64 // m/s
-	Warnings        []string
+	// NeckVolumeRatio is S·L_eff/V, the volume of the moving gas in the
+	// neck (with its end corrections) over the cavity volume, 1.
+	NeckVolumeRatio float64
+	// DistributedFrequency treats the neck as a short tube instead of a
+	// lumped mass (see HelmholtzFrequency), Hz; it is below Frequency,
+	// by about NeckVolumeRatio/6 in relative terms.
+	DistributedFrequency float64
+	// ViscousDepth is the viscous penetration depth δν at Frequency, m.
+	ViscousDepth float64
+	// NeckViscousShift is the relative change of the frequency (negative)
+	// from the mass the viscous boundary layer adds in the neck (see
+	// HelmholtzFrequency), 1.
+	NeckViscousShift float64
+	Warnings         []string
 }
 
 // HelmholtzFrequency returns the resonance of a Helmholtz resonator filled
@@ -44,6 +59,29 @@ type HelmholtzResult struct {
 // neck at least as long as its radius (shorter necks are orifices, for
 // which this model's end corrections are not valid: error), and a neck
 // whose volume is below the cavity's (error otherwise).
+//
+// Two validity checks, each with a warning when it moves the frequency
+// by more than stated:
+//
+// The neck's volume not small against the cavity (above 1 %): the neck as
+// a loss-free tube of length L_eff open at its outer end and loaded by the
+// cavity's compliance V/(ρc²) gives
+//
+//	k L_eff tan(k L_eff) = S L_eff / V,   k = 2πf/c
+//
+// (pressure node at the outer end, momentum in the neck and the cavity's
+// continuity; reasoning in the test, elementary), which tends to the
+// lumped result as S L_eff/V → 0 and lies below it by about S L_eff/(6V):
+// 5 % at a ratio of 31 % (issue 12). DistributedFrequency holds it.
+//
+// The viscous boundary layer in the neck (above 2 %): in a duct the mass
+// per length is ρ/(S(1 − fν)) (Rott's momentum equation, Swift 2002,
+// ch. 4, from memory of the form), so the neck's mass grows by the factor
+// Re[1/(1 − fν)] ≈ 1 + δν/a over its physical length (calc/pore Circular
+// at δν); the frequency changes by NeckViscousShift =
+// [(L Re[1/(1 − fν)] + δ_inner + δ_outer)/L_eff]^(−1/2) − 1, about
+// −δν/(2a) for a long neck. A neck a few penetration depths wide is far
+// outside the lumped model.
 func HelmholtzFrequency(h Helmholtz, g gasprops.Properties) (HelmholtzResult, error) {
 	for _, c := range []struct {
 		name string
@@ -105,6 +143,37 @@ func HelmholtzFrequency(h Helmholtz, g gasprops.Properties) (HelmholtzResult, er
 	if r.EffectiveLength > r.Wavelength/10 {
 		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck (effective length %.3g m) is not short compared with the wavelength %.3g m: the lumped Helmholtz model is only approximate", r.EffectiveLength, r.Wavelength))
 	}
+	r.neckChecks(h, g)
 	r.Warnings = append(r.Warnings, g.Warnings...)
 	return r, nil
+}
+
+// neckChecks fills the distributed-neck and viscous-neck fields of r and
+// their warnings (see HelmholtzFrequency).
+func (r *HelmholtzResult) neckChecks(h Helmholtz, g gasprops.Properties) {
+	a, L, leff, c := h.NeckRadius, h.NeckLength, r.EffectiveLength, r.SoundSpeed
+	S := math.Pi * a * a
+	r.NeckVolumeRatio = S * leff / h.Volume
+	// x tan x = ratio on (0, π/2): x tan x rises from 0 to +Inf there
+	x0 := math.Sqrt(r.NeckVolumeRatio) // the lumped value, above the root
+	res, err := numeric.Brent(func(x float64) float64 { return x*math.Tan(x) - r.NeckVolumeRatio },
+		0, math.Min(x0, math.Pi/2*(1-1e-12)), &numeric.RootSettings{RelTol: 1e-13})
+	r.DistributedFrequency = r.Frequency
+	if err == nil {
+		r.DistributedFrequency = res.X * c / (2 * math.Pi * leff)
+	}
+	if d := r.Frequency/r.DistributedFrequency - 1; d > 0.01 {
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck holds %.0f %% of the cavity's volume (with its end corrections): the lumped Helmholtz formula is %.1f %% high; the neck treated as a short tube gives %.4g Hz", 100*r.NeckVolumeRatio, 100*d, r.DistributedFrequency))
+	}
+	_, dn := Depths(g, r.Frequency)
+	r.ViscousDepth = dn
+	sh, err := pore.Circular(a)
+	if err != nil {
+		return
+	}
+	m := real(1 / (1 - sh.F(dn)))
+	r.NeckViscousShift = 1/math.Sqrt((L*m+r.InnerCorrection+r.OuterCorrection)/leff) - 1
+	if r.NeckViscousShift < -0.02 {
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck radius is only %.3g viscous penetration depths (δν = %.3g mm): the boundary layer's added mass lowers the frequency by about %.0f %% and damps it strongly; the lumped formula does not include this", a/dn, dn*1e3, -100*r.NeckViscousShift))
+	}
 }
