@@ -232,8 +232,8 @@ func (w *Plot) draw(gtx layout.Context, size image.Point) {
 	xt, yt := &w.cache.x, &w.cache.y
 
 	// Measure the texts and work out the plot area.
-	yTitle, yTitleSz := w.text(gtx, yt.title, tickSp, col.Muted, font.Medium)
-	xTitle, xTitleSz := w.text(gtx, xt.title, tickSp, col.Muted, font.Medium)
+	yTitle, yTitleSz := w.text(gtx, yt.title, tickSp, col.Muted, font.Normal)
+	xTitle, xTitleSz := w.text(gtx, xt.title, tickSp, col.Muted, font.Normal)
 	left := 0
 	yCalls := make([]op.CallOp, len(yt.texts))
 	ySz := make([]image.Point, len(yt.texts))
