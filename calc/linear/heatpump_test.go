@@ -114,6 +114,16 @@ func TestShortStackZeroLoadRatio(t *testing.T) {
 	if _, err := ShortStack(ShortStackInput{Gamma: 1}); err == nil {
 		t.Error("γ = 1: no error")
 	}
+	// the result says which Tm it used, and a given phase equal to k·x
+	// changes nothing
+	in = ShortStackInput{Gamma: 1.4, Prandtl: 0.7, MeanTemperature: 420, SoundSpeed: 410, Frequency: 300,
+		Position: 0.12, Length: 0.01, HalfGap: 5e-4, ThermalDepth: 1e-4}
+	a, _ := ShortStack(in)
+	in.Phase = 2 * math.Pi * 300 / 410 * 0.12
+	b, _ := ShortStack(in)
+	if a.MeanTemperature != 420 || !scalar.EqualWithinRel(a.CriticalGradient, b.CriticalGradient, 1e-12) || !scalar.EqualWithinRel(a.Phase, in.Phase, 1e-12) {
+		t.Errorf("Tm %g K, phase %g vs %g, gradient %g vs %g", a.MeanTemperature, a.Phase, in.Phase, a.CriticalGradient, b.CriticalGradient)
+	}
 }
 
 // TestHeatPumpLoad: a cooling load raises the cold temperature and gives a
@@ -334,10 +344,14 @@ func TestPropagateMatchesIntegrator(t *testing.T) {
 
 // TestHeatPumpShortStackEstimate: the quick short-stack numbers beside the
 // full heat-pump solve are formed as documented (identities, checked by
-// hand-calculation from the same inputs): the stack centre measured from
-// the closed far end, Γ = solved span / critical difference, the zero-load
-// span Γ0 |∇T_crit| Δx, kΔx from the gas at ambient. The onset result's Γ
-// is (Th - Ta) / critical difference.
+// hand-calculation from the same inputs): the gas and Tm at the stack's
+// mean temperature, half way between ambient (its warm neighbour) and the
+// solved cold temperature (in Swift 1988 the Tm, ρm, cp of the critical
+// gradient are the stack's own); the phase of the stack centre counted
+// from the closed far end across the cold tube at its temperature; Γ =
+// solved span / critical difference, the zero-load span Γ0 |∇T_crit| Δx.
+// The onset result's Γ is (Th - Ta) / critical difference, its Tm half way
+// between the hot and ambient exchangers.
 func TestHeatPumpShortStackEstimate(t *testing.T) {
 	t.Parallel()
 	d := shortStackPump(t, 0.02)
@@ -349,20 +363,25 @@ func TestHeatPumpShortStackEstimate(t *testing.T) {
 	if ss == nil {
 		t.Fatal("no short-stack estimate")
 	}
-	g, _ := testAir.State(300, 101325)
-	k := 2 * math.Pi * 400 / g.SoundSpeed
-	x := 0.33 + 0.1 - (0.1 + 0.01) // from the closed end at 0.43 m to the stack centre
-	crit := math.Abs(CriticalGradient(g.Gamma, 300, k, x))
+	tm := (300 + r.ColdTemperature) / 2
+	g, _ := testAir.State(tm, 101325)
+	gc, _ := testAir.State(r.ColdTemperature, 101325)
+	w := 2 * math.Pi * 400
+	k := w / g.SoundSpeed
+	phase := w*0.01/g.SoundSpeed + w*0.31/gc.SoundSpeed // half the stack, then the 0.31 m cold tube to the closed end
+	crit := math.Abs(CriticalGradient(g.Gamma, tm, k, phase/k))
 	for _, c := range []struct {
 		name      string
 		got, want float64
 	}{
+		{"mean temperature", ss.MeanTemperature, tm},
+		{"phase", ss.Phase, phase},
 		{"critical gradient", ss.CriticalGradient, crit},
 		{"critical difference", ss.CriticalDifference, crit * 0.02},
 		{"Γ", ss.GradientRatio, r.TemperatureSpan / (crit * 0.02)},
 		{"zero-load span", ss.ZeroLoadSpan, ss.ZeroLoadRatio * crit * 0.02},
 		{"kΔx", ss.KDeltaX, k * 0.02},
-		{"δκ/y0", ss.DepthRatio, math.Sqrt(2*g.Conductivity/(g.Density*g.Cp*2*math.Pi*400)) / 1e-3},
+		{"δκ/y0", ss.DepthRatio, math.Sqrt(2*g.Conductivity/(g.Density*g.Cp*w)) / 1e-3},
 	} {
 		if !scalar.EqualWithinRel(c.got, c.want, 1e-9) {
 			t.Errorf("%s = %.10g, want %.10g", c.name, c.got, c.want)
@@ -378,6 +397,9 @@ func TestHeatPumpShortStackEstimate(t *testing.T) {
 	}
 	if on.ShortStack == nil || !scalar.EqualWithinRel(on.ShortStack.GradientRatio, (on.HotTemperature-e.AmbientTemperature)/on.ShortStack.CriticalDifference, 1e-12) {
 		t.Errorf("onset short-stack Γ %+v, want (Th - Ta)/critical difference", on.ShortStack)
+	}
+	if tm := (on.HotTemperature + e.AmbientTemperature) / 2; !scalar.EqualWithinRel(on.ShortStack.MeanTemperature, tm, 1e-12) {
+		t.Errorf("onset short-stack Tm %g K, want (Th + Ta)/2 = %g K", on.ShortStack.MeanTemperature, tm)
 	}
 }
 

@@ -164,32 +164,55 @@ func Onset(dev *Device, s *Settings) (*OnsetResult, error) {
 	return res, nil
 }
 
-// shortStack evaluates ShortStack for the first stack at frequency f (Hz):
-// gas at ambient temperature, y0 the pores' hydraulic radius, dT the
-// actual temperature difference across the stack (K, for Γ; 0 leaves Γ
-// at zero). The stack centre is measured from the start end (a closed end
-// or a driver, taken as a pressure antinode), or with fromEnd from the far
-// end (for a heat pump whose far end is closed: a rigid end is a pressure
-// antinode, a driver only near resonance).
+// shortStack evaluates ShortStack for the first stack at frequency f (Hz)
+// with the temperatures of the answer: gas at the stack's mean
+// temperature (half way between its ends), y0 the pores' hydraulic radius,
+// dT the actual temperature difference across the stack (K, for Γ; 0
+// leaves Γ at zero). The phase kx of the stack centre is counted from the
+// start end (a closed end or a driver, taken as a pressure antinode), or
+// with fromEnd from the far end (for a heat pump whose far end is closed:
+// a rigid end is a pressure antinode, a driver only near resonance),
+// adding ωℓ/a over the parts on the way at their own temperatures.
 func (m *model) shortStack(f, dT float64, fromEnd bool) (ShortStackResult, error) {
-	for _, s := range m.segs {
+	w := 2 * math.Pi * f
+	for i, s := range m.segs {
 		if s.kind != KindStack {
 			continue
 		}
-		g, err := m.gas.State(m.ta, m.pm)
+		tm := (m.resolve(s.leftRef, s.leftFix) + m.resolve(s.rightRef, s.rightFix)) / 2
+		g, err := m.gas.State(tm, m.pm)
 		if err != nil {
 			return ShortStackResult{}, err
 		}
-		w := 2 * math.Pi * f
-		pos := s.x0 + s.length/2
+		phase := w * s.length / 2 / g.SoundSpeed
+		var on []segment
 		if fromEnd {
-			pos = m.dev.Length() - pos
+			on = m.segs[i+1:]
+		} else {
+			on = m.segs[:i]
+		}
+		pos := s.length / 2
+		for _, o := range on {
+			if o.length == 0 {
+				continue
+			}
+			t := m.resolve(o.temp, o.tfix)
+			if o.kind == KindStack {
+				t = (m.resolve(o.leftRef, o.leftFix) + m.resolve(o.rightRef, o.rightFix)) / 2
+			}
+			og, err := m.gas.State(t, m.pm)
+			if err != nil {
+				return ShortStackResult{}, err
+			}
+			phase += w * o.length / og.SoundSpeed
+			pos += o.length
 		}
 		return ShortStack(ShortStackInput{
-			Gamma: g.Gamma, Prandtl: g.Prandtl(), MeanTemperature: m.ta, SoundSpeed: g.SoundSpeed,
+			Gamma: g.Gamma, Prandtl: g.Prandtl(), MeanTemperature: tm, SoundSpeed: g.SoundSpeed,
 			Frequency: f, Position: pos, Length: s.length, HalfGap: s.rh,
 			ThermalDepth:          math.Sqrt(2 * g.Conductivity / (g.Density * g.Cp * w)),
 			TemperatureDifference: math.Abs(dT),
+			Phase:                 phase,
 		})
 	}
 	return ShortStackResult{}, errors.New("no stack")

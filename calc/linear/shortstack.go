@@ -37,6 +37,11 @@ type ShortStackInput struct {
 	// TemperatureDifference is the actual |ΔTm| across the stack, K; zero
 	// leaves GradientRatio at zero.
 	TemperatureDifference float64
+	// Phase is the wave's phase kx at the stack centre counted from the
+	// pressure antinode, rad, when the wave crosses parts at other
+	// temperatures on its way (Σ ωℓ/a over them); zero means
+	// k·Position with k = 2πf/SoundSpeed.
+	Phase float64
 }
 
 // ShortStackResult holds the short-stack estimates.
@@ -58,13 +63,22 @@ type ShortStackResult struct {
 	ZeroLoadSpan float64
 	KDeltaX      float64 // k Δx: the estimate needs k Δx ≪ 1
 	DepthRatio   float64 // δκ / y0: the boundary-layer form needs δκ ≪ y0
-	Warnings     []string
+	// MeanTemperature is the Tm the estimates were made at, K (the input's
+	// MeanTemperature): Onset and HeatPump use the stack's mean
+	// temperature, half way between its two ends at the answer.
+	MeanTemperature float64
+	// Phase is the kx used for the stack centre, rad.
+	Phase    float64
+	Warnings []string
 }
 
 // ShortStack evaluates the short-stack estimates of Swift 1988: the
 // critical gradient (CriticalGradient), Γ, the zero-load ratio Γ0 and the
 // validity numbers kΔx and δκ/y0 (formulas on ShortStackResult), with a
-// warning when kΔx or δκ/y0 is not small. Errors name the field that is
+// warning when kΔx or δκ/y0 is not small. Tm, γ, σ, a and δκ are those of
+// the gas in the stack (in Swift's derivation Tm, ρm, cp and the local
+// p1/u1 belong to the stack itself), and cot(kx) takes the wave's phase
+// at the stack (Phase); the result echoes the Tm used. Errors name the field that is
 // not positive and finite.
 func ShortStack(in ShortStackInput) (ShortStackResult, error) {
 	for _, f := range []struct {
@@ -77,9 +91,16 @@ func ShortStack(in ShortStackInput) (ShortStackResult, error) {
 			return ShortStackResult{}, fmt.Errorf("short stack: %s must be positive and finite (γ above 1), got %g", f.name, f.v)
 		}
 	}
-	var r ShortStackResult
+	if !(in.Phase >= 0) || math.IsInf(in.Phase, 0) {
+		return ShortStackResult{}, fmt.Errorf("short stack: phase must be zero or positive and finite, got %g", in.Phase)
+	}
+	r := ShortStackResult{MeanTemperature: in.MeanTemperature}
 	k := 2 * math.Pi * in.Frequency / in.SoundSpeed
-	r.CriticalGradient = math.Abs(CriticalGradient(in.Gamma, in.MeanTemperature, k, in.Position))
+	r.Phase = k * in.Position
+	if in.Phase > 0 {
+		r.Phase = in.Phase
+	}
+	r.CriticalGradient = math.Abs(CriticalGradient(in.Gamma, in.MeanTemperature, k, r.Phase/k))
 	r.CriticalDifference = r.CriticalGradient * in.Length
 	if in.TemperatureDifference > 0 {
 		r.GradientRatio = in.TemperatureDifference / r.CriticalDifference
@@ -99,7 +120,7 @@ func ShortStack(in ShortStackInput) (ShortStackResult, error) {
 	if r.ZeroLoadRatio <= 0 {
 		r.Warnings = append(r.Warnings, fmt.Sprintf("δν/y0 = %.2f: viscous losses outweigh the pumping, so the short-stack estimate gives no zero-load span", dn/in.HalfGap))
 	}
-	if kx := math.Mod(k*in.Position, math.Pi); kx < 0.05 || math.Abs(kx-math.Pi/2) < 0.05 || kx > math.Pi-0.05 {
+	if kx := math.Mod(r.Phase, math.Pi); kx < 0.05 || math.Abs(kx-math.Pi/2) < 0.05 || kx > math.Pi-0.05 {
 		r.Warnings = append(r.Warnings, "the stack sits at a pressure or velocity node, where the critical gradient is infinite or zero")
 	}
 	return r, nil
