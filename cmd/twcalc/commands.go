@@ -46,8 +46,6 @@ var legacyCommands = map[sheet.ID]func(args []string) (*report, error){
 	sheet.IDOxygen:    runOxygen,
 	sheet.IDSPL:       runSPL,
 	sheet.IDPores:     runPores,
-	sheet.IDOnset:     runOnset,
-	sheet.IDHeatPump:  runHeatPump,
 }
 
 // legacySummaries are the help lines of the legacy commands.
@@ -59,6 +57,4 @@ var legacySummaries = map[sheet.ID]string{
 	sheet.IDOxygen:    "oxygen left in a room after a gas release (safety)",
 	sheet.IDSPL:       "sound pressure level of a pressure amplitude against hearing limits (safety)",
 	sheet.IDPores:     "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator",
-	sheet.IDOnset:     "hot temperature and frequency at which a device described in a file starts to sing",
-	sheet.IDHeatPump:  "cold temperature, span and COP of a driven heat pump described in a file",
 }
