@@ -24,6 +24,10 @@ const (
 	// CautionHearing goes with sound levels.
 	CautionHearing = "Sound levels inside a resonator are not the exposure of a person, but leaks, open ends, loudspeaker housings and a failing window can let intense sound out. Measure the level where people stand with a sound level meter and wear hearing protection until you have."
 
+	// CautionReliefSizing goes with the relief check: a set pressure at
+	// or below the MAWP is necessary, not sufficient.
+	CautionReliefSizing = "A relief device must be sized for the worst flow it may have to pass (a failed-open regulator, a fire) and vent somewhere safe; its set pressure alone does not make it adequate."
+
 	// CautionCylinder goes with gas cylinder contents.
 	CautionCylinder = "Secure gas cylinders upright with a chain or strap, keep the valve cap on when not in use, and use a regulator and hoses rated for the cylinder pressure."
 )

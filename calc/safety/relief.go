@@ -26,11 +26,11 @@ func CheckRelief(set, mawp GaugePressure) (Relief, error) {
 	if err := positive("MAWP", float64(mawp), "Pa"); err != nil {
 		return Relief{}, err
 	}
-	r := Relief{Set: set, MAWP: mawp, OK: set <= mawp, Cautions: cautions()}
+	r := Relief{Set: set, MAWP: mawp, OK: set <= mawp, Cautions: cautions(CautionReliefSizing)}
 	if r.OK {
-		r.Message = fmt.Sprintf("set pressure is %.0f %% of the MAWP", 100*float64(set/mawp))
+		r.Message = fmt.Sprintf("set pressure is %.0f %% of the MAWP, at or below it", 100*float64(set/mawp))
 	} else {
-		r.Message = fmt.Sprintf("set pressure is ABOVE the MAWP (%.0f %%): the vessel can be overpressurised before the device opens", 100*float64(set/mawp))
+		r.Message = fmt.Sprintf("set pressure is above the MAWP (%.0f %% of it): the vessel can be overpressurised before the device opens", 100*float64(set/mawp))
 	}
 	return r, nil
 }

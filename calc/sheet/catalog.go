@@ -54,10 +54,10 @@ var catalog = []Entry{
 	{ID: IDOnset, Sheet: onsetSheet, Place: Everywhere},
 	{ID: IDHeatPump, Sheet: heatPumpSheet, Place: Everywhere},
 	{ID: IDSafety, Title: "Safety pass", Summary: "Walk the checks before pressurising: wall stress, relief, test pressure, stored energy, room oxygen, hearing; save the pass in the bench log", Place: InApp},
-	{ID: IDVessel, Title: "Vessel wall", Summary: "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)", Place: InTerminal},
-	{ID: IDEnergy, Title: "Stored energy", Summary: "stored energy of a gas charge and its TNT equivalent (safety)", Place: InTerminal},
-	{ID: IDOxygen, Title: "Room oxygen", Summary: "oxygen left in a room after a gas release (safety)", Place: InTerminal},
-	{ID: IDSPL, Title: "Sound level", Summary: "sound pressure level of a pressure amplitude against hearing limits (safety)", Place: InTerminal},
+	{ID: IDVessel, Sheet: vesselSheet, Place: InTerminal},
+	{ID: IDEnergy, Sheet: energySheet, Place: InTerminal},
+	{ID: IDOxygen, Sheet: oxygenSheet, Place: InTerminal},
+	{ID: IDSPL, Sheet: splSheet, Place: InTerminal},
 	{ID: IDBenchLog, Title: "Bench log", Summary: "Saved safety passes with date and time, exported as text", Place: InApp},
 }
 

@@ -41,10 +41,6 @@ func terminalCommands() []command {
 var legacyCommands = map[sheet.ID]func(args []string) (*report, error){
 	sheet.IDResonance: runResonance,
 	sheet.IDDiagnose:  runDiagnose,
-	sheet.IDVessel:    runVessel,
-	sheet.IDEnergy:    runEnergy,
-	sheet.IDOxygen:    runOxygen,
-	sheet.IDSPL:       runSPL,
 	sheet.IDPores:     runPores,
 }
 
@@ -52,9 +48,5 @@ var legacyCommands = map[sheet.ID]func(args []string) (*report, error){
 var legacySummaries = map[sheet.ID]string{
 	sheet.IDResonance: "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps",
 	sheet.IDDiagnose:  "gas temperature or mixture fraction from a measured resonance frequency",
-	sheet.IDVessel:    "wall stresses, minimum wall and MAWP of a cylindrical vessel (safety)",
-	sheet.IDEnergy:    "stored energy of a gas charge and its TNT equivalent (safety)",
-	sheet.IDOxygen:    "oxygen left in a room after a gas release (safety)",
-	sheet.IDSPL:       "sound pressure level of a pressure amplitude against hearing limits (safety)",
 	sheet.IDPores:     "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator",
 }

@@ -75,14 +75,17 @@ func TestVesselCommand(t *testing.T) {
 	if u := o.Results["hoop_stress"].Unit; u != "Pa" {
 		t.Errorf("hoop_stress unit %q", u)
 	}
-	// 30 bar absolute is 1.01325 bar less load than 30 barg.
-	a := runSafetyJSON(t, "vessel", "--pressure", "30bar", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa")
+	// 30 bar absolute is 1.01325 bar less load than 30 barg; a bare
+	// "30 bar" is read as gauge, as a gauge shows it (issue 12).
+	a := runSafetyJSON(t, "vessel", "--pressure", "30bara", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa")
 	approx(t, "hoop difference", o.num(t, "hoop_stress")-a.num(t, "hoop_stress"), 101325*0.005636/0.000636, 1e-9)
 	// The MAWP depends on the wall only, not on how the pressure was typed.
 	approx(t, "same MAWP", a.num(t, "max_allowable_pressure"), o.num(t, "max_allowable_pressure"), 1e-15)
+	bare := runSafetyJSON(t, "vessel", "--pressure", "30bar", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa")
+	approx(t, "bare bar read as gauge", bare.num(t, "hoop_stress"), o.num(t, "hoop_stress"), 1e-15)
 	// Without --mawp the test pressures rest on the shell's MAWP, with a
 	// warning that the vessel's MAWP is the lowest of its parts.
-	if !strings.Contains(strings.Join(o.Warnings, "\n"), "give it with --mawp") {
+	if !strings.Contains(strings.Join(o.Warnings, "\n"), "give the nameplate MAWP") {
 		t.Errorf("no warning about the shell-only MAWP: %q", o.Warnings)
 	}
 	// With the vessel's marked MAWP, 40 bar gauge: UG-99(b) 1.3 × 40 =
@@ -101,7 +104,14 @@ func TestVesselCommand(t *testing.T) {
 		t.Errorf("relief at the MAWP: %s", ok.Results["relief_at_or_below_mawp"].Value)
 	}
 	// Other code families: no invented formula, the reference instead.
-	eu := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--code-family", "eu")
+	// The design pressure is never the MAWP (issue 9): with no formula
+	// and no nameplate there is no test pressure; with the nameplate PS it
+	// is PED 7.4's.
+	none := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--code-family", "eu")
+	if _, ok := none.Results["eu_test_pressure"]; ok {
+		t.Error("eu family without a nameplate MAWP took the design pressure as PS")
+	}
+	eu := runSafetyJSON(t, "vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--code-family", "eu", "--mawp", "30barg")
 	if _, ok := eu.Results["minimum_wall_thickness"]; ok {
 		t.Error("eu family must not compute a UG-27 thickness")
 	}
@@ -124,7 +134,7 @@ func TestEnergyCommand(t *testing.T) {
 		t.Errorf("units %q %q", o.Results["tnt_equivalent"].Unit, o.Results["stored_energy"].Unit)
 	}
 	// 30 bar absolute stores less than 30 barg.
-	a := runSafetyJSON(t, "energy", "--gas", "helium", "--pressure", "30bar", "--volume", "50L")
+	a := runSafetyJSON(t, "energy", "--gas", "helium", "--pressure", "30bara", "--volume", "50L")
 	if a.num(t, "stored_energy") >= o.num(t, "stored_energy") {
 		t.Error("30 bar absolute stores as much as 30 barg")
 	}
@@ -214,22 +224,22 @@ func TestSafetyCommandsRejectImpossibleInput(t *testing.T) {
 		args []string
 		want string // part of the one-line message
 	}{
-		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "1.2"}, "joint-efficiency 1.2"},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "1.2"}, "--joint-efficiency \"1.2\": joint efficiency 1.2"},
 		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--joint-efficiency", "0"}, "joint efficiency 0"},
-		{[]string{"vessel", "--pressure", "0.5bar", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "below the atmosphere"},
+		{[]string{"vessel", "--pressure", "0.5bara", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "below the atmosphere"},
 		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "0mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa"}, "inner radius 0 m"},
-		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--mawp", "0.5bar"}, "--mawp \"0.5bar\""},
-		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--relief-set", "0.5bar"}, "--relief-set \"0.5bar\""},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--mawp", "0.5bara"}, "--mawp \"0.5bara\""},
+		{[]string{"vessel", "--pressure", "30barg", "--inner-radius", "50mm", "--wall-thickness", "6mm", "--allowable-stress", "138MPa", "--relief-set", "0.5bara"}, "--relief-set \"0.5bara\""},
 		{[]string{"oxygen", "--release", "40m3", "--room", "30m3"}, "release volume 40 m³ is outside the valid range 0–30 m³"},
-		{[]string{"oxygen", "--room", "30m3"}, "give --release"},
+		{[]string{"oxygen", "--room", "30m3"}, "--release is required"},
 		{[]string{"oxygen", "--release-from-cylinder", "50L", "--room", "30m3"}, "--fill-pressure is required"},
 		{[]string{"oxygen", "--release-from-vessel", "50L", "--room", "30m3"}, "--vessel-pressure is required"},
-		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "0.5bar", "--room", "30m3"}, "--vessel-pressure \"0.5bar\": is 50000 Pa absolute, below the atmosphere"},
+		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "0.5bara", "--room", "30m3"}, "--vessel-pressure \"0.5bara\": is 50000 Pa absolute, below the atmosphere"},
 		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "30barg", "--vessel-temperature", "5K", "--room", "30m3"}, "--vessel-temperature \"5K\""},
 		{[]string{"energy", "--gas", "helium", "--pressure", "1atm", "--volume", "50L"}, "no energy is stored"},
 		{[]string{"spl", "--amplitude", "0Pa"}, "pressure amplitude 0 Pa"},
 		{[]string{"spl", "--amplitude", "1barg"}, "neither gauge nor absolute"},
-		{[]string{"spl", "--amplitude", "-3Pa"}, "--amplitude \"-3Pa\": is negative"},
+		{[]string{"spl", "--amplitude", "-3Pa"}, "--amplitude \"-3Pa\""},
 		{[]string{"spl", "--amplitude=-3Pa"}, "is negative"},
 	}
 	for _, c := range cases {
