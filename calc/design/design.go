@@ -321,7 +321,7 @@ func (sv *solver) check(res *Result) error {
 	if res.Margin < 0 {
 		return &UnreachableError{Nearest: *res, Problem: fmt.Sprintf(
 			"with %s at %s in a %s tube, the lowest onset found is %s, above the %s the heater reaches; the nearest design (returned) needs %s more. A higher mean pressure, a wider tube or a hotter heater may reach it",
-			t.Gas, units.Format(t.MeanPressure, units.DimPressure), mm(t.Diameter, 1),
+			t.Gas, pressureText(t.MeanPressure), mm(t.Diameter, 1),
 			units.Format(on.HotTemperature, units.DimTemperature), units.Format(t.HotTemperature, units.DimTemperature),
 			units.Format(-res.Margin, units.DimTemperatureDifference))}
 	}
@@ -340,7 +340,7 @@ func (sv *solver) noOnset(res Result) (Result, error) {
 	}
 	return res, &UnreachableError{Nearest: res, Problem: fmt.Sprintf(
 		"no stack of this kind in a %s tube with %s at %s has an onset below %s (eight times ambient): the losses outweigh any gain. Try a higher mean pressure or a wider tube",
-		mm(sv.t.Diameter, 1), sv.t.Gas, units.Format(sv.t.MeanPressure, units.DimPressure), units.Format(8*sv.t.Ambient, units.DimTemperature))}
+		mm(sv.t.Diameter, 1), sv.t.Gas, pressureText(sv.t.MeanPressure), units.Format(8*sv.t.Ambient, units.DimTemperature))}
 }
 
 // cautions are the cautions of a built engine.
@@ -352,7 +352,7 @@ func cautions(t *Target, onset float64) []string {
 		"This is a linear estimate: real onset also depends on heat leaks, streaming and construction details; approach it slowly.",
 	}
 	if t.MeanPressure > 1.5e5 {
-		c = append(c, safety.CautionGeneral, fmt.Sprintf("Pressure: the tube is charged to %s absolute; it must be rated for that at the hot temperature. Defer to local pressure-vessel codes and licensed practice.", units.Format(t.MeanPressure, units.DimPressure)))
+		c = append(c, safety.CautionGeneral, fmt.Sprintf("Pressure: the tube is charged to %s absolute; it must be rated for that at the hot temperature. Defer to local pressure-vessel codes and licensed practice.", pressureText(t.MeanPressure)))
 	}
 	return c
 }
@@ -373,7 +373,7 @@ func rules(set Settings) []string {
 func (sv *solver) notes(res *Result) string {
 	t := sv.t
 	return fmt.Sprintf("Designed by Tubewright for %s Hz with %s at %s, heater up to %s, ambient %s, %s, %s stack. Check the onset with the onset solve before building.",
-		trim(t.Frequency), t.Gas, units.Format(t.MeanPressure, units.DimPressure), units.Format(t.HotTemperature, units.DimTemperature),
+		trim(t.Frequency), t.Gas, pressureText(t.MeanPressure), units.Format(t.HotTemperature, units.DimTemperature),
 		units.Format(t.Ambient, units.DimTemperature), t.Ends, t.Stack)
 }
 

@@ -6,6 +6,7 @@ import (
 	"strconv"
 
 	"tubewright/calc/linear"
+	"tubewright/calc/units"
 	"tubewright/gasprops"
 )
 
@@ -203,3 +204,17 @@ func frac(v float64) string { return fmt.Sprintf("%.4f", v) }
 
 // trimFull writes v with all the digits it needs to read back exactly.
 func trimFull(v float64) string { return strconv.FormatFloat(v, 'f', -1, 64) }
+
+// pressureText writes a pressure for people without exponents: in bar
+// from 0.1 bar up, in Pa below.
+func pressureText(p float64) string {
+	unit := "bar"
+	if p < 1e4 {
+		unit = "Pa"
+	}
+	s, err := units.FormatIn(p, unit)
+	if err != nil {
+		return units.Format(p, units.DimPressure)
+	}
+	return s
+}

@@ -175,7 +175,7 @@ func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 	best, status, iters := hp.search(g0)
 	res.Status, res.Iterations = status, iters
 	if best == nil {
-		return res, &UnreachableError{Problem: fmt.Sprintf("no heat pump of this kind in a %s tube with %s at %s could be solved at a %s drive", mm(t.Diameter, 1), t.Gas, units.Format(t.MeanPressure, units.DimPressure), units.Format(t.DriverAmplitude, units.DimPressure))}
+		return res, &UnreachableError{Problem: fmt.Sprintf("no heat pump of this kind in a %s tube with %s at %s could be solved at a %s drive", mm(t.Diameter, 1), t.Gas, pressureText(t.MeanPressure), pressureText(t.DriverAmplitude))}
 	}
 	res.Geometry = *best
 	limited := hp.solves >= set.MaxSolves
@@ -191,7 +191,7 @@ func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 	case res.Margin < 0:
 		return res, &UnreachableError{Problem: fmt.Sprintf(
 			"the largest span found at a %s drive is %s (cold side %s), less than the wanted %s; the nearest design is returned. A larger drive amplitude, a higher mean pressure or a gas of lower Prandtl number may reach it",
-			units.Format(t.DriverAmplitude, units.DimPressure), units.Format(res.Span, units.DimTemperatureDifference),
+			pressureText(t.DriverAmplitude), units.Format(res.Span, units.DimTemperatureDifference),
 			units.Format(res.Pump.ColdTemperature, units.DimTemperature), units.Format(want, units.DimTemperatureDifference))}
 	case t.MaxLength > 0 && res.Geometry.Length() > t.MaxLength:
 		return res, &UnreachableError{Problem: fmt.Sprintf("the target needs a %s tube, longer than the longest %s; choose a higher frequency", units.Format(res.Geometry.Length(), units.DimLength), units.Format(t.MaxLength, units.DimLength))}
@@ -505,7 +505,7 @@ func (hp *pumpSolver) write(res *HeatPumpResult) error {
 		"This is a linear estimate at zero load: heat leaks through the stack and the walls lower the span; approach it slowly.",
 	}
 	if t.MeanPressure > 1.5e5 {
-		res.Cautions = append(res.Cautions, safety.CautionGeneral, fmt.Sprintf("Pressure: the tube is charged to %s absolute; the driver housing and the tube must be rated for it. Defer to local pressure-vessel codes and licensed practice.", units.Format(t.MeanPressure, units.DimPressure)))
+		res.Cautions = append(res.Cautions, safety.CautionGeneral, fmt.Sprintf("Pressure: the tube is charged to %s absolute; the driver housing and the tube must be rated for it. Defer to local pressure-vessel codes and licensed practice.", pressureText(t.MeanPressure)))
 	}
 	return nil
 }
@@ -527,7 +527,7 @@ func (hp *pumpSolver) file(g HeatPumpGeometry, f float64) linear.DeviceFile {
 		MeanPressure:       fmt.Sprintf("%s bar", trimFull(t.MeanPressure/1e5)),
 		AmbientTemperature: trimFull(t.Ambient) + " K",
 		Notes: fmt.Sprintf("Designed by Tubewright for a span of %s at a %s drive with %s; drive near %s Hz once cold.",
-			units.Format(t.wanted(), units.DimTemperatureDifference), units.Format(t.DriverAmplitude, units.DimPressure), t.Gas, fmt.Sprintf("%.2f", f)),
+			units.Format(t.wanted(), units.DimTemperatureDifference), pressureText(t.DriverAmplitude), t.Gas, fmt.Sprintf("%.2f", f)),
 		PartsList: []linear.PartFile{
 			{Kind: linear.KindDriver, Label: "driver", Diameter: d, PressureAmplitude: trimFull(t.DriverAmplitude) + " Pa", Frequency: fmt.Sprintf("%.4f Hz", f)},
 			{Kind: linear.KindTube, Label: "driver space", Length: mm(g.DriverSpace, 3), Diameter: d, Temperature: "ambient"},

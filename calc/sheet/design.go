@@ -1,0 +1,225 @@
+package sheet
+
+import (
+	"errors"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"tubewright/calc/design"
+	"tubewright/calc/units"
+)
+
+// IDDesign identifies the design-from-a-target calculator.
+const IDDesign ID = "design"
+
+// designSheet is the design calculator: from a target frequency, gas,
+// pressure, heater temperature and tube to a complete engine in the device
+// file format (calc/design's Design), with its onset, margin and
+// sensitivity table. With --device-out the device file is written.
+var designSheet = &Sheet{
+	ID:      IDDesign,
+	Title:   "Design from a target",
+	Summary: "From a frequency, gas, pressure and heater temperature to an engine that starts: every part's length, the stack's pores, the onset with its margin and what moves it",
+	Inputs: []Input{
+		GasInput("gas", ""),
+		noPM(MeanPressureInput("pressure", "Mean pressure", ""), "10 bar"),
+		{Key: "frequency", Label: "Target frequency", Kind: Quantity, Dim: units.DimFrequency, Example: "300 Hz",
+			Min: 1, Max: 20000, Hint: "the frequency the engine should sing at, e.g. 300 Hz", Share: ShareFrequency},
+		noPM(TemperatureInput("hot", "Hottest the heater reaches", "", "650 K"), ""),
+		noPM(TemperatureInput("ambient", "Ambient (cooler) temperature", "295 K", ""), ""),
+		{Key: "diameter", Label: "Tube inside diameter", Kind: Quantity, Dim: units.DimLength, Example: "50 mm",
+			Min: 1e-3, Max: 2, Hint: "inside diameter of the tube, e.g. 50 mm or 2 in"},
+		{Key: "ends", Label: "Tube ends", Kind: Pick, Default: design.HalfWave.String(),
+			Hint: "closed-closed (a half-wave tube) or closed-open (a quarter-wave tube, open at the far end)",
+			Choices: []Choice{
+				{Key: design.HalfWave.String(), Words: "Closed at both ends (half-wave)", Value: design.HalfWave},
+				{Key: design.QuarterWave.String(), Words: "Closed at the hot end, open at the far end (quarter-wave)", Value: design.QuarterWave},
+			}},
+		{Key: "stack", Label: "Stack made of", Kind: Pick, Default: design.Plates.String(),
+			Hint: "plates, round-pores (capillaries or ceramic cells), screens or metal-wool",
+			Choices: []Choice{
+				{Key: design.Plates.String(), Words: "Parallel plates", Value: design.Plates},
+				{Key: design.RoundPores.String(), Words: "Round pores (capillaries, ceramic cells)", Value: design.RoundPores},
+				{Key: design.Screens.String(), Words: "Stacked woven screens", Value: design.Screens},
+				{Key: design.MetalWool.String(), Words: "Metal wool", Value: design.MetalWool},
+			}},
+		{Key: "wire", Label: "Wire or fibre diameter", Kind: Quantity, Dim: units.DimLength, Optional: true,
+			Min: 1e-6, Max: 2e-3, Advanced: true,
+			Hint: "of screens or metal wool, e.g. 0.1 mm or 50 um (empty: 0.1 mm for screens, 50 µm for wool)"},
+		{Key: "max-length", Label: "Longest tube you can build", Kind: Quantity, Dim: units.DimLength, Optional: true,
+			Min: 0, MinOpen: true, Max: 100, Advanced: true, Hint: "e.g. 1.2 m (empty: no limit)"},
+		{Key: "min-gap", Label: "Smallest gap you can make", Kind: Quantity, Dim: units.DimLength, Optional: true,
+			Min: 0, MinOpen: true, Max: 0.05, Advanced: true,
+			Hint: "plate gap, pore diameter, screen opening or the wool's hydraulic diameter, e.g. 0.3 mm (empty: no limit)"},
+		{Key: "device-out", Label: "Write the device file to", Kind: Text, Optional: true, Advanced: true,
+			Hint: "a file name, e.g. d.json: the designed device is written there (replaced whole, never half-written)"},
+	},
+	About: "The stack's hydraulic radius starts at 1.5 δκ (1–2 δκ, common practice; Tijani et al. 2002; Swift 2002), its place where Swift's (1988) short-stack onset estimate is lowest, " +
+		"then position, length and pore size are chosen by minimising the onset temperature of the linear onset solver (gonum Nelder-Mead), " +
+		"each candidate's resonator length solved by Brent's method for the target frequency. Exchangers are as long as the peak-to-peak gas displacement at a 3 % working amplitude, " +
+		"the stack at least twice that (common practice). The design's file is read back and solved by the same onset solve as the Engine onset calculator.",
+	Examples: []string{
+		"twcalc design --gas helium --pressure 10bar --frequency 300Hz --hot 650K --ambient 295K --diameter 50mm --ends closed-closed --device-out d.json",
+		"twcalc design --gas air --pressure 1atm --frequency 120Hz --hot 800K --diameter 30mm --ends closed-open --stack metal-wool --wire 50um --json",
+	},
+	Run: runDesign,
+}
+
+// noPM returns in without ± (the design takes none) and with example ex
+// when given.
+func noPM(in Input, ex string) Input {
+	in.PM = false
+	in.Hint = strings.TrimSuffix(in.Hint, "; ± or +- for an uncertainty")
+	if ex != "" {
+		in.Example = ex
+	}
+	return in
+}
+
+// designSubjects maps calc/design's range errors to the inputs they
+// concern.
+var designSubjects = map[units.Subject]string{
+	units.SubjectFrequency: "frequency",
+	units.SubjectPressure:  "pressure",
+}
+
+func runDesign(v *Values) (*Result, error) {
+	t := design.Target{
+		Frequency:      v.SI("frequency"),
+		Gas:            v.Text("gas"),
+		MeanPressure:   v.SI("pressure"),
+		HotTemperature: v.SI("hot"),
+		Ambient:        v.SI("ambient"),
+		Diameter:       v.SI("diameter"),
+		Ends:           v.Pick("ends").(design.Ends),
+		Stack:          v.Pick("stack").(design.StackKind),
+		WireDiameter:   v.SI("wire"),
+		MaxLength:      v.SI("max-length"),
+		MinGap:         v.SI("min-gap"),
+	}
+	if t.HotTemperature <= t.Ambient {
+		return nil, v.Blame(fmt.Errorf("the heater's %s must be above the ambient %s", units.Format(t.HotTemperature, units.DimTemperature), units.Format(t.Ambient, units.DimTemperature)), "hot")
+	}
+	res, err := design.Design(t, nil)
+	var ue *design.UnreachableError
+	switch {
+	case errors.As(err, &ue):
+		res = ue.Nearest
+	case err != nil:
+		return nil, v.BlameSubject(err, designSubjects)
+	}
+	if res.Onset == nil {
+		return nil, err
+	}
+	r := &Result{}
+	designRows(r, &res)
+	if ue != nil {
+		r.Check("reachable", "Target reached", "no: the nearest design is shown", Fail, ue.Problem)
+	} else {
+		r.Check("reachable", "Target reached", "yes", Pass, fmt.Sprintf("onset within 1 %% of %s and %s below the heater's %s",
+			units.Format(t.Frequency, units.DimFrequency), units.Format(res.Margin, units.DimTemperatureDifference), units.Format(t.HotTemperature, units.DimTemperature)))
+	}
+	if path := strings.TrimSpace(v.Text("device-out")); path != "" {
+		b, err := res.File.Marshal()
+		if err == nil {
+			err = writeAtomic(path, b)
+		}
+		if err != nil {
+			return nil, v.Blame(err, "device-out")
+		}
+		r.Note("Device file written to " + path + ".")
+	}
+	return r, nil
+}
+
+// designRows adds the design's figures, geometry, sensitivity and the
+// device itself.
+func designRows(r *Result, res *design.Result) {
+	on, g := res.Onset, res.Geometry
+	row := r.Add("onset_temperature", "Hot temperature at onset", on.HotTemperature, units.DimTemperature)
+	row.Show = "K"
+	r.Add("frequency", "Onset frequency", on.Frequency, units.DimFrequency)
+	r.Add("margin", "Heater margin above onset", res.Margin, units.DimTemperatureDifference).Note = "the heater's temperature less the onset temperature"
+	mm := func(key, label string, v float64, note string) {
+		row := r.Add(key, label, v, units.DimLength)
+		row.Show, row.Note = "mm", note
+	}
+	r.Add("tube_length", "Whole tube", g.Length(), units.DimLength)
+	mm("hot_space", "Hot space (closed end to heater)", g.HotSpace, "at the hot temperature; insulate it")
+	mm("heater", "Heater", g.Heater, "")
+	mm("stack_position", "Stack hot face from the closed end", g.Position(), "")
+	mm("stack_length", "Stack", g.Stack, "")
+	mm("cooler", "Cooler", g.Cooler, "")
+	mm("resonator", "Resonator (cooler to far end)", g.Resonator, "")
+	mm("hydraulic_radius", "Stack hydraulic radius", g.HydraulicRadius, fmt.Sprintf("%.2f δκ", g.HydraulicRadius/res.ThermalDepth))
+	mm("gap", "Stack gap", g.Gap, gapNote(res.Target.Stack))
+	r.Add("porosity", "Stack porosity", g.Porosity, units.DimNone)
+	switch p := g.Pores; p.Shape {
+	case "plates":
+		mm("plate_thickness", "Plate thickness", p.Thickness, "")
+	case "circular":
+		mm("pore_radius", "Pore radius", p.Radius, "")
+	case "screens":
+		row := r.Add("mesh", "Screen mesh", p.Mesh, units.DimPerLength)
+		row.Show = "/in"
+	}
+	mm("thermal_depth", "Thermal penetration depth δκ", res.ThermalDepth, "at ambient temperature and the target frequency")
+	for _, s := range res.Sensitivity {
+		step, err := units.FormatIn(s.Step, "mm")
+		if s.Unit == "Pa" {
+			step, err = units.FormatIn(s.Step, "bar")
+		}
+		if err != nil {
+			step = units.Format(s.Step, units.DimLength)
+		}
+		r.Add("onset_change_"+s.Key, "Onset change for "+step+" more "+s.Quantity, s.OnsetChange, units.DimTemperatureDifference)
+		r.Add("frequency_change_"+s.Key, "Frequency change for "+step+" more "+s.Quantity, s.FrequencyChange, units.DimFrequency)
+	}
+	text := ""
+	if b, err := res.File.Marshal(); err == nil {
+		text = string(b)
+	}
+	r.AddObject("device", "Device file", res.File, text)
+	r.Warn(res.Warnings...)
+	r.Caution(res.Cautions...)
+	r.Note(res.Rules...)
+}
+
+// gapNote says what the gap of a stack kind is.
+func gapNote(k design.StackKind) string {
+	switch k {
+	case design.RoundPores:
+		return "pore diameter"
+	case design.Screens:
+		return "opening between wires"
+	case design.MetalWool:
+		return "hydraulic diameter 4 r_h"
+	}
+	return "between plates"
+}
+
+// writeAtomic writes data to path through a temporary file in the same
+// folder and a rename, so that the file is never left half-written.
+func writeAtomic(path string, data []byte) error {
+	f, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".tmp*")
+	if err != nil {
+		return err
+	}
+	tmp := f.Name()
+	if _, err := f.Write(data); err != nil {
+		f.Close()
+		os.Remove(tmp)
+		return err
+	}
+	if err := f.Close(); err != nil {
+		os.Remove(tmp)
+		return err
+	}
+	if err := os.Rename(tmp, path); err != nil {
+		os.Remove(tmp)
+		return err
+	}
+	return nil
+}
