@@ -49,7 +49,7 @@ var catalog = []Entry{
 	{ID: IDResonance, Title: "Tube resonance", Summary: "Frequency from length or length from frequency of a quarter- or half-wave tube, with end corrections, Q and bandwidth", Place: Everywhere},
 	{ID: IDDiagnose, Title: "What the pitch says", Summary: "Gas temperature or mixture fraction from a measured resonance frequency, with its ±", Place: Everywhere},
 	{ID: IDDepths, Sheet: depthsSheet, Place: Everywhere},
-	{ID: IDPores, Title: "Pores and packing", Summary: "Plates, pores, pins, screens, metal wool or honeycomb: porosity, hydraulic radius, Rott's functions and a verdict for a stack or regenerator", Place: Everywhere},
+	{ID: IDPores, Sheet: poresSheet, Place: Everywhere},
 	{ID: IDPlacement, Sheet: placementSheet, Place: Everywhere},
 	{ID: IDOnset, Sheet: onsetSheet, Place: Everywhere},
 	{ID: IDHeatPump, Sheet: heatPumpSheet, Place: Everywhere},

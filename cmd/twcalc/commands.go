@@ -41,12 +41,10 @@ func terminalCommands() []command {
 var legacyCommands = map[sheet.ID]func(args []string) (*report, error){
 	sheet.IDResonance: runResonance,
 	sheet.IDDiagnose:  runDiagnose,
-	sheet.IDPores:     runPores,
 }
 
 // legacySummaries are the help lines of the legacy commands.
 var legacySummaries = map[sheet.ID]string{
 	sheet.IDResonance: "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps",
 	sheet.IDDiagnose:  "gas temperature or mixture fraction from a measured resonance frequency",
-	sheet.IDPores:     "porosity, hydraulic radius, Rott's f and a verdict for a stack or regenerator",
 }

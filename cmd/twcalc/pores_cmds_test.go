@@ -186,17 +186,19 @@ func TestPoresErrors(t *testing.T) {
 		args  []string
 		words []string
 	}{
-		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--wire-diameter", "0.2mm"}, []string{"--wire-diameter 0.2mm", "--mesh-per-inch 200", "overlap"}},
-		{[]string{"--shape", "plates"}, []string{"--half-gap"}},
-		{[]string{"--shape", "pins", "--pin-radius", "0.5mm", "--pitch", "0.8mm"}, []string{"--pin-radius", "--pitch", "touch"}},
-		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--packed-mass", "1kg", "--material", "copper", "--packed-volume", "50cm3"}, []string{"--packed-mass 1kg", "solid material"}},
+		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--wire-diameter", "0.2mm"}, []string{`--wire-diameter "0.2mm"`, "mesh count 200", "overlap"}},
+		{[]string{"--shape", "plates"}, []string{"--gap is required", "half-gap"}},
+		{[]string{"--shape", "pins", "--pin-radius", "0.5mm", "--pitch", "0.8mm"}, []string{`--pitch "0.8mm"`, "pin radius 0.5mm", "touch"}},
+		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--packed-mass", "1kg", "--material", "copper", "--packed-volume", "50cm3"}, []string{`--packed-mass "1kg"`, "solid material"}},
 		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--packed-mass", "10g", "--material", "gold", "--packed-volume", "50cm3"}, []string{"--material", "gold", "steel"}},
-		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--mesh-per-mm", "8", "--wire-diameter", "41um"}, []string{"--mesh-per-inch", "--mesh-per-mm"}},
-		{[]string{"--shape", "honeycomb", "--cells-per-square-inch", "400", "--wall-thickness", "2mm"}, []string{"--wall-thickness 2mm", "pitch"}},
-		{[]string{"--shape", "plates", "--half-gap", "0mm"}, []string{"half", "greater than zero"}},
+		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--mesh-per-mm", "8", "--wire-diameter", "41um"}, []string{"--mesh-per-mm", "mesh-per-inch"}},
+		{[]string{"--shape", "honeycomb", "--cells-per-square-inch", "400", "--wall-thickness", "2mm"}, []string{`--wall-thickness "2mm"`, "pitch"}},
+		{[]string{"--shape", "plates", "--half-gap", "0mm"}, []string{"--half-gap", "half", "greater than 0"}},
 		// a flag of another shape is refused, not silently ignored
-		{[]string{"--shape", "circular", "--radius", "0.3mm", "--half-gap", "1mm"}, []string{"--half-gap is for --shape plates", "--radius"}},
+		{[]string{"--shape", "circular", "--radius", "0.3mm", "--half-gap", "1mm"}, []string{`--half-gap "1mm": is for the plates shape`, "radius"}},
 		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--solid-fraction", "0.2", "--wire-diameter", "30um"}, []string{"--wire-diameter", "screens"}},
+		// a size given twice, in full and as its half
+		{[]string{"--shape", "plates", "--gap", "0.5mm", "--half-gap", "0.25mm"}, []string{"--half-gap", "not both"}},
 	}
 	for _, c := range cases {
 		var o, e bytes.Buffer
