@@ -34,17 +34,11 @@ func terminalCommands() []command {
 		}
 		out = append(out, command{name: string(e.ID), summary: legacySummaries[e.ID], run: run})
 	}
-	return out
+	return append(out, libraryCommands...)
 }
 
 // legacyCommands are the commands not yet built from a description.
-var legacyCommands = map[sheet.ID]func(args []string) (*report, error){
-	sheet.IDResonance: runResonance,
-	sheet.IDDiagnose:  runDiagnose,
-}
+var legacyCommands = map[sheet.ID]func(args []string) (*report, error){}
 
 // legacySummaries are the help lines of the legacy commands.
-var legacySummaries = map[sheet.ID]string{
-	sheet.IDResonance: "frequency or length of a tube, zoned tube or Helmholtz resonator, with Q and sweeps",
-	sheet.IDDiagnose:  "gas temperature or mixture fraction from a measured resonance frequency",
-}
+var legacySummaries = map[sheet.ID]string{}

@@ -9,6 +9,7 @@ import (
 
 	"tubewright/calc/sheet"
 	"tubewright/calc/units"
+	"tubewright/ui/store"
 )
 
 // sheetCommand makes the twcalc subcommand of a calculator description:
@@ -40,7 +41,10 @@ func runSheet(s *sheet.Sheet, args []string) (*report, error) {
 	fs := flag.NewFlagSet(string(s.ID), flag.ContinueOnError)
 	fs.SetOutput(io.Discard)
 	var asJSON bool
+	var logTo, note string
 	fs.BoolVar(&asJSON, "json", false, "print one JSON object instead of a table")
+	fs.StringVar(&logTo, "log-to", "", "add the result to the log of this export file of the app")
+	fs.StringVar(&note, "note", "", "a note for the logged result")
 	vals := map[string]*textValue{}
 	var positional []*sheet.Input
 	for i := range s.Inputs {
@@ -89,6 +93,11 @@ func runSheet(s *sheet.Sheet, args []string) (*report, error) {
 	res, err := s.Evaluate(texts)
 	if err != nil {
 		return nil, flagError(s, err)
+	}
+	if logTo != "" {
+		if err := appendLog(logTo, store.EntryOf(s, texts, res, note)); err != nil {
+			return nil, err
+		}
 	}
 	return sheetReport(res), nil
 }
@@ -189,6 +198,8 @@ func sheetHelp(s *sheet.Sheet) string {
 		b.WriteString("\n")
 	}
 	b.WriteString("  --json\n        print one JSON object instead of a table\n")
+	b.WriteString("  --log-to FILE\n        add the result to the log of an export file of the app (made when missing)\n")
+	b.WriteString("  --note TEXT\n        a note for the logged result\n")
 	if len(s.Examples) > 0 {
 		b.WriteString("\nexamples:\n")
 		for _, e := range s.Examples {

@@ -77,8 +77,8 @@ type Row struct {
 	Shown       string  `json:"shown"`
 }
 
-// Verdict is a logged check: which, its outcome (pass, warn or fail) and
-// why.
+// Verdict is a check with its outcome ("pass", "warn" or "fail") and why,
+// in the calculator's words: in a logged result and in a safety pass.
 type Verdict struct {
 	Check   string `json:"check"`
 	Outcome string `json:"outcome"`
