@@ -109,7 +109,8 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 		y[i] = w[i] * seg[i]
 	}
 	bin := 2 * math.Pi / float64(len(seg))
-	omega := refinePeak(y, 2*math.Pi*sp.grandke(k0)/fs, 0.75*bin, 1e-4*bin)
+	wlo, whi := 2*math.Pi*lowHz/fs, 2*math.Pi*highHz/fs
+	omega := refinePeak(y, sp.grandke(k0)*2*math.Pi/fs, 0.75*bin, wlo, whi, 1e-4*bin)
 
 	// 3. envelope, noise, decay
 	env := demodEnvelope(x, fs, omega*fs/(2*math.Pi))
@@ -152,7 +153,7 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	fw := hann(len(fseg))
 	fit := newSineFit(fseg, fw, g)
 	if fit.uu > 0 {
-		omega = fit.refine(omega, 0.25*bin, searchTol*bin)
+		omega = goldenMax(fit.power, math.Max(wlo, omega-0.25*bin), math.Min(whi, omega+0.25*bin), searchTol*bin)
 	}
 	f := omega * fs / (2 * math.Pi)
 	res.Frequency = f

@@ -38,10 +38,11 @@ func demodEnvelope(x []float64, fs, f0 float64) envelope {
 	m := max(1, int(math.Round(2*fs/f0)))
 	d := max(1, m/4)
 	span := 3*m - 2 // support of the cascade
-	e := envelope{m: m, d: d, noiseGain: tripleBoxGain(m)}
+	e := envelope{m: m, d: d}
 	if len(x) < span {
 		return e
 	}
+	e.noiseGain = tripleBoxGain(m)
 	n := len(x)
 	e.t = make([]float64, 0, (n-span)/d+2)
 	e.a = make([]float64, 0, (n-span)/d+2)

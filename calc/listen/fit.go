@@ -52,11 +52,6 @@ func (s sineFit) power(omega float64) float64 {
 	return (d*r1*r1 - 2*b*r1*r2 + a*r2*r2) / det
 }
 
-// refine maximises P over [ω0 - h, ω0 + h] to a width of tol.
-func (s sineFit) refine(omega0, h, tol float64) float64 {
-	return goldenMax(s.power, omega0-h, omega0+h, tol)
-}
-
 // envelopeShape returns the amplitude of the resonance at each sample of
 // x[start:start+n] from the envelope, less the noise in power
 // (√(a² - noise²)), linearly interpolated between envelope points and held

@@ -185,14 +185,16 @@ func goldenMax(f func(float64) float64, a, b, tol float64) float64 {
 }
 
 // refinePeak maximises the windowed periodogram |Σ y_n e^{-iωn}|² (y the
-// windowed samples) over ω in [ω0 - h, ω0 + h] to a width of tol
-// (rad/sample). The maximum of the periodogram is the maximum-likelihood
-// estimate of one tone's frequency in white noise (Rife & Boorstyn,
-// "Single-tone parameter estimation from discrete-time observations", IEEE
-// Trans. Inf. Theory IT-20(5), 591–598, 1974); the window keeps other
-// components (harmonics, hum) from pulling it. Its magnitude is symmetric
-// about the tone's frequency for any real window or amplitude profile,
-// which the Grandke formula is not built for.
-func refinePeak(y []float64, omega0, h, tol float64) float64 {
-	return goldenMax(func(w float64) float64 { return dtftPower(y, w) }, omega0-h, omega0+h, tol)
+// windowed samples) over ω in [ω0 - h, ω0 + h] ∩ [lo, hi] to a width of
+// tol (all in rad/sample; ω0 is first moved into [lo, hi]). The maximum of
+// the periodogram is the maximum-likelihood estimate of one tone's
+// frequency in white noise (Rife & Boorstyn, "Single-tone parameter
+// estimation from discrete-time observations", IEEE Trans. Inf. Theory
+// IT-20(5), 591–598, 1974); the window keeps other components (harmonics,
+// hum) from pulling it. Its magnitude is symmetric about the tone's
+// frequency for any real window or amplitude profile, which the Grandke
+// formula is not built for.
+func refinePeak(y []float64, omega0, h, lo, hi, tol float64) float64 {
+	omega0 = math.Max(lo, math.Min(hi, omega0))
+	return goldenMax(func(w float64) float64 { return dtftPower(y, w) }, math.Max(lo, omega0-h), math.Min(hi, omega0+h), tol)
 }

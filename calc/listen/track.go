@@ -76,7 +76,7 @@ func frames(x []float64, fs, lowHz, highHz float64) []TrackPoint {
 					y[i] = seg[i] * w[i]
 				}
 				bin := 2 * math.Pi / float64(fl)
-				p.Frequency = refinePeak(y, 2*math.Pi*sp.grandke(k)/fs, 0.6*bin, 1e-3*bin) * fs / (2 * math.Pi)
+				p.Frequency = refinePeak(y, 2*math.Pi*sp.grandke(k)/fs, 0.6*bin, 2*math.Pi*lowHz/fs, 2*math.Pi*highHz/fs, 1e-3*bin) * fs / (2 * math.Pi)
 			}
 		}
 		out = append(out, p)

@@ -224,7 +224,7 @@ func readData(r io.Reader, f *fmtChunk, size uint32, notes []string) (*Recording
 		Channels:   f.channels,
 		Encoding:   Encoding{Float: f.format == formatFloat, Bits: f.bits},
 		Notes:      notes,
-		Samples:    make([]float64, 0, min(want, 1<<20)),
+		Samples:    make([]float64, 0, min(want, 1<<16)),
 	}
 	dec := decoder(f)
 	clips := make([]clipCounter, f.channels)
