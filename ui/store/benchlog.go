@@ -53,6 +53,26 @@ type Item struct {
 	Note     string   `json:"note,omitempty"`     // the user's note
 	Numbers  []Number `json:"numbers,omitempty"`  // results of the inline calculator
 	Cautions []string `json:"cautions,omitempty"` // cautions shown beside those numbers
+	// Inputs are what the user typed into the item's calculator.
+	Inputs []ItemInput `json:"inputs,omitempty"`
+	// Verdicts are the item's checks with their outcomes.
+	Verdicts []ItemVerdict `json:"verdicts,omitempty"`
+}
+
+// ItemVerdict is one check of an item: its stable key, its outcome
+// ("pass", "warn" or "fail") and why, in the calculator's words.
+type ItemVerdict struct {
+	Check   string `json:"check"`
+	Outcome string `json:"outcome"`
+	Why     string `json:"why"`
+}
+
+// ItemInput is one input of an item's calculator as typed: its stable
+// key, its label and the text.
+type ItemInput struct {
+	Key   string `json:"key"`
+	Label string `json:"label"`
+	Text  string `json:"text"`
 }
 
 // Number is one result with its unit, kept in SI so that the log can be read

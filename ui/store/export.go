@@ -36,6 +36,12 @@ func (p *Pass) Text() string {
 		if it.Note != "" {
 			fmt.Fprintf(&b, "      Note: %s\n", oneLine(it.Note))
 		}
+		for _, in := range it.Inputs {
+			fmt.Fprintf(&b, "      %s: %s\n", oneLine(in.Label), oneLine(in.Text))
+		}
+		for _, v := range it.Verdicts {
+			fmt.Fprintf(&b, "      %s %s: %s\n", strings.ToUpper(oneLine(v.Outcome)), oneLine(v.Check), oneLine(v.Why))
+		}
 		for _, n := range it.Numbers {
 			shown := n.Shown
 			if shown == "" {
