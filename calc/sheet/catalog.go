@@ -46,8 +46,8 @@ type Entry struct {
 // shows them and the terminal lists them. Adding a calculator adds one line.
 var catalog = []Entry{
 	{ID: IDGas, Sheet: gasSheet, Place: Everywhere},
-	{ID: IDResonance, Title: "Tube resonance", Summary: "Frequency from length or length from frequency of a quarter- or half-wave tube, with end corrections, Q and bandwidth", Place: Everywhere},
-	{ID: IDDiagnose, Title: "What the pitch says", Summary: "Gas temperature or mixture fraction from a measured resonance frequency, with its ±", Place: Everywhere},
+	{ID: IDResonance, Sheet: resonanceSheet, Place: Everywhere},
+	{ID: IDDiagnose, Sheet: diagnoseSheet, Place: Everywhere},
 	{ID: IDDepths, Sheet: depthsSheet, Place: Everywhere},
 	{ID: IDPores, Sheet: poresSheet, Place: Everywhere},
 	{ID: IDPlacement, Sheet: placementSheet, Place: Everywhere},

@@ -217,28 +217,3 @@ func TestResonanceBadInput(t *testing.T) {
 		}
 	}
 }
-
-// FuzzParseZones: any text gives zones with finite values or an error,
-// never a panic.
-func FuzzParseZones(f *testing.F) {
-	f.Add("0.1m,10mm,700K;0.4m,10mm,295K")
-	f.Add("1m,1in,20degC")
-	f.Add(";;,")
-	f.Add("0.1m,10mm")
-	f.Fuzz(func(t *testing.T, s string) {
-		zs, err := parseZones(s)
-		if err != nil {
-			return
-		}
-		if len(zs) == 0 || len(zs) > resonator.MaxZones {
-			t.Fatalf("%q: %d zones without error", s, len(zs))
-		}
-		for _, z := range zs {
-			for _, v := range []float64{z.Length, z.Radius, z.Temperature} {
-				if !finite(v) {
-					t.Fatalf("%q: non-finite zone %+v", s, z)
-				}
-			}
-		}
-	})
-}

@@ -1,0 +1,228 @@
+package sheet
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strings"
+
+	"tubewright/calc/resonator"
+	"tubewright/calc/units"
+)
+
+// MaxZoneModes is the most modes of a zoned tube listed at once: the
+// limit of resonator.ZonedModes (checked by this package's tests).
+const MaxZoneModes = 20
+
+// ZonePart names one value of a zone in a ZoneError.
+type ZonePart int
+
+// The parts of a zone. ZoneWhole is the zone as a whole (its text does
+// not have three values, or there are too many zones).
+const (
+	ZoneWhole ZonePart = iota
+	ZoneLength
+	ZoneRadius
+	ZoneTemperature
+)
+
+// String returns "length", "radius", "temperature" or "".
+func (p ZonePart) String() string {
+	switch p {
+	case ZoneLength:
+		return "length"
+	case ZoneRadius:
+		return "radius"
+	case ZoneTemperature:
+		return "temperature"
+	}
+	return ""
+}
+
+// ZoneError is an error about one zone of the "zones" input: which zone
+// (from 0; -1 for the list as a whole) and which of its values. It is the
+// reason of the *FieldError with Key "zones", so that a screen with a
+// field per zone can mark that field by comparing Zone and Part.
+type ZoneError struct {
+	Zone int
+	Part ZonePart
+	Err  error
+}
+
+// Error reads "zone 2 temperature: reason".
+func (e *ZoneError) Error() string {
+	if e.Zone < 0 {
+		return e.Err.Error()
+	}
+	name := fmt.Sprintf("zone %d", e.Zone+1)
+	if e.Part != ZoneWhole {
+		name += " " + e.Part.String()
+	}
+	return name + ": " + e.Err.Error()
+}
+
+// Unwrap returns the reason.
+func (e *ZoneError) Unwrap() error { return e.Err }
+
+// zoneDims are the dimensions of a zone's three values, in order.
+var zoneDims = [3]units.Dimension{units.DimLength, units.DimLength, units.DimTemperature}
+
+// SplitZones splits the text of the "zones" input, "LENGTH,RADIUS,
+// TEMPERATURE;..." into the three texts of each zone, trimmed, without
+// reading them. A zone without three values is a *ZoneError.
+func SplitZones(text string) ([][3]string, error) {
+	parts := strings.Split(text, ";")
+	if len(parts) > resonator.MaxZones {
+		return nil, &ZoneError{Zone: -1, Err: fmt.Errorf("%d zones: at most %d", len(parts), resonator.MaxZones)}
+	}
+	out := make([][3]string, len(parts))
+	for i, p := range parts {
+		f := strings.Split(p, ",")
+		if len(f) != 3 {
+			return nil, &ZoneError{Zone: i, Err: fmt.Errorf("%s: write LENGTH,RADIUS,TEMPERATURE, e.g. 100 mm, 12 mm, 600 K", quote(strings.TrimSpace(p)))}
+		}
+		for j := range f {
+			out[i][j] = strings.TrimSpace(f[j])
+		}
+	}
+	return out, nil
+}
+
+// JoinZones writes zone texts as the "zones" input reads them, the
+// inverse of SplitZones.
+func JoinZones(zones [][3]string) string {
+	parts := make([]string, len(zones))
+	for i, z := range zones {
+		parts[i] = strings.Join(z[:], ", ")
+	}
+	return strings.Join(parts, "; ")
+}
+
+// ParseZones reads the "zones" input: up to resonator.MaxZones zones from
+// the first end, each LENGTH,RADIUS,TEMPERATURE in any unit (a bare
+// temperature is kelvin), every value greater than zero. A zone takes no
+// ±: the zoned tube carries no uncertainty. Errors are *ZoneError.
+func ParseZones(text string) ([]resonator.Zone, error) {
+	texts, err := SplitZones(text)
+	if err != nil {
+		return nil, err
+	}
+	zs := make([]resonator.Zone, len(texts))
+	for i, z := range texts {
+		var v [3]float64
+		for j, s := range z {
+			part := ZonePart(j + 1)
+			q, err := units.ParseWith(s, zoneDims[j], units.Options{DefaultUnit: zoneDefaultUnit(part)})
+			switch {
+			case err != nil:
+			case !finite(q.Value) || !finite(q.Uncertainty):
+				err = errors.New("not a finite number")
+			case q.Uncertainty > 0:
+				err = errors.New("takes no ± here (the zoned tube carries no uncertainty); type the value alone")
+			case !(q.Value > 0):
+				err = units.NewRangeError(part.String(), q.Value, 0, math.Inf(1), units.SIUnit(zoneDims[j]))
+			}
+			if err != nil {
+				return nil, &ZoneError{Zone: i, Part: part, Err: err}
+			}
+			v[j] = q.Value
+		}
+		zs[i] = resonator.Zone{Length: v[0], Radius: v[1], Temperature: v[2]}
+	}
+	return zs, nil
+}
+
+func zoneDefaultUnit(p ZonePart) string {
+	if p == ZoneTemperature {
+		return "K"
+	}
+	return ""
+}
+
+// zonesInputs are the inputs of the zoned tube.
+func zonesInputs() []Input {
+	return []Input{
+		{Key: "zones", Label: "Zones from the first end", Kind: Text, Optional: true,
+			Example: "100 mm, 12 mm, 600 K; 400 mm, 12 mm, 20 degC",
+			Hint: fmt.Sprintf("LENGTH, RADIUS, TEMPERATURE of each zone from the first end (the closed end of a closed – open tube), zones apart by ;  e.g. 0.1 m, 10 mm, 700 K; 0.4 m, 10 mm, 295 K (up to %d zones)", resonator.MaxZones)},
+		{Key: "modes", Label: "Modes to list", Kind: Count, Default: "3", Min: 1, Max: MaxZoneModes,
+			Hint: fmt.Sprintf("how many modes of the zoned tube to list, 1 to %d", MaxZoneModes)},
+	}
+}
+
+// ZoneMode is one mode of a zoned tube in the "modes" result: JSON
+// {"mode":1,"frequency_Hz":..,"travel_time_frequency_Hz":..,"difference_Hz":..}.
+type ZoneMode struct {
+	Mode       int     `json:"mode"`
+	Frequency  float64 `json:"frequency_Hz"`
+	TravelTime float64 `json:"travel_time_frequency_Hz"`
+	Difference float64 `json:"difference_Hz"`
+}
+
+// zoneModesText lists the modes for people: "1: 347.6 Hz (travel time
+// 369.7 Hz); 2: ...".
+func zoneModesText(ms []ZoneMode) string {
+	parts := make([]string, len(ms))
+	for i, m := range ms {
+		parts[i] = fmt.Sprintf("%d: %s (travel time %s)", m.Mode,
+			units.Format(m.Frequency, units.DimFrequency), units.Format(m.TravelTime, units.DimFrequency))
+	}
+	return strings.Join(parts, "; ")
+}
+
+// runZones solves the zoned tube: the exact plane-wave modes with the
+// travel-time estimate beside each.
+func runZones(v *Values) (*Result, error) {
+	if !v.Has("zones") || strings.TrimSpace(v.Text("zones")) == "" {
+		return nil, tubeMissing(v, "zones")
+	}
+	zs, err := ParseZones(v.Text("zones"))
+	if err != nil {
+		return nil, v.Blame(err, "zones")
+	}
+	if err := tubeRequirePositive(v, "pressure"); err != nil {
+		return nil, err
+	}
+	mix, p, opts := v.Gas("gas"), v.SI("pressure"), GasOptions(v)
+	// Evaluate each zone's gas here, so that a temperature outside the gas
+	// model's range marks its own zone.
+	hot := 0.0
+	for i, z := range zs {
+		if _, err := mix.Properties(units.Temperature(z.Temperature), units.Pressure(p), opts); err != nil {
+			if re, ok := asRangeError(err); ok && re.Subject == units.SubjectPressure {
+				return nil, v.Blame(err, "pressure")
+			}
+			return nil, v.Blame(&ZoneError{Zone: i, Part: ZoneTemperature, Err: err}, "zones")
+		}
+		hot = max(hot, z.Temperature)
+	}
+	zt := resonator.ZonedTube{Ends: v.Pick("ends").(resonator.Ends), Correction: v.Pick("end-correction").(resonator.EndCorrection),
+		Zones: zs, Gas: mix, Pressure: p, GasOptions: opts}
+	res, err := zt.Modes(v.Count("modes"))
+	if err != nil {
+		return nil, v.Blame(err, "zones")
+	}
+	r := &Result{}
+	m := res.Modes[0]
+	r.Add("frequency", "Lowest mode", m.Frequency, units.DimFrequency).Note = "exact plane-wave mode of the zoned tube"
+	r.Add("travel_time_frequency", "Travel-time estimate of the lowest mode", m.TravelTime, units.DimFrequency).Note =
+		"adds up the time sound takes through each zone, ignoring reflections at the joints"
+	r.Add("difference", "Estimate minus exact", m.Difference, units.DimFrequency).Note = zoneDifferenceNote(m)
+	list := make([]ZoneMode, len(res.Modes))
+	for i, m := range res.Modes {
+		list[i] = ZoneMode{m.Number, m.Frequency, m.TravelTime, m.Difference}
+	}
+	r.AddObject("modes", fmt.Sprintf("First %d modes", len(list)), list, zoneModesText(list))
+	r.Warn(res.Warnings...)
+	tubeCautions(r, hot, p)
+	return r, nil
+}
+
+// zoneDifferenceNote says how far the travel-time estimate is off, in %.
+func zoneDifferenceNote(m resonator.ZoneMode) string {
+	word := "higher"
+	if m.Difference < 0 {
+		word = "lower"
+	}
+	return fmt.Sprintf("the estimate is %.2g %% %s than the exact mode", 100*math.Abs(m.Difference)/m.Frequency, word)
+}
