@@ -1,12 +1,9 @@
 package design
 
 import (
-	"bytes"
 	"errors"
 	"fmt"
 	"math"
-
-	"gonum.org/v1/gonum/optimize"
 
 	"tubewright/calc/linear"
 	"tubewright/calc/pore"
@@ -211,29 +208,15 @@ func (sv *solver) search(g0 Geometry, rhLo, rhHi float64) (*Geometry, string, in
 	var best *Geometry
 	bestTh := math.Inf(1)
 	lastLr := g0.Resonator
-	geometry := func(x []float64) (Geometry, float64) {
-		pen := 0.0
-		bound := func(v, lo, hi float64) float64 {
-			switch {
-			case v < lo:
-				pen += math.Log(lo / v)
-				return lo
-			case v > hi:
-				pen += math.Log(v / hi)
-				return hi
-			}
-			return v
-		}
-		pos := bound(pos0*math.Exp(x[0]), minHotSpace+minExchanger, positionMax(w))
-		dx := bound(dx0*math.Exp(x[1]), w.minStack(pos, sv.set.DriveRatio), w.lambda/8)
-		rh := bound(rh0*math.Exp(x[2]), rhLo, rhHi)
+	status, iters := minimize(func(x []float64) float64 {
+		var bx box
+		pos := bx.at(pos0, x[0], minHotSpace+minExchanger, positionMax(w))
+		dx := bx.at(dx0, x[1], w.minStack(pos, sv.set.DriveRatio), w.lambda/8)
+		rh := bx.at(rh0, x[2], rhLo, rhHi)
+		pen := bx.penalty
 		pores, phi, gap := poresFor(t.Stack, rh, t.wire())
 		g := Geometry{HydraulicRadius: rh, Porosity: phi, Pores: pores, Gap: gap, Resonator: lastLr}
 		t.place(&g, w, pos, dx, sv.set.DriveRatio)
-		return g, pen
-	}
-	prob := optimize.Problem{Func: func(x []float64) float64 {
-		g, pen := geometry(x)
 		r, err := sv.tune(&g, 1e-5)
 		if err != nil {
 			return 10*ta + 10*ta*pen
@@ -245,19 +228,8 @@ func (sv *solver) search(g0 Geometry, rhLo, rhHi float64) (*Geometry, string, in
 			best = &gg
 		}
 		return r.HotTemperature + 10*ta*pen
-	}}
-	settings := &optimize.Settings{
-		Converger:       &optimize.FunctionConverge{Absolute: 0.05, Iterations: 25},
-		FuncEvaluations: 250,
-	}
-	r, err := optimize.Minimize(prob, []float64{0, 0, 0}, settings, &optimize.NelderMead{SimplexSize: 0.2})
-	if err != nil {
-		if r == nil {
-			return best, err.Error(), 0
-		}
-		return best, r.Status.String() + ": " + err.Error(), r.MajorIterations
-	}
-	return best, r.Status.String(), r.MajorIterations
+	}, 3, 250, 25, 0.05)
+	return best, status, iters
 }
 
 // finish tunes the best geometry tightly and writes it.
@@ -276,13 +248,9 @@ func (sv *solver) write(res *Result) error {
 	t := sv.t
 	g := res.Geometry
 	res.File = t.file(g, fmt.Sprintf("Designed engine, %s Hz", trim(t.Frequency)), sv.notes(res))
-	b, err := res.File.Marshal()
+	d, err := readBack(&res.File)
 	if err != nil {
 		return err
-	}
-	d, err := linear.ParseDevice(bytes.NewReader(b))
-	if err != nil {
-		return fmt.Errorf("design: the written device does not read back (a bug): %w", err)
 	}
 	res.Device = d
 	on, err := linear.Onset(d, nil)

@@ -20,13 +20,13 @@ func ExampleDesign() {
 	}
 	g := r.Geometry
 	fmt.Printf("starts at %.0f K and %.1f Hz, below the heater's 650 K: %v\n", r.Onset.HotTemperature, r.Onset.Frequency, r.Margin > 0)
-	fmt.Printf("tube %.2f m long, plate gap %.2f mm (δκ %.2f mm)\n", g.Length(), g.Gap*1e3, r.ThermalDepth*1e3)
+	fmt.Printf("tube %.2f m long, plate gap %.1f mm (δκ %.2f mm)\n", g.Length(), g.Gap*1e3, r.ThermalDepth*1e3)
 	for _, p := range r.File.PartsList {
 		fmt.Printf("%s (%s)\n", p.Label, p.Kind)
 	}
 	// Output:
 	// starts at 353 K and 300.0 Hz, below the heater's 650 K: true
-	// tube 1.69 m long, plate gap 0.37 mm (δκ 0.14 mm)
+	// tube 1.69 m long, plate gap 0.4 mm (δκ 0.14 mm)
 	// closed end (closed-end)
 	// hot space (tube)
 	// heater (exchanger)

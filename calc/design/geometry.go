@@ -1,6 +1,7 @@
 package design
 
 import (
+	"bytes"
 	"fmt"
 	"math"
 	"strconv"
@@ -217,4 +218,18 @@ func pressureText(p float64) string {
 		return units.Format(p, units.DimPressure)
 	}
 	return s
+}
+
+// readBack writes f with linear's writer and reads it with linear's
+// parser, so that what is reported is what the file says.
+func readBack(f *linear.DeviceFile) (*linear.Device, error) {
+	b, err := f.Marshal()
+	if err != nil {
+		return nil, err
+	}
+	d, err := linear.ParseDevice(bytes.NewReader(b))
+	if err != nil {
+		return nil, fmt.Errorf("design: the written device does not read back (a bug): %w", err)
+	}
+	return d, nil
 }

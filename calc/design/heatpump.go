@@ -1,11 +1,9 @@
 package design
 
 import (
-	"bytes"
+	"errors"
 	"fmt"
 	"math"
-
-	"gonum.org/v1/gonum/optimize"
 
 	"tubewright/calc/linear"
 	"tubewright/calc/numeric"
@@ -261,7 +259,7 @@ func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc float64) (float64, er
 }
 
 // tune solves g.Resonator so that the ambient resonance is the target
-// frequency, by Brent's method on f(L) - f_target.
+// frequency: solveLength (Brent's method) on f(L) - f_target.
 func (hp *pumpSolver) tune(g *HeatPumpGeometry, tol float64) error {
 	ft := hp.t.Frequency
 	lo := minResonator(&Target{Diameter: hp.t.Diameter})
@@ -274,41 +272,14 @@ func (hp *pumpSolver) tune(g *HeatPumpGeometry, tol float64) error {
 		}
 		return f - ft
 	}
-	total := g.Length()
-	lr0 := math.Max(g.Resonator, lo)
-	f0 := F(lr0)
-	if math.IsNaN(f0) {
-		return fmt.Errorf("%w: the tube's resonance could not be solved", errSolve)
+	x, _, err := solveLength(F, g.Resonator, lo, g.Length()-g.Resonator+math.Max(g.Resonator, lo), ft, tol)
+	if errors.Is(err, errShortest) {
+		return fmt.Errorf("%w: %s is too high for this stack in this tube", errSolve, units.Format(ft, units.DimFrequency))
 	}
-	// secant estimate (frequency as one over length), then a bracket
-	// around it widened three times per step
-	lr1 := math.Max(lr0+(total-g.Resonator+lr0)*f0/ft, lo)
-	delta := 0.002*total + 1e-4
-	a, b := math.Max(lr1-delta, lo), lr1+delta
-	fa, fb := F(a), F(b)
-	for i := 0; !(fa*fb <= 0); i++ {
-		if math.IsNaN(fa) || math.IsNaN(fb) || i >= 10 {
-			return fmt.Errorf("%w: no resonator length gives %s", errSolve, units.Format(ft, units.DimFrequency))
-		}
-		delta *= 3
-		if fa > 0 {
-			a, fa = b, fb
-			b += delta
-			fb = F(b)
-			continue
-		}
-		if a == lo {
-			return fmt.Errorf("%w: %s is too high for this stack in this tube", errSolve, units.Format(ft, units.DimFrequency))
-		}
-		b, fb = a, fa
-		a = math.Max(a-delta, lo)
-		fa = F(a)
-	}
-	r, err := numeric.Brent(F, a, b, &numeric.RootSettings{AbsTol: tol * total, MaxIterations: 60})
 	if err != nil {
 		return err
 	}
-	g.Resonator = r.X
+	g.Resonator = x
 	return nil
 }
 
@@ -408,21 +379,11 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 	pos0, dx0 := g0.Position(), g0.Stack
 	lastLr := g0.Resonator
 	lastF := t.Frequency
-	prob := optimize.Problem{Func: func(x []float64) float64 {
-		pen := 0.0
-		bound := func(v, lo, hi float64) float64 {
-			switch {
-			case v < lo:
-				pen += math.Log(lo / v)
-				return lo
-			case v > hi:
-				pen += math.Log(v / hi)
-				return hi
-			}
-			return v
-		}
-		pos := bound(pos0*math.Exp(x[0]), minHotSpace+minExchanger, positionMax(w))
-		dx := bound(dx0*math.Exp(x[1]), w.minStack(pos, hp.set.DriveRatio), w.lambda/8)
+	status, iters := minimize(func(x []float64) float64 {
+		var bx box
+		pos := bx.at(pos0, x[0], minHotSpace+minExchanger, positionMax(w))
+		dx := bx.at(dx0, x[1], w.minStack(pos, hp.set.DriveRatio), w.lambda/8)
+		pen := bx.penalty
 		g := g0
 		g.Resonator = lastLr
 		hp.place(&g, pos, dx)
@@ -444,19 +405,8 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 			best = &gg
 		}
 		return r.ColdTemperature + t.Ambient*pen
-	}}
-	settings := &optimize.Settings{
-		Converger:       &optimize.FunctionConverge{Absolute: 0.05, Iterations: 20},
-		FuncEvaluations: 150,
-	}
-	r, err := optimize.Minimize(prob, []float64{0, 0}, settings, &optimize.NelderMead{SimplexSize: 0.2})
-	if err != nil {
-		if r == nil {
-			return best, err.Error(), 0
-		}
-		return best, r.Status.String() + ": " + err.Error(), r.MajorIterations
-	}
-	return best, r.Status.String(), r.MajorIterations
+	}, 2, 150, 20, 0.05)
+	return best, status, iters
 }
 
 // write tunes res.Geometry, finds its drive frequency, writes the file,
@@ -473,13 +423,9 @@ func (hp *pumpSolver) write(res *HeatPumpResult) error {
 	}
 	res.Geometry = g
 	res.File = hp.file(g, f)
-	b, err := res.File.Marshal()
+	d, err := readBack(&res.File)
 	if err != nil {
 		return err
-	}
-	d, err := linear.ParseDevice(bytes.NewReader(b))
-	if err != nil {
-		return fmt.Errorf("design: the written device does not read back (a bug): %w", err)
 	}
 	res.Device = d
 	hp.solves++

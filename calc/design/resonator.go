@@ -6,7 +6,6 @@ import (
 	"math"
 
 	"tubewright/calc/linear"
-	"tubewright/calc/numeric"
 	"tubewright/calc/units"
 )
 
@@ -15,15 +14,12 @@ import (
 var errTooHigh = errors.New("design: the target frequency needs a resonator shorter than the shortest one")
 
 // tune solves g.Resonator (m) so that the onset frequency of g is the
-// target, by Brent's method (numeric.Brent) on
+// target: solveLength (Brent's method) on
 //
 //	F(L) = f_onset(L) - f_target
 //
-// bracketed around the secant estimate L' = L + L_total (f_onset/f_target - 1)
-// (the frequency of a tube goes as one over its length) and widened three
-// times per step until F changes sign. tol is the relative tolerance of
-// the onset solves and, times the tube length, Brent's tolerance on L.
-// It returns the onset at the answer.
+// tol is the relative tolerance of the onset solves and, times the tube
+// length, Brent's tolerance on L. It returns the onset at the answer.
 func (sv *solver) tune(g *Geometry, tol float64) (*linear.OnsetResult, error) {
 	ft := sv.t.Frequency
 	lo := minResonator(sv.t)
@@ -49,43 +45,21 @@ func (sv *solver) tune(g *Geometry, tol float64) (*linear.OnsetResult, error) {
 		}
 		return r.Frequency - ft
 	}
-	lr0 := math.Max(g.Resonator, lo)
-	f0 := F(lr0)
-	if math.IsNaN(f0) {
-		_, err := eval(lr0)
-		return nil, err
-	}
-	rest := g.Length() - g.Resonator
-	total := rest + lr0
-	lr1 := math.Max(lr0+total*f0/ft, lo)
-	delta := 0.002*total + 1e-4
-	a, b := math.Max(lr1-delta, lo), lr1+delta
-	fa, fb := F(a), F(b)
-	for i := 0; !(fa*fb <= 0); i++ {
-		if math.IsNaN(fa) || math.IsNaN(fb) || i >= 10 {
-			return nil, fmt.Errorf("%w: the resonator length that gives %s could not be bracketed", errSolve, units.Format(ft, units.DimFrequency))
+	total := g.Length() - g.Resonator + math.Max(g.Resonator, lo)
+	x, highest, err := solveLength(F, g.Resonator, lo, total, ft, tol)
+	switch {
+	case errors.Is(err, errShortest):
+		sv.highest = math.Max(sv.highest, highest)
+		return nil, errTooHigh
+	case err != nil:
+		lastErr := err
+		if _, e := eval(math.Max(g.Resonator, lo)); e != nil {
+			lastErr = e
 		}
-		delta *= 3
-		if fa > 0 { // both too high: longer
-			a, fa = b, fb
-			b += delta
-			fb = F(b)
-			continue
-		}
-		if a == lo { // both too low even at the shortest resonator
-			sv.highest = math.Max(sv.highest, fa+ft)
-			return nil, errTooHigh
-		}
-		b, fb = a, fa
-		a = math.Max(a-delta, lo)
-		fa = F(a)
+		return nil, lastErr
 	}
-	rr, err := numeric.Brent(F, a, b, &numeric.RootSettings{AbsTol: math.Max(tol*total, 1e-9), MaxIterations: 60})
-	if err != nil {
-		return nil, fmt.Errorf("%w: resonator length: %v", errSolve, err)
-	}
-	g.Resonator = rr.X
-	return eval(rr.X)
+	g.Resonator = x
+	return eval(x)
 }
 
 // tooLong returns the error for a design longer than the longest tube,
