@@ -34,7 +34,7 @@ func terminalCommands() []command {
 		}
 		out = append(out, command{name: string(e.ID), summary: legacySummaries[e.ID], run: run})
 	}
-	return out
+	return append(out, libraryCommands...)
 }
 
 // legacyCommands are the commands not yet built from a description.
