@@ -45,6 +45,10 @@
 // coefficient; cp and transport stay ideal. Hydrogen stays ideal
 // (SecondVirial reports ok = false, and the option says so).
 //
+// Humid air (HumidAir): dry air with water vapour at a relative humidity,
+// an ideal mixture with the IAPWS-IF97 saturation pressure and the
+// CIPM-2007 enhancement factor; transport stays dry air's.
+//
 // # Ranges and accuracy
 //
 // Validated ranges (Species.Range, Mixture.Range): 100–5000 K for helium
