@@ -1,6 +1,7 @@
 package design
 
 import (
+	"context"
 	"errors"
 	"fmt"
 	"math"
@@ -27,6 +28,30 @@ type Settings struct {
 	MaxSolves int
 	// NoSensitivity skips the sensitivity table.
 	NoSensitivity bool
+	// Context, when not nil, cancels the design: once it is done the
+	// search stops and Design (or DesignHeatPump) returns its error. A
+	// screen runs the design off its UI goroutine with one.
+	Context context.Context
+	// Progress, when not nil, is called after each solve with the solves
+	// so far and the limit MaxSolves (the search usually ends well before
+	// it), on the goroutine that runs the design.
+	Progress func(solves, limit int)
+}
+
+// stop returns the context's error, if any.
+func (s *Settings) stop() error {
+	if s.Context == nil {
+		return nil
+	}
+	return s.Context.Err()
+}
+
+// done counts one solve and reports progress.
+func (s *Settings) done(solves *int) {
+	*solves++
+	if s.Progress != nil {
+		s.Progress(*solves, s.MaxSolves)
+	}
 }
 
 func (s *Settings) values() Settings {
@@ -141,6 +166,9 @@ func Design(t Target, s *Settings) (Result, error) {
 	}
 	best, status, iters := sv.search(res.Start, rhLo, rhHi)
 	res.Status, res.Iterations = status, iters
+	if err := set.stop(); err != nil {
+		return Result{}, err
+	}
 	if best == nil {
 		if res.StartOnset > 0 {
 			g := res.Start
@@ -176,6 +204,9 @@ type solver struct {
 
 // onset solves the onset of geometry g, warm-started from the last answer.
 func (sv *solver) onset(g Geometry, tol float64) (*linear.OnsetResult, error) {
+	if err := sv.set.stop(); err != nil {
+		return nil, err
+	}
 	if sv.solves >= sv.set.MaxSolves {
 		return nil, fmt.Errorf("%w: the limit of %d solves was reached", errSolve, sv.set.MaxSolves)
 	}
@@ -185,11 +216,11 @@ func (sv *solver) onset(g Geometry, tol float64) (*linear.OnsetResult, error) {
 		ls.HotGuess = sv.lastTh
 		ls.FrequencyGuess = sv.lastF * sv.lastLen / g.Length()
 	}
-	sv.solves++
+	sv.set.done(&sv.solves)
 	r, err := linear.Onset(d, ls)
 	if err != nil && sv.lastTh > 0 {
 		ls.HotGuess, ls.FrequencyGuess = 0, 0
-		sv.solves++
+		sv.set.done(&sv.solves)
 		r, err = linear.Onset(d, ls)
 	}
 	if err != nil {
@@ -228,7 +259,7 @@ func (sv *solver) search(g0 Geometry, rhLo, rhHi float64) (*Geometry, string, in
 			best = &gg
 		}
 		return r.HotTemperature + 10*ta*pen
-	}, 3, 250, 25, 0.05)
+	}, 3, 250, 25, 0.05, sv.set.stop)
 	return best, status, iters
 }
 

@@ -172,6 +172,9 @@ func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 	res := HeatPumpResult{Target: t, ThermalDepth: w.deltaKappa}
 	best, status, iters := hp.search(g0)
 	res.Status, res.Iterations = status, iters
+	if err := set.stop(); err != nil {
+		return HeatPumpResult{}, err
+	}
 	if best == nil {
 		return res, &UnreachableError{Problem: fmt.Sprintf("no heat pump of this kind in a %s tube with %s at %s could be solved at a %s drive", mm(t.Diameter, 1), t.Gas, pressureText(t.MeanPressure), pressureText(t.DriverAmplitude))}
 	}
@@ -250,7 +253,7 @@ func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc float64) (float64, er
 			d.Parts[i].Temp, d.Parts[i].Temperature = linear.TempFixed, tc
 		}
 	}
-	hp.solves++
+	hp.set.done(&hp.solves)
 	m, err := linear.Mode(d, 0, &linear.Settings{NoProfile: true, FrequencyGuess: f0})
 	if err != nil {
 		return 0, err
@@ -305,7 +308,7 @@ func (hp *pumpSolver) pump(g HeatPumpGeometry, f0 float64, tol float64) (*linear
 		if p, ok := cache[f]; ok {
 			return p
 		}
-		hp.solves++
+		hp.set.done(&hp.solves)
 		r, err := linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{NoProfile: true, RelTol: tol, Tolerance: tol}})
 		p := point{r: r, err: err, h: math.NaN()}
 		if err == nil {
@@ -387,7 +390,7 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 		g := g0
 		g.Resonator = lastLr
 		hp.place(&g, pos, dx)
-		if hp.solves >= hp.set.MaxSolves {
+		if hp.solves >= hp.set.MaxSolves || hp.set.stop() != nil {
 			return 2 * t.Ambient
 		}
 		if err := hp.tune(&g, 1e-5); err != nil {
@@ -405,7 +408,7 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 			best = &gg
 		}
 		return r.ColdTemperature + t.Ambient*pen
-	}, 2, 150, 20, 0.05)
+	}, 2, 150, 20, 0.05, hp.set.stop)
 	return best, status, iters
 }
 
@@ -428,7 +431,7 @@ func (hp *pumpSolver) write(res *HeatPumpResult) error {
 		return err
 	}
 	res.Device = d
-	hp.solves++
+	hp.set.done(&hp.solves)
 	pr, err := linear.HeatPump(d, nil)
 	if err != nil {
 		return fmt.Errorf("design: heat pump of the written device: %w", err)

@@ -33,14 +33,20 @@ func (b *box) at(v0, x, lo, hi float64) float64 {
 // minimize runs gonum's Nelder-Mead on f from the origin in n coordinates
 // with a simplex of 0.2 (20 % in each length), stopping when the best value
 // has moved less than abs over iters iterations or after evals
-// evaluations. It returns the optimiser's status in words and its
-// iterations.
-func minimize(f func(x []float64) float64, n, evals, iters int, abs float64) (string, int) {
+// evaluations, or when stop returns an error (a cancelled search). It
+// returns the optimiser's status in words and its iterations.
+func minimize(f func(x []float64) float64, n, evals, iters int, abs float64, stop func() error) (string, int) {
 	settings := &optimize.Settings{
 		Converger:       &optimize.FunctionConverge{Absolute: abs, Iterations: iters},
 		FuncEvaluations: evals,
 	}
-	r, err := optimize.Minimize(optimize.Problem{Func: f}, make([]float64, n), settings, &optimize.NelderMead{SimplexSize: 0.2})
+	status := func() (optimize.Status, error) {
+		if err := stop(); err != nil {
+			return optimize.Failure, err
+		}
+		return optimize.NotTerminated, nil
+	}
+	r, err := optimize.Minimize(optimize.Problem{Func: f, Status: status}, make([]float64, n), settings, &optimize.NelderMead{SimplexSize: 0.2})
 	switch {
 	case r == nil && err != nil:
 		return err.Error(), 0
