@@ -30,8 +30,9 @@ var ErrNoSolution = errors.New("no solution in range")
 //
 //	TubeFrequency(T) = fMeas
 //
-// for T within the gas model's validated range (gasprops Mixture.Range)
-// by Brent's method. The frequency grows with T (c ∝ √T for an ideal
+// for T within the gas model's validated range (gasprops Mixture.Range;
+// for humid air also within 273.15–373.15 K and below boiling at the
+// pressure) by Brent's method. The frequency grows with T (c ∝ √T for an ideal
 // gas), so the solution is unique when it exists. When it does not, the
 // error wraps ErrNoSolution and is a *units.RangeError on the measured
 // frequency that gives the band of frequencies this tube can show.
@@ -48,6 +49,17 @@ func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 		return Estimate{}, err
 	}
 	tmin, tmax := s.Gas.Range()
+	if s.RelativeHumidity > 0 {
+		// humid air: within the saturation-pressure range, and below the
+		// temperature where the vapour would reach the total pressure
+		tmin, tmax = math.Max(tmin, gasprops.HumidMinTemperature), math.Min(tmax, gasprops.HumidMaxTemperature)
+		for i := 0; i < 40; i++ {
+			if _, err := gasprops.WaterMoleFraction(tmax, s.Pressure, s.RelativeHumidity); err == nil {
+				break
+			}
+			tmax -= (tmax - tmin) / 8
+		}
+	}
 	solve := func(x []float64) (float64, int, []string, error) {
 		t := s.Tube
 		t.Length, t.Radius = x[1], x[2]

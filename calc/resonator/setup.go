@@ -30,6 +30,10 @@ type Setup struct {
 	Pressure    float64           // mean absolute pressure, Pa
 	GasOptions  *gasprops.Options // nil: ideal gas
 	U           Uncertainty       // standard uncertainties of the inputs
+	// RelativeHumidity is the relative humidity of air, 0 to 1 (0: dry);
+	// the gas is then gasprops.HumidAir. Other gases refuse a non-zero
+	// value.
+	RelativeHumidity float64
 }
 
 // properties evaluates the gas at temperature T and pressure p.
@@ -40,7 +44,20 @@ func (s Setup) properties(T, p float64) (gasprops.Properties, error) {
 	if err := checkPositive("temperature", T, "K"); err != nil {
 		return gasprops.Properties{}, err
 	}
-	return s.Gas.Properties(units.Temperature(T), units.Pressure(p), s.GasOptions)
+	return gasAt(s.Gas, T, p, s.RelativeHumidity, s.GasOptions)
+}
+
+// gasAt evaluates mix at T (K) and p (Pa), as humid air when rh > 0.
+func gasAt(mix gasprops.Mixture, T, p, rh float64, o *gasprops.Options) (gasprops.Properties, error) {
+	if rh == 0 {
+		return mix.Properties(units.Temperature(T), units.Pressure(p), o)
+	}
+	if c := mix.Components(); len(c) != 1 || c[0].Species.Name != "air" {
+		e := units.NewRangeError("relative humidity", rh, 0, 0, "")
+		e.Why = "humidity applies to air only"
+		return gasprops.Properties{}, e
+	}
+	return gasprops.HumidAir(units.Temperature(T), units.Pressure(p), rh, o)
 }
 
 // resultOutputs lists the uncertain outputs of a tube result in the order

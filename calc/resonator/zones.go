@@ -221,6 +221,8 @@ type ZonedTube struct {
 	Gas        gasprops.Mixture
 	Pressure   float64           // Pa, absolute
 	GasOptions *gasprops.Options // nil: ideal gas
+	// RelativeHumidity of air, 0 to 1 (see Setup.RelativeHumidity).
+	RelativeHumidity float64
 }
 
 // Modes evaluates the gas in each zone with gasprops and returns the first
@@ -238,7 +240,7 @@ func (t ZonedTube) Modes(n int) (ZoneResult, error) {
 		if err := checkPositive(fmt.Sprintf("zone %d temperature", i+1), zn.Temperature, "K"); err != nil {
 			return ZoneResult{}, err
 		}
-		g, err := t.Gas.Properties(units.Temperature(zn.Temperature), units.Pressure(t.Pressure), t.GasOptions)
+		g, err := gasAt(t.Gas, zn.Temperature, t.Pressure, t.RelativeHumidity, t.GasOptions)
 		if err != nil {
 			return ZoneResult{}, fmt.Errorf("zone %d: %w", i+1, err)
 		}
