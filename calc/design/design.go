@@ -28,6 +28,10 @@ type Settings struct {
 	MaxSolves int
 	// NoSensitivity skips the sensitivity table.
 	NoSensitivity bool
+	// Gas, when not nil, replaces the target's gas model in every solve
+	// (tests use linear.PowerLawGas to compare with an independent
+	// solver). The start rules still use the target's gas.
+	Gas linear.Gas
 	// Context, when not nil, cancels the design: once it is done the
 	// search stops and Design (or DesignHeatPump) returns its error. A
 	// screen runs the design off its UI goroutine with one.
@@ -81,7 +85,8 @@ type Result struct {
 	// Device is File as read back by linear's parser.
 	Device *linear.Device
 	// Onset is linear.Onset of Device with default settings, the same
-	// solve `twcalc onset` runs on the written file.
+	// solve `twcalc onset` runs on the written file (with Settings.Gas
+	// when one is given).
 	Onset *linear.OnsetResult
 	// Margin is the available hot temperature less the onset temperature,
 	// K; negative means the design does not start.
@@ -211,7 +216,7 @@ func (sv *solver) onset(g Geometry, tol float64) (*linear.OnsetResult, error) {
 		return nil, fmt.Errorf("%w: the limit of %d solves was reached", errSolve, sv.set.MaxSolves)
 	}
 	d := sv.t.device(g, sv.gas)
-	ls := &linear.Settings{NoProfile: true, RelTol: tol, Tolerance: tol}
+	ls := &linear.Settings{Gas: sv.set.Gas, NoProfile: true, RelTol: tol, Tolerance: tol}
 	if sv.lastTh > 0 {
 		ls.HotGuess = sv.lastTh
 		ls.FrequencyGuess = sv.lastF * sv.lastLen / g.Length()
@@ -284,7 +289,7 @@ func (sv *solver) write(res *Result) error {
 		return err
 	}
 	res.Device = d
-	on, err := linear.Onset(d, nil)
+	on, err := linear.Onset(d, &linear.Settings{Gas: sv.set.Gas})
 	sv.solves++
 	if err != nil {
 		return fmt.Errorf("design: onset of the written device: %w", err)

@@ -254,7 +254,7 @@ func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc float64) (float64, er
 		}
 	}
 	hp.set.done(&hp.solves)
-	m, err := linear.Mode(d, 0, &linear.Settings{NoProfile: true, FrequencyGuess: f0})
+	m, err := linear.Mode(d, 0, &linear.Settings{Gas: hp.set.Gas, NoProfile: true, FrequencyGuess: f0})
 	if err != nil {
 		return 0, err
 	}
@@ -309,7 +309,7 @@ func (hp *pumpSolver) pump(g HeatPumpGeometry, f0 float64, tol float64) (*linear
 			return p
 		}
 		hp.set.done(&hp.solves)
-		r, err := linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{NoProfile: true, RelTol: tol, Tolerance: tol}})
+		r, err := linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{Gas: hp.set.Gas, NoProfile: true, RelTol: tol, Tolerance: tol}})
 		p := point{r: r, err: err, h: math.NaN()}
 		if err == nil {
 			fr, err := hp.resonance(g, f, r.ColdTemperature)
@@ -432,7 +432,7 @@ func (hp *pumpSolver) write(res *HeatPumpResult) error {
 	}
 	res.Device = d
 	hp.set.done(&hp.solves)
-	pr, err := linear.HeatPump(d, nil)
+	pr, err := linear.HeatPump(d, &linear.HeatPumpSettings{Settings: linear.Settings{Gas: hp.set.Gas}})
 	if err != nil {
 		return fmt.Errorf("design: heat pump of the written device: %w", err)
 	}

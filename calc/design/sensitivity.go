@@ -54,7 +54,7 @@ func (sv *solver) sensitivity(res *Result) ([]Sensitivity, error) {
 		d := t.device(g, sv.gas)
 		d.MeanPressure = t.MeanPressure + x[3]*rows[3].Step
 		sv.solves++
-		r, err := linear.Onset(d, &linear.Settings{NoProfile: true, HotGuess: base.HotTemperature, FrequencyGuess: base.Frequency})
+		r, err := linear.Onset(d, &linear.Settings{Gas: sv.set.Gas, NoProfile: true, HotGuess: base.HotTemperature, FrequencyGuess: base.Frequency})
 		if err != nil {
 			failed = err
 			y[0], y[1] = math.NaN(), math.NaN()
