@@ -3,6 +3,7 @@ package listen
 import (
 	"fmt"
 	"math"
+	"math/bits"
 
 	"tubewright/calc/units"
 )
@@ -26,8 +27,8 @@ const MaxAnalysedSamples = 1 << 20
 // still belong to the analysed stretch.
 const activeRange = 30.0
 
-// searchTol is the width (in bins of the fitted stretch) to which the
-// final frequency search narrows.
+// searchTol is the width (in bins of the fitted stretch, 1/its duration)
+// to which the final frequency search narrows.
 const searchTol = 1e-5
 
 // silentPeak is the largest |sample| (after removing the mean) below which
@@ -92,25 +93,22 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 
 	// 2. the loud stretch and its peak
 	a, b, cut := loudStretch(res.Track, len(x), fs)
-	seg := x[a : a+smoothLen(b-a)]
-	res.AnalysedFrom, res.AnalysedTo = float64(a)/fs, float64(a+len(seg))/fs
+	seg := x[a:b]
+	res.AnalysedFrom, res.AnalysedTo = float64(a)/fs, float64(b)/fs
 	if cut {
 		res.Warnings = append(res.Warnings, fmt.Sprintf("The loud part is longer than %.1f s: the frequency is from %.1f–%.1f s around the loudest moment; the track covers the whole recording.", MaxAnalysedSamples/fs, res.AnalysedFrom, res.AnalysedTo))
 	}
-	sp := newSpectrum(seg, fs, nil)
+	// the coarse spectrum: the first 2^k samples of the stretch, the
+	// largest power of two that fits (the FFT is fastest there)
+	sp := newSpectrum(seg[:1<<(bits.Len(uint(len(seg)))-1)], fs)
 	lo, hi := sp.band(lowHz, highHz)
 	if lo > hi {
 		return nil, fmt.Errorf("%w: the loud part (%.3f s) is too short to resolve %g Hz", ErrEmpty, float64(len(seg))/fs, lowHz)
 	}
 	k0 := sp.peak(lo, hi)
-	w := hann(len(seg))
-	y := make([]float64, len(seg))
-	for i := range seg {
-		y[i] = w[i] * seg[i]
-	}
-	bin := 2 * math.Pi / float64(len(seg))
+	bin := 2 * math.Pi * sp.binHz / fs // coarse bin, rad/sample
 	wlo, whi := 2*math.Pi*lowHz/fs, 2*math.Pi*highHz/fs
-	omega := refinePeak(y, sp.grandke(k0)*2*math.Pi/fs, 0.75*bin, wlo, whi, 1e-4*bin)
+	omega := math.Max(wlo, math.Min(whi, sp.grandke(k0)*2*math.Pi/fs))
 
 	// 3. envelope, noise, decay
 	env := demodEnvelope(x, fs, omega*fs/(2*math.Pi))
@@ -153,7 +151,7 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	fw := hann(len(fseg))
 	fit := newSineFit(fseg, fw, g)
 	if fit.uu > 0 {
-		omega = goldenMax(fit.power, math.Max(wlo, omega-0.25*bin), math.Min(whi, omega+0.25*bin), searchTol*bin)
+		omega = maximize(fit.power, math.Max(wlo, omega-0.75*bin), math.Min(whi, omega+0.75*bin), searchTol*2*math.Pi/float64(len(fseg)))
 	}
 	f := omega * fs / (2 * math.Pi)
 	res.Frequency = f

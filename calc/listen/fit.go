@@ -13,7 +13,7 @@ import "math"
 //	P(ω) = rᵀ G⁻¹ r,   r = (Σ v x cos ωn, Σ v x sin ωn),  v = w g,
 //	G = ½ [[U + C, S], [S, U - C]],  U = Σ u,  C + iS = Σ u e^{2iωn},  u = w g²,
 //
-// which is maximised over ω by golden-section search (variable projection:
+// which is maximised over ω by Brent's method, see maximize (variable projection:
 // Golub & Pereyra, "The differentiation of pseudo-inverses and nonlinear
 // least squares problems whose variables separate", SIAM J. Numer. Anal.
 // 10(2), 413–432, 1973). Unlike the plain periodogram this accounts for the
@@ -40,8 +40,7 @@ func newSineFit(x, w, g []float64) sineFit {
 
 // power returns P(ω) for ω in rad/sample.
 func (s sineFit) power(omega float64) float64 {
-	rr, ri := dtft(s.vx, omega) // Σ vx cos, -Σ vx sin
-	cr, ci := dtft(s.u, 2*omega)
+	rr, ri, cr, ci := dtft2(s.vx, s.u, omega) // Σ vx cos, -Σ vx sin; Σ u cos 2ωn, -Σ u sin 2ωn
 	U := s.uu
 	a, b, d := (U+cr)/2, -ci/2, (U-cr)/2 // G = [[a, b], [b, d]]; Σ u sin 2ωn = -ci
 	det := a*d - b*b

@@ -2,7 +2,6 @@ package listen
 
 import (
 	"math"
-	"sort"
 
 	"gonum.org/v1/gonum/dsp/fourier"
 )
@@ -17,24 +16,17 @@ import (
 // section IV.C).
 func hann(n int) []float64 {
 	w := make([]float64, n)
+	// cos(2πk/n) by a rotating phasor, re-set every 1024 samples
+	rs, rc := math.Sincos(2 * math.Pi / float64(n))
+	var c, s float64
 	for k := range w {
-		w[k] = 0.5 - 0.5*math.Cos(2*math.Pi*float64(k)/float64(n))
+		if k%1024 == 0 {
+			s, c = math.Sincos(2 * math.Pi * float64(k) / float64(n))
+		}
+		w[k] = 0.5 - 0.5*c
+		c, s = c*rc-s*rs, s*rc+c*rs
 	}
 	return w
-}
-
-// smoothLen returns the largest n' ≤ n whose only prime factors are 2, 3
-// and 5, the lengths gonum's FFT (a port of FFTPACK) handles fastest.
-func smoothLen(n int) int {
-	best := 1
-	for p2 := 1; p2 <= n; p2 *= 2 {
-		for p3 := p2; p3 <= n; p3 *= 3 {
-			for p5 := p3; p5 <= n; p5 *= 5 {
-				best = max(best, p5)
-			}
-		}
-	}
-	return best
 }
 
 // spectrum is the Hann-windowed power spectrum of one stretch of samples.
@@ -45,27 +37,45 @@ type spectrum struct {
 	sumW  float64   // Σ w_k: a tone of amplitude A gives |X| = A Σw / 2 at its peak
 }
 
-// newSpectrum windows x (whole length, which should be smoothLen-friendly)
-// with Hann and takes its FFT.
-func newSpectrum(x []float64, fs float64, fft *fourier.FFT) spectrum {
+// spectrometer makes Hann-windowed power spectra of stretches of one
+// length, reusing its window, FFT plan and buffers.
+type spectrometer struct {
+	fft         *fourier.FFT
+	w, y        []float64
+	c           []complex128
+	sumW, sumW2 float64
+}
+
+func newSpectrometer(n int) *spectrometer {
+	m := &spectrometer{fft: fourier.NewFFT(n), w: hann(n), y: make([]float64, n)}
+	for _, v := range m.w {
+		m.sumW += v
+		m.sumW2 += v * v
+	}
+	return m
+}
+
+// of returns the spectrum of x (len(x) must be the spectrometer's length).
+// The result's power slice is power when that is large enough.
+func (m *spectrometer) of(x []float64, fs float64, power []float64) spectrum {
 	n := len(x)
-	if fft == nil || fft.Len() != n {
-		fft = fourier.NewFFT(n)
-	}
-	w := hann(n)
-	y := make([]float64, n)
-	var s1, s2 float64
 	for k := range x {
-		y[k] = x[k] * w[k]
-		s1 += w[k]
-		s2 += w[k] * w[k]
+		m.y[k] = x[k] * m.w[k]
 	}
-	c := fft.Coefficients(nil, y)
-	p := make([]float64, len(c))
-	for k, v := range c {
-		p[k] = real(v)*real(v) + imag(v)*imag(v)
+	m.c = m.fft.Coefficients(m.c, m.y)
+	if cap(power) < len(m.c) {
+		power = make([]float64, len(m.c))
 	}
-	return spectrum{power: p, binHz: fs / float64(n), sumW2: s2, sumW: s1}
+	power = power[:len(m.c)]
+	for k, v := range m.c {
+		power[k] = real(v)*real(v) + imag(v)*imag(v)
+	}
+	return spectrum{power: power, binHz: fs / float64(n), sumW2: m.sumW2, sumW: m.sumW}
+}
+
+// newSpectrum windows x with Hann and takes its FFT.
+func newSpectrum(x []float64, fs float64) spectrum {
+	return newSpectrometer(len(x)).of(x, fs, nil)
 }
 
 // band returns the bin range [lo, hi] covering lowHz–highHz, clipped to the
@@ -125,7 +135,12 @@ func (s spectrum) grandke(k int) float64 {
 // mean σ² Σ w² and median ln 2 times its mean. Returns -1 when fewer than 8
 // bins are left.
 func (s spectrum) noisePower(lo, hi, centre, guard int) float64 {
-	var v []float64
+	return s.noisePowerBuf(lo, hi, centre, guard, nil)
+}
+
+// noisePowerBuf is noisePower with a scratch slice to reuse.
+func (s spectrum) noisePowerBuf(lo, hi, centre, guard int, v []float64) float64 {
+	v = v[:0]
 	for k := max(lo, 1); k <= min(hi, len(s.power)-1); k++ {
 		if k >= centre-guard && k <= centre+guard {
 			continue
@@ -135,8 +150,7 @@ func (s spectrum) noisePower(lo, hi, centre, guard int) float64 {
 	if len(v) < 8 {
 		return -1
 	}
-	sort.Float64s(v)
-	return v[len(v)/2] / (math.Ln2 * s.sumW2)
+	return quickSelect(v, len(v)/2) / (math.Ln2 * s.sumW2)
 }
 
 // dtft returns Σ y_n e^{-iωn} (real and imaginary parts) for ω in
@@ -157,31 +171,116 @@ func dtft(y []float64, omega float64) (re, im float64) {
 	return re, im
 }
 
+// dtft2 returns Σ y_n e^{-iωn} and Σ u_n e^{-2iωn} in one pass.
+func dtft2(y, u []float64, omega float64) (re, im, re2, im2 float64) {
+	rs, rc := math.Sincos(omega)
+	for start := 0; start < len(y); start += 1024 {
+		end := min(start+1024, len(y))
+		s, c := math.Sincos(omega * float64(start))
+		zr, zi := c, -s
+		uu := u[start:end]
+		for k, v := range y[start:end] {
+			re += v * zr
+			im += v * zi
+			z2r, z2i := zr*zr-zi*zi, 2*zr*zi
+			re2 += uu[k] * z2r
+			im2 += uu[k] * z2i
+			zr, zi = zr*rc+zi*rs, zi*rc-zr*rs
+		}
+	}
+	return re, im, re2, im2
+}
+
 // dtftPower returns |Σ y_n e^{-iωn}|².
 func dtftPower(y []float64, omega float64) float64 {
 	re, im := dtft(y, omega)
 	return re*re + im*im
 }
 
-// goldenMax returns the maximum of a unimodal f on [a, b] to a width of tol
-// by golden-section search (Press, Teukolsky, Vetterling & Flannery,
-// Numerical Recipes, 3rd ed. 2007, §10.2).
-func goldenMax(f func(float64) float64, a, b, tol float64) float64 {
-	const g = 0.6180339887498949
-	c, d := b-g*(b-a), a+g*(b-a)
-	fc, fd := f(c), f(d)
-	for b-a > tol {
-		if fc > fd {
-			b, d, fd = d, c, fc
-			c = b - g*(b-a)
-			fc = f(c)
+// maximize returns where a unimodal f on [a, b] is largest, to a width of
+// about tol, by Brent's method: parabolic interpolation through the three
+// best points, with a golden-section step whenever the parabola is not
+// trusted (Brent, Algorithms for Minimization without Derivatives, 1973,
+// ch. 5; as written in Press, Teukolsky, Vetterling & Flannery, Numerical
+// Recipes, 3rd ed. 2007, §10.3). Near a smooth peak it needs far fewer
+// evaluations than golden section alone.
+func maximize(f func(float64) float64, a, b, tol float64) float64 {
+	const cgold = 0.3819660112501051
+	if b < a {
+		a, b = b, a
+	}
+	x := a + cgold*(b-a)
+	w, v := x, x
+	fx := -f(x)
+	fw, fv := fx, fx
+	var d, e float64
+	for range 200 {
+		xm := (a + b) / 2
+		tol1 := tol/2 + 1e-15*math.Abs(x)
+		tol2 := 2 * tol1
+		if math.Abs(x-xm) <= tol2-(b-a)/2 {
+			return x
+		}
+		golden := true
+		if math.Abs(e) > tol1 {
+			r := (x - w) * (fx - fv)
+			q := (x - v) * (fx - fw)
+			p := (x-v)*q - (x-w)*r
+			q = 2 * (q - r)
+			if q > 0 {
+				p = -p
+			}
+			q = math.Abs(q)
+			etemp := e
+			e = d
+			if math.Abs(p) < math.Abs(q*etemp/2) && p > q*(a-x) && p < q*(b-x) {
+				d = p / q
+				u := x + d
+				if u-a < tol2 || b-u < tol2 {
+					d = math.Copysign(tol1, xm-x)
+				}
+				golden = false
+			}
+		}
+		if golden {
+			if x >= xm {
+				e = a - x
+			} else {
+				e = b - x
+			}
+			d = cgold * e
+		}
+		u := x + d
+		if math.Abs(d) < tol1 {
+			u = x + math.Copysign(tol1, d)
+		}
+		fu := -f(u)
+		if fu <= fx {
+			if u >= x {
+				a = x
+			} else {
+				b = x
+			}
+			v, w, x = w, x, u
+			fv, fw, fx = fw, fx, fu
 		} else {
-			a, c, fc = c, d, fd
-			d = a + g*(b-a)
-			fd = f(d)
+			if u < x {
+				a = u
+			} else {
+				b = u
+			}
+			if fu <= fw || w == x {
+				v, w = w, u
+				fv, fw = fw, fu
+			} else if fu <= fv || v == x || v == w {
+				v, fv = u, fu
+			}
+		}
+		if !(fx == fx) { // NaN: give up with the middle
+			return (a + b) / 2
 		}
 	}
-	return (a + b) / 2
+	return x
 }
 
 // refinePeak maximises the windowed periodogram |Σ y_n e^{-iωn}|² (y the
@@ -196,5 +295,5 @@ func goldenMax(f func(float64) float64, a, b, tol float64) float64 {
 // formula is not built for.
 func refinePeak(y []float64, omega0, h, lo, hi, tol float64) float64 {
 	omega0 = math.Max(lo, math.Min(hi, omega0))
-	return goldenMax(func(w float64) float64 { return dtftPower(y, w) }, math.Max(lo, omega0-h), math.Min(hi, omega0+h), tol)
+	return maximize(func(w float64) float64 { return dtftPower(y, w) }, math.Max(lo, omega0-h), math.Min(hi, omega0+h), tol)
 }

@@ -5,8 +5,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-
-	"gonum.org/v1/gonum/dsp/fourier"
 )
 
 // TrackPoint is the sound in one frame of a recording.
@@ -55,8 +53,8 @@ func levelDB(rms float64) float64 {
 func frames(x []float64, fs, lowHz, highHz float64) []TrackPoint {
 	fl := frameLen(fs, len(x))
 	hop := fl / 2
-	fft := fourier.NewFFT(fl)
-	w := hann(fl)
+	sm := newSpectrometer(fl)
+	var power, scratch []float64
 	y := make([]float64, fl)
 	var out []TrackPoint
 	for s := 0; s+fl <= len(x); s += hop {
@@ -66,14 +64,18 @@ func frames(x []float64, fs, lowHz, highHz float64) []TrackPoint {
 			ss += v * v
 		}
 		p := TrackPoint{Time: (float64(s) + float64(fl)/2) / fs, Level: levelDB(math.Sqrt(ss / float64(fl)))}
-		sp := newSpectrum(seg, fs, fft)
+		sp := sm.of(seg, fs, power)
+		power = sp.power
 		lo, hi := sp.band(lowHz, highHz)
 		if k := sp.peak(lo, hi); k > 0 && ss > 0 {
-			med := sp.noisePower(lo, hi, k, 2) * math.Ln2 * sp.sumW2
+			if cap(scratch) < hi-lo+1 {
+				scratch = make([]float64, 0, hi-lo+1)
+			}
+			med := sp.noisePowerBuf(lo, hi, k, 2, scratch) * math.Ln2 * sp.sumW2
 			if med <= 0 || sp.power[k] >= med*math.Pow(10, ClearPeak/10) {
 				p.Clear = true
 				for i := range seg {
-					y[i] = seg[i] * w[i]
+					y[i] = seg[i] * sm.w[i]
 				}
 				bin := 2 * math.Pi / float64(fl)
 				p.Frequency = refinePeak(y, 2*math.Pi*sp.grandke(k)/fs, 0.6*bin, 2*math.Pi*lowHz/fs, 2*math.Pi*highHz/fs, 1e-3*bin) * fs / (2 * math.Pi)
