@@ -19,9 +19,7 @@ type Entry struct {
 var extras = map[sheet.ID]func(env *Env) Screen{
 	sheet.IDResonance: newResonanceScreen,
 	sheet.IDDiagnose:  newDiagnoseScreen,
-	sheet.IDDepths:    newDepthsScreen,
 	sheet.IDPores:     newPoresScreen,
-	sheet.IDPlacement: newPlacementScreen,
 	sheet.IDOnset:     newOnsetScreen,
 	sheet.IDHeatPump:  newHeatPumpScreen,
 	sheet.IDSafety:    newSafetyScreen,

@@ -8,54 +8,66 @@ import (
 
 	"tubewright/calc/pore"
 	"tubewright/calc/units"
+	"tubewright/gasprops"
 )
 
 // TestPoresScreen picks shapes and roles with taps, types geometry, and
-// checks the verdict card and the rows against calc/pore directly (the
+// checks the verdict and the rows against calc/pore directly (the
 // geometry formulas are checked there against published formulas).
 func TestPoresScreen(t *testing.T) {
 	env := NewEnv(nil)
 	s := newPoresScreen(env).(*poresScreen)
-	h := newHarness(t, image.Pt(412, 3000), s.Layout)
+	h := newHarness(t, image.Pt(412, 3600), s.Layout)
 
-	// start: plates, 0.5 mm gap, 0.1 mm thick, helium 300 K 10 bar 100 Hz
-	card, ok := h.shown("Verdict")
-	if !ok || !strings.Contains(card, "About right for a stack") {
-		t.Fatalf("verdict card %q (found %v)", card, ok)
+	// start: plates, 0.5 mm gap, 0.1 mm thick, helium 300 K 1 atm 100 Hz
+	if got, ok := h.shown("Verdict for a stack"); !ok || got == "" {
+		t.Fatalf("verdict %q (found %v)", got, ok)
 	}
 	plates, _ := pore.Plates(0.25e-3, 0.1e-3)
 	if got, _ := h.shown("Porosity"); got != units.Format(plates.Porosity(), units.DimNone) {
 		t.Errorf("porosity shown %q, want %q", got, units.Format(plates.Porosity(), units.DimNone))
 	}
-
-	// a tighter gap: too tight, and the card says what gap would do
-	h.retype("Gap between plates", "0.5 mm", "0.2 mm")
-	card, _ = h.shown("Verdict")
-	if !strings.Contains(card, "Too tight for a stack") || !strings.Contains(card, "plate spacing (gap)") {
-		t.Fatalf("verdict card after 0.2 mm gap: %q", card)
+	// only the plates' inputs are shown
+	if _, ok := h.byDesc("Pore diameter"); ok {
+		t.Error("a round-pore input is shown for plates")
 	}
 
-	// screens as a regenerator: 200 /in, 41 µm wire is about right
+	// a tighter gap: too tight, and the suggestion says what gap would do
+	h.retype("Gap between plates", "0.5 mm", "0.1 mm")
+	if got, _ := h.shown("Verdict for a stack"); !strings.Contains(got, "too tight") {
+		t.Fatalf("verdict after 0.1 mm gap: %q", got)
+	}
+	if got, _ := h.shown("What would hit the aim"); !strings.Contains(got, "plate spacing (gap)") {
+		t.Fatalf("suggestion after 0.1 mm gap: %q", got)
+	}
+
+	// screens as a regenerator at 10 bar: 200 /in, 41 µm wire is about right
+	h.retype("Mean pressure", "1 atm", "10 bar")
 	h.tap("Woven screens")
 	h.tap("Regenerator")
-	card, _ = h.shown("Verdict")
-	if !strings.Contains(card, "About right for a regenerator") || !strings.Contains(card, "mesh per inch") {
-		t.Fatalf("verdict card for screens: %q", card)
+	if got, _ := h.shown("Verdict for a regenerator"); !strings.Contains(got, "about right") {
+		t.Fatalf("verdict for screens: %q", got)
+	}
+	if got, _ := h.shown("What would hit the aim"); !strings.Contains(got, "mesh per inch") {
+		t.Fatalf("suggestion for screens: %q", got)
+	}
+	if _, ok := h.byDesc("Gap between plates"); ok {
+		t.Error("the plates' gap is still shown for screens")
 	}
 	screens, _ := pore.Screens(200/0.0254, 41e-6, 0)
 	if got, _ := h.shown("Hydraulic radius r_h"); got != mustMM(t, screens.HydraulicRadius()) {
 		t.Errorf("r_h shown %q, want %q", got, mustMM(t, screens.HydraulicRadius()))
 	}
-	if w := strings.Join(s.results.Warnings(), " "); !strings.Contains(w, "approximation") {
+	if w := strings.Join(s.form.Results.Warnings(), " "); !strings.Contains(w, "approximation") {
 		t.Errorf("no approximation warning for screens: %q", w)
 	}
 
-	// impossible screens: the failure names the wire and the pitch
+	// impossible screens: the error under the wire names the mesh pitch
 	h.retype("Wire diameter", "41 um", "0.2 mm")
-	if f := s.results.Failure(); !strings.Contains(f, "wire diameter") || !strings.Contains(f, "mesh pitch") {
-		t.Fatalf("failure for overlapping wires: %q", f)
+	if msg, ok := h.shown("Wire diameter error"); !ok || !strings.Contains(msg, "wire diameter") || !strings.Contains(msg, "mesh pitch") {
+		t.Fatalf("error for overlapping wires: %q (found %v)", msg, ok)
 	}
-	if _, ok := h.shown("Verdict"); ok {
+	if _, ok := h.shown("Verdict for a regenerator"); ok {
 		t.Fatal("a verdict is still shown for impossible screens")
 	}
 
@@ -67,8 +79,7 @@ func TestPoresScreen(t *testing.T) {
 		t.Errorf("metal wool porosity shown %q, want %q", got, units.Format(fib.Porosity(), units.DimNone))
 	}
 	// the mass that hits the aim, fed back, gives the aimed-for r_h
-	role, _ := pore.ParseRole(s.role.Selected()) // regenerator, tapped above
-	v, err := pore.Judge(fib, role, s.results2dk(t))
+	v, err := pore.Judge(fib, pore.RoleRegenerator, heliumDK(t, 300, 1e6, 100))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -80,17 +91,25 @@ func TestPoresScreen(t *testing.T) {
 	if err != nil || math.Abs(back.HydraulicRadius()/v.TargetRh-1) > 1e-9 {
 		t.Errorf("target mass %g kg gives r_h %v, aim %g (%v)", target, back.HydraulicRadius(), v.TargetRh, err)
 	}
+
+	// back to screens: the wire typed before comes back with its shape
+	h.tap("Woven screens")
+	if txt := s.form.Field("wire-diameter").Text(); txt != "0.2 mm" {
+		t.Errorf("wire diameter after coming back to screens: %q", txt)
+	}
 }
 
-// results2dk returns δκ at the screen's starting operating point (helium,
-// 300 K, 10 bar, 100 Hz), from the library.
-func (s *poresScreen) results2dk(t *testing.T) float64 {
+// heliumDK returns δκ of helium at T (K), p (Pa) and f (Hz), from the
+// library.
+func heliumDK(t *testing.T, T, p, f float64) float64 {
 	t.Helper()
-	st, err := s.op.evaluate()
+	m, _ := gasprops.ParseMixture("helium")
+	props, err := m.Properties(units.Temperature(T), units.Pressure(p), nil)
 	if err != nil {
 		t.Fatal(err)
 	}
-	return st.dk
+	dk, _ := pore.Depths(props, f)
+	return dk
 }
 
 func mustIn(t *testing.T, v float64, unit string) string {
@@ -116,8 +135,9 @@ func mustMM(t *testing.T, v float64) string {
 func TestScreenshotPoresScreens(t *testing.T) {
 	env := NewEnv(nil)
 	s := newPoresScreen(env).(*poresScreen)
-	s.shape.Select("screens")
-	s.role.Select("regenerator")
-	s.dirty = true
+	s.form.SetText("shape", "screens")
+	s.form.SetText("role", "regenerator")
+	s.form.SetText("pressure", "10 bar")
+	s.sync()
 	shoot(t, "pores-screens", env, s)
 }
