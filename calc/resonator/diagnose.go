@@ -37,7 +37,8 @@ var ErrNoSolution = errors.New("no solution in range")
 // error wraps ErrNoSolution and is a *units.RangeError on the measured
 // frequency that gives the band of frequencies this tube can show.
 // Uncertainties of fMeas (s.U.Frequency), length, radius and pressure are
-// propagated to the result.
+// propagated to the result. With WallLosses a tube without a resonance at
+// the answer (Q below MinQ) gives a *NoResonanceError.
 func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 	if err := checkPositive("measured frequency", fMeas, "Hz"); err != nil {
 		return Estimate{}, err
@@ -76,7 +77,63 @@ func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 	}
 	x := []float64{fMeas, s.Length, s.Radius, s.Pressure}
 	u := []float64{s.U.Frequency, s.U.Length, s.U.Radius, s.U.Pressure}
-	return estimate(solve, x, u)
+	e, err := estimate(solve, x, u)
+	if err != nil {
+		if nr := s.noResonanceIn(tmin, tmax); nr != nil {
+			return Estimate{}, nr
+		}
+		return Estimate{}, err
+	}
+	if err := s.resonanceAt(s.Gas, e.Value, s.Pressure); err != nil {
+		return Estimate{}, err
+	}
+	return e, nil
+}
+
+// noResonanceIn returns a *NoResonanceError when, with wall losses, the
+// tube resonates at none of five temperatures spread over tmin–tmax (K):
+// the reason a diagnosis found no answer is then that there is no
+// resonance to read, not the measured value.
+func (s Setup) noResonanceIn(tmin, tmax float64) error {
+	if s.Losses != WallLosses || !(tmin > 0 && tmax > tmin) {
+		return nil
+	}
+	best := 0.0
+	for i := 0; i < 5; i++ {
+		T := tmin * math.Pow(tmax/tmin, float64(i)/4)
+		g, err := s.properties(T, s.Pressure)
+		if err != nil {
+			continue
+		}
+		r, err := tubeFrequency(s.Tube, g)
+		if err != nil {
+			continue
+		}
+		if r.Q.Total >= MinQ {
+			return nil
+		}
+		best = math.Max(best, r.Q.Total)
+	}
+	if best == 0 {
+		return nil // nothing could be evaluated: the solver's error says more
+	}
+	return &NoResonanceError{Q: best}
+}
+
+// resonanceAt returns a *NoResonanceError when s's tube filled with mix
+// at T and p has no resonance (see TubeFrequency).
+func (s Setup) resonanceAt(mix gasprops.Mixture, T, p float64) error {
+	ss := s
+	ss.Gas = mix
+	g, err := ss.properties(T, p)
+	if err != nil {
+		return nil // the solve itself succeeded; nothing more to say
+	}
+	_, err = TubeFrequency(s.Tube, g)
+	if errors.Is(err, ErrNoResonance) {
+		return err
+	}
+	return nil
 }
 
 // DiagnoseFraction infers the mole fraction x of the second gas in a
@@ -124,6 +181,13 @@ func (s Setup) DiagnoseFraction(first, second *gasprops.Species, fMeas float64) 
 	x := []float64{fMeas, s.Length, s.Radius, s.Pressure, s.Temperature}
 	u := []float64{s.U.Frequency, s.U.Length, s.U.Radius, s.U.Pressure, s.U.Temperature}
 	e, err := estimate(solve, x, u)
+	if err == nil {
+		if mix, merr := gasprops.Binary(first, second, e.Value); merr == nil {
+			if rerr := s.resonanceAt(mix, s.Temperature, s.Pressure); rerr != nil {
+				return Estimate{}, rerr
+			}
+		}
+	}
 	if err == nil && e.Sigma > 0 && (e.Value-e.Sigma < 0 || e.Value+e.Sigma > 1) {
 		e.Warnings = append(e.Warnings, "the ± of the mole fraction reaches beyond 0 or 1: the measurement does not pin the mixture down")
 	}
@@ -139,7 +203,7 @@ func (s Setup) frequencyOf(t Tube, mix gasprops.Mixture, T, p float64) float64 {
 	if err != nil {
 		return math.NaN()
 	}
-	r, err := TubeFrequency(t, g)
+	r, err := tubeFrequency(t, g)
 	if err != nil {
 		return math.NaN()
 	}

@@ -38,7 +38,7 @@ func (s Setup) SweepTemperature(t0, t1 float64, n int) ([]Point, error) {
 		if err != nil {
 			return nil, err
 		}
-		r, err := TubeFrequency(s.Tube, g)
+		r, err := tubeFrequency(s.Tube, g)
 		if err != nil {
 			return nil, err
 		}
@@ -74,7 +74,7 @@ func (s Setup) SweepFraction(first, second *gasprops.Species, x0, x1 float64, n 
 		if err != nil {
 			return nil, err
 		}
-		r, err := TubeFrequency(s.Tube, g)
+		r, err := tubeFrequency(s.Tube, g)
 		if err != nil {
 			return nil, err
 		}

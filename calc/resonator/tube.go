@@ -1,6 +1,7 @@
 package resonator
 
 import (
+	"errors"
 	"fmt"
 	"math"
 
@@ -105,7 +106,19 @@ func (t Tube) check(needLength bool) error {
 // far-end condition holds with Rott's complex wave number (see
 // ZonedModesLosses and WaveNumber), and Frequency is Re ω/2π; the Q is
 // computed as without losses. LossFreeFrequency keeps the loss-free value.
+// With WallLosses a total Q below MinQ is a *NoResonanceError (matching
+// ErrNoResonance), returned with the filled Result: the losses damp the
+// wave within a cycle and the "frequency" means nothing.
 func TubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
+	r, err := tubeFrequency(t, g)
+	if err != nil {
+		return Result{}, err
+	}
+	return r, r.resonance(t)
+}
+
+// tubeFrequency is TubeFrequency without the check of the Q.
+func tubeFrequency(t Tube, g gasprops.Properties) (Result, error) {
 	if err := t.check(true); err != nil {
 		return Result{}, err
 	}
@@ -177,7 +190,8 @@ func sectionOf(t Tube, g gasprops.Properties) Section {
 // the one whose wall-loss resonance (see TubeFrequency) is f, found by
 // Brent's method from the loss-free length, which is too long; the
 // result's LossFreeFrequency is that length's loss-free resonance.
-// It is an error when the end corrections alone
+// With WallLosses a Q below MinQ is a *NoResonanceError, returned with the
+// filled Result. It is also an error when the end corrections alone
 // are longer than the acoustic length (the frequency is too high for this
 // radius and mode): the RangeError gives the highest frequency possible.
 func TubeLength(t Tube, f float64, g gasprops.Properties) (Result, error) {
@@ -219,7 +233,36 @@ func TubeLength(t Tube, f float64, g gasprops.Properties) (Result, error) {
 			r.LossFreeFrequency = f0
 		}
 	}
-	return r, nil
+	return r, r.resonance(t)
+}
+
+// MinQ is the quality factor below which a tube has no resonance to speak
+// of (with WallLosses): the wave's energy is gone within about a cycle.
+const MinQ = 1.0
+
+// ErrNoResonance is matched (errors.Is) by *NoResonanceError.
+var ErrNoResonance = errors.New("no resonance")
+
+// NoResonanceError says that the tube's Q is below MinQ.
+type NoResonanceError struct {
+	Q float64 // the total quality factor, 1
+}
+
+// Error says why there is no frequency to give and what would help.
+func (e *NoResonanceError) Error() string {
+	return fmt.Sprintf("no resonance: the quality factor is %.2g, below 1; the wall and end losses damp the sound within a cycle, so this tube has no frequency to speak of (a wider tube or a higher pressure helps)", e.Q)
+}
+
+// Is lets errors.Is(err, ErrNoResonance) match.
+func (e *NoResonanceError) Is(target error) bool { return target == ErrNoResonance }
+
+// resonance returns a *NoResonanceError when wall losses are on and the
+// Q is below MinQ.
+func (r Result) resonance(t Tube) error {
+	if t.Losses == WallLosses && r.Q.Total < MinQ {
+		return &NoResonanceError{Q: r.Q.Total}
+	}
+	return nil
 }
 
 // wallLength returns the length of tube t (t.Length holds the loss-free

@@ -1,6 +1,7 @@
 package resonator
 
 import (
+	"errors"
 	"math"
 	"strings"
 	"testing"
@@ -240,7 +241,7 @@ func TestMeanFreePath(t *testing.T) {
 	if lam := MeanFreePath(g); !scalar.EqualWithinRel(lam, 68e-9, 0.05) {
 		t.Errorf("air mean free path %.4g m, want about 68 nm", lam)
 	}
-	tube := Tube{Ends: ClosedClosed, Mode: 1, Length: 0.2, Radius: 0.001, Losses: WallLosses}
+	tube := Tube{Ends: ClosedClosed, Mode: 1, Length: 0.2, Radius: 0.001} // loss-free: at 100 Pa the wall-loss tube has no resonance (TestNoResonance)
 	for _, c := range []struct {
 		p    float64
 		warn bool
@@ -290,5 +291,38 @@ func TestWaveNumber(t *testing.T) {
 	}
 	if _, err := ParseLosses("lots"); err == nil {
 		t.Error("ParseLosses accepted lots")
+	}
+}
+
+// A 1 mm air tube at 100 Pa: the boundary layers are wider than the tube
+// (δν ≈ 7 mm at 850 Hz: ν = 1.5e-3 m²/s, hand calculation), the Q
+// (0.11 here) is below 1 and with wall losses there is no resonance: an
+// error that says so, never a frequency. The diagnosis of such a tube
+// says the same. At 1 atm the same tube resonates (Q ≈ 8).
+func TestNoResonance(t *testing.T) {
+	t.Parallel()
+	tube := Tube{Ends: ClosedClosed, Mode: 1, Length: 0.2, Radius: 0.001, Losses: WallLosses}
+	r, err := TubeFrequency(tube, gas(t, "air", 293.15, 100))
+	var nr *NoResonanceError
+	if !errors.Is(err, ErrNoResonance) || !errors.As(err, &nr) || nr.Q >= MinQ || nr.Q != r.Q.Total {
+		t.Errorf("100 Pa: %v, Q %g", err, r.Q.Total)
+	}
+	if !strings.Contains(err.Error(), "no resonance") {
+		t.Errorf("message %q", err)
+	}
+	if _, err := TubeLength(tube, 500, gas(t, "air", 293.15, 100)); !errors.Is(err, ErrNoResonance) {
+		t.Errorf("length at 100 Pa: %v", err)
+	}
+	s := Setup{Tube: tube, Gas: mixture(t, "air"), Pressure: 100}
+	if _, err := s.DiagnoseTemperature(r.Frequency); !errors.Is(err, ErrNoResonance) {
+		t.Errorf("diagnosis at 100 Pa: %v", err)
+	}
+	ok, err := TubeFrequency(tube, gas(t, "air", 293.15, 101325))
+	if err != nil || ok.Q.Total < 5 {
+		t.Errorf("1 atm: Q %g, %v", ok.Q.Total, err)
+	}
+	tube.Losses = LossFree // the old path keeps its behaviour
+	if _, err := TubeFrequency(tube, gas(t, "air", 293.15, 100)); err != nil {
+		t.Errorf("loss-free at 100 Pa: %v", err)
 	}
 }
