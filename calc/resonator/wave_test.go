@@ -225,7 +225,7 @@ func TestWallLossZonedTube(t *testing.T) {
 		if !scalar.EqualWithinRel(m.Frequency, r.Frequency, 1e-10) {
 			t.Errorf("mode %d: zoned %.10g Hz, uniform %.10g Hz", i+1, m.Frequency, r.Frequency)
 		}
-		if !(m.Frequency < m.LossFree) || !(m.DecayRate > 0) {
+		if !(m.Frequency < m.LossFree) || !(m.DecayRate > 0) || !scalar.EqualWithinRel(m.Q, 2*math.Pi*m.Frequency/(2*m.DecayRate), 1e-12) {
 			t.Errorf("mode %d: %+v", i+1, m)
 		}
 	}
@@ -320,6 +320,11 @@ func TestNoResonance(t *testing.T) {
 	ok, err := TubeFrequency(tube, gas(t, "air", 293.15, 101325))
 	if err != nil || ok.Q.Total < 5 {
 		t.Errorf("1 atm: Q %g, %v", ok.Q.Total, err)
+	}
+	zt := ZonedTube{Ends: ClosedClosed, Losses: WallLosses, Gas: mixture(t, "air"), Pressure: 100,
+		Zones: []Zone{{Length: 0.2, Radius: 0.001, Temperature: 293.15}}}
+	if _, err := zt.Modes(1); !errors.Is(err, ErrNoResonance) {
+		t.Errorf("zoned at 100 Pa: %v", err)
 	}
 	tube.Losses = LossFree // the old path keeps its behaviour
 	if _, err := TubeFrequency(tube, gas(t, "air", 293.15, 100)); err != nil {

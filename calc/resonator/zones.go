@@ -42,7 +42,10 @@ type ZoneMode struct {
 	// DecayRate is Im ω of the mode with wall losses, 1/s (the amplitude
 	// decays as e^{-DecayRate·t}; wall losses only, no end caps or
 	// radiation); 0 without wall losses.
-	DecayRate  float64
+	DecayRate float64
+	// Q is Re ω/(2 Im ω) with wall losses (the side walls only; no end
+	// caps or radiation), +Inf without.
+	Q          float64
 	TravelTime float64 // travel-time estimate of the same mode, Hz
 	Difference float64 // TravelTime - Frequency, Hz
 }
@@ -121,7 +124,7 @@ func ZonedModes(ends Ends, corr EndCorrection, secs []Section, n int) (ZoneResul
 	}
 	for i, f := range roots {
 		tt := z.travelTime(i + 1)
-		res.Modes = append(res.Modes, ZoneMode{Number: i + 1, Frequency: f, LossFree: f, TravelTime: tt, Difference: tt - f})
+		res.Modes = append(res.Modes, ZoneMode{Number: i + 1, Frequency: f, LossFree: f, Q: math.Inf(1), TravelTime: tt, Difference: tt - f})
 		for j, s := range secs {
 			ka := 2 * math.Pi * f * s.Radius / s.SoundSpeed
 			if ka >= CutoffKA {
@@ -272,8 +275,9 @@ func (t ZonedTube) Modes(n int) (ZoneResult, error) {
 // pressure node at the end of its end correction δ(ka), a loss-free
 // extension of the end section (the gas moving outside has no wall), as
 // in ZonedModes, to which the result reduces as the losses vanish.
-// The mode's Frequency is Re ω/2π, its DecayRate Im ω; LossFree keeps the
-// loss-free frequency.
+// The mode's Frequency is Re ω/2π, its DecayRate Im ω, its Q
+// Re ω/(2 Im ω); LossFree keeps the loss-free frequency. A mode with Q
+// below MinQ is an error matching ErrNoResonance.
 //
 // The thermoviscous functions are taken at the real frequency Re ω, as in
 // calc/linear's Mode; that is exact at an engine's onset (real ω) and is
@@ -302,7 +306,11 @@ func ZonedModesLosses(ends Ends, corr EndCorrection, secs []Section, n int, loss
 		}
 		m.Frequency = real(omega) / (2 * math.Pi)
 		m.DecayRate = imag(omega)
+		m.Q = real(omega) / (2 * imag(omega))
 		m.Difference = m.TravelTime - m.Frequency
+		if m.Q < MinQ {
+			return ZoneResult{}, fmt.Errorf("mode %d: %w", m.Number, &NoResonanceError{Q: m.Q})
+		}
 	}
 	for i := 1; i < len(res.Modes); i++ {
 		if res.Modes[i].Frequency <= res.Modes[i-1].Frequency {
