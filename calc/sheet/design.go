@@ -8,6 +8,7 @@ import (
 	"strings"
 
 	"tubewright/calc/design"
+	"tubewright/calc/linear"
 	"tubewright/calc/units"
 )
 
@@ -17,17 +18,25 @@ const IDDesign ID = "design"
 // designSheet is the design calculator: from a target frequency, gas,
 // pressure, heater temperature and tube to a complete engine in the device
 // file format (calc/design's Design), with its onset, margin and
-// sensitivity table. With --device-out the device file is written.
+// sensitivity table; or, for a heat pump, from a wanted cold temperature
+// or span and a driver amplitude to a driven tube (DesignHeatPump). With
+// --device-out the device file is written.
 var designSheet = &Sheet{
 	ID:      IDDesign,
 	Title:   "Design from a target",
-	Summary: "From a frequency, gas, pressure and heater temperature to an engine that starts: every part's length, the stack's pores, the onset with its margin and what moves it",
+	Summary: "From a frequency, gas, pressure and heater temperature to an engine that starts (or from a cold temperature and a driver to a heat pump): every part's length, the stack's pores, the margin and what moves it",
 	Inputs: []Input{
+		{Key: "for", Label: "Design", Kind: Pick, Default: "engine",
+			Hint: "engine (heat in, sound out) or heat-pump (a loudspeaker drives the tube and the stack pumps heat)",
+			Choices: []Choice{
+				{Key: "engine", Words: "An engine that starts below my heater's temperature", Value: "engine"},
+				{Key: "heat-pump", Words: "A driven heat pump that reaches my cold temperature", Value: "heat-pump"},
+			}},
 		GasInput("gas", ""),
 		noPM(MeanPressureInput("pressure", "Mean pressure", ""), "10 bar"),
 		{Key: "frequency", Label: "Target frequency", Kind: Quantity, Dim: units.DimFrequency, Example: "300 Hz",
-			Min: 1, Max: 20000, Hint: "the frequency the engine should sing at, e.g. 300 Hz", Share: ShareFrequency},
-		noPM(TemperatureInput("hot", "Hottest the heater reaches", "", "650 K"), ""),
+			Min: 1, Max: 20000, Hint: "engine: the frequency it should sing at; heat pump: the tube's resonance at room temperature; e.g. 300 Hz", Share: ShareFrequency},
+		askedFor(noPM(TemperatureInput("hot", "Hottest the heater reaches (engine)", "", "650 K"), "")),
 		noPM(TemperatureInput("ambient", "Ambient (cooler) temperature", "295 K", ""), ""),
 		{Key: "diameter", Label: "Tube inside diameter", Kind: Quantity, Dim: units.DimLength, Example: "50 mm",
 			Min: 1e-3, Max: 2, Hint: "inside diameter of the tube, e.g. 50 mm or 2 in"},
@@ -53,18 +62,33 @@ var designSheet = &Sheet{
 		{Key: "min-gap", Label: "Smallest gap you can make", Kind: Quantity, Dim: units.DimLength, Optional: true,
 			Min: 0, MinOpen: true, Max: 0.05, Advanced: true,
 			Hint: "plate gap, pore diameter, screen opening or the wool's hydraulic diameter, e.g. 0.3 mm (empty: no limit)"},
+		{Key: "drive", Label: "Driver pressure amplitude (heat pump)", Kind: Quantity, Dim: units.DimPressure, Optional: true,
+			Min: 0, MinOpen: true, Max: 10e6, Example: "3 kPa", Hint: "pressure amplitude at the driver face, e.g. 3 kPa"},
+		askedFor(noPM(TemperatureInput("cold", "Cold temperature wanted (heat pump)", "", "273 K"), "")),
+		{Key: "span", Label: "Or the span wanted below ambient (heat pump)", Kind: Quantity, Dim: units.DimTemperatureDifference, Optional: true,
+			Min: 0, MinOpen: true, Max: 1000, Hint: "e.g. 20 K, when no cold temperature is given"},
 		{Key: "device-out", Label: "Write the device file to", Kind: Text, Optional: true, Advanced: true,
 			Hint: "a file name, e.g. d.json: the designed device is written there (replaced whole, never half-written)"},
 	},
 	About: "The stack's hydraulic radius starts at 1.5 δκ (1–2 δκ, common practice; Tijani et al. 2002; Swift 2002), its place where Swift's (1988) short-stack onset estimate is lowest, " +
 		"then position, length and pore size are chosen by minimising the onset temperature of the linear onset solver (gonum Nelder-Mead), " +
 		"each candidate's resonator length solved by Brent's method for the target frequency. Exchangers are as long as the peak-to-peak gas displacement at a 3 % working amplitude, " +
-		"the stack at least twice that (common practice). The design's file is read back and solved by the same onset solve as the Engine onset calculator.",
+		"the stack at least twice that (common practice). The design's file is read back and solved by the same onset solve as the Engine onset calculator. " +
+		"A heat pump: pores of 2 δκ (Tijani et al. 2002: lowest temperature), the stack placed and sized for the largest zero-load span of the linear heat-pump solve at the driver's amplitude, " +
+		"the tube tuned to the target at room temperature and driven at the resonance of the cooled tube.",
 	Examples: []string{
 		"twcalc design --gas helium --pressure 10bar --frequency 300Hz --hot 650K --ambient 295K --diameter 50mm --ends closed-closed --device-out d.json",
 		"twcalc design --gas air --pressure 1atm --frequency 120Hz --hot 800K --diameter 30mm --ends closed-open --stack metal-wool --wire 50um --json",
+		"twcalc design --for heat-pump --gas air --pressure 1atm --frequency 400Hz --diameter 40mm --drive 3kPa --span 20K",
 	},
 	Run: runDesign,
+}
+
+// askedFor returns in as an optional input (the Run says when it is
+// needed).
+func askedFor(in Input) Input {
+	in.Optional = true
+	return in
 }
 
 // noPM returns in without ± (the design takes none) and with example ex
@@ -86,6 +110,12 @@ var designSubjects = map[units.Subject]string{
 }
 
 func runDesign(v *Values) (*Result, error) {
+	if v.Pick("for") == "heat-pump" {
+		return runDesignHeatPump(v)
+	}
+	if !v.Has("hot") {
+		return nil, v.Blame(fmt.Errorf("%w: the hottest temperature the heater reaches, e.g. 650 K", ErrRequired), "hot")
+	}
 	t := design.Target{
 		Frequency:      v.SI("frequency"),
 		Gas:            v.Text("gas"),
@@ -121,17 +151,94 @@ func runDesign(v *Values) (*Result, error) {
 		r.Check("reachable", "Target reached", "yes", Pass, fmt.Sprintf("onset within 1 %% of %s and %s below the heater's %s",
 			units.Format(t.Frequency, units.DimFrequency), units.Format(res.Margin, units.DimTemperatureDifference), units.Format(t.HotTemperature, units.DimTemperature)))
 	}
-	if path := strings.TrimSpace(v.Text("device-out")); path != "" {
-		b, err := res.File.Marshal()
-		if err == nil {
-			err = writeAtomic(path, b)
-		}
-		if err != nil {
-			return nil, v.Blame(err, "device-out")
-		}
-		r.Note("Device file written to " + path + ".")
+	if err := deviceOut(v, r, &res.File); err != nil {
+		return nil, err
 	}
 	return r, nil
+}
+
+// runDesignHeatPump is the heat-pump variant: calc/design's DesignHeatPump.
+func runDesignHeatPump(v *Values) (*Result, error) {
+	if !v.Has("drive") {
+		return nil, v.Blame(fmt.Errorf("%w for a heat pump: the driver's pressure amplitude, e.g. 3 kPa", ErrRequired), "drive")
+	}
+	if v.Has("cold") == v.Has("span") {
+		return nil, v.Blame(errors.New("give the cold temperature wanted or the span, one of the two"), "cold")
+	}
+	t := design.HeatPumpTarget{
+		Frequency: v.SI("frequency"), Gas: v.Text("gas"), MeanPressure: v.SI("pressure"), Ambient: v.SI("ambient"),
+		Diameter: v.SI("diameter"), Ends: v.Pick("ends").(design.Ends), Stack: v.Pick("stack").(design.StackKind),
+		WireDiameter: v.SI("wire"), DriverAmplitude: v.SI("drive"), ColdTemperature: v.SI("cold"), Span: v.SI("span"),
+		MaxLength: v.SI("max-length"), MinGap: v.SI("min-gap"),
+	}
+	res, err := design.DesignHeatPump(t, nil)
+	var ue *design.UnreachableError
+	if err != nil && !errors.As(err, &ue) {
+		return nil, v.BlameSubject(err, heatPumpSubjects)
+	}
+	if res.Pump == nil {
+		return nil, err
+	}
+	r := &Result{}
+	p, g := res.Pump, res.Geometry
+	r.Add("cold_temperature", "Cold temperature at zero load", p.ColdTemperature, units.DimTemperature).Show = "K"
+	r.Add("span", "Span below ambient", res.Span, units.DimTemperatureDifference)
+	r.Add("margin", "Span beyond the one wanted", res.Margin, units.DimTemperatureDifference)
+	r.Add("drive_frequency", "Drive frequency (resonance of the cooled tube)", res.DriveFrequency, units.DimFrequency)
+	r.Add("acoustic_power", "Acoustic power the driver puts in", p.AcousticPower, units.DimPower)
+	r.Add("tube_length", "Whole tube", g.Length(), units.DimLength)
+	mm := func(key, label string, v float64) { r.Add(key, label, v, units.DimLength).Show = "mm" }
+	mm("driver_space", "Driver to warm exchanger", g.DriverSpace)
+	mm("warm_exchanger", "Warm exchanger", g.WarmExchanger)
+	mm("stack_position", "Stack warm face from the driver", g.Position())
+	mm("stack_length", "Stack", g.Stack)
+	mm("cold_exchanger", "Cold exchanger", g.ColdExchanger)
+	mm("resonator", "Resonator (cold exchanger to far end)", g.Resonator)
+	mm("hydraulic_radius", "Stack hydraulic radius", g.HydraulicRadius)
+	mm("gap", "Stack gap", g.Gap)
+	r.Add("porosity", "Stack porosity", g.Porosity, units.DimNone)
+	text := ""
+	if b, err := res.File.Marshal(); err == nil {
+		text = string(b)
+	}
+	r.AddObject("device", "Device file", res.File, text)
+	if ue != nil {
+		r.Check("reachable", "Target reached", "no: the nearest design is shown", Fail, ue.Problem)
+	} else {
+		r.Check("reachable", "Target reached", "yes", Pass, fmt.Sprintf("a span of %s at zero load, %s more than wanted",
+			units.Format(res.Span, units.DimTemperatureDifference), units.Format(res.Margin, units.DimTemperatureDifference)))
+	}
+	r.Warn(res.Warnings...)
+	r.Caution(res.Cautions...)
+	r.Note(res.Rules...)
+	if err := deviceOut(v, r, &res.File); err != nil {
+		return nil, err
+	}
+	return r, nil
+}
+
+// heatPumpSubjects maps calc/design's heat-pump range errors to inputs.
+var heatPumpSubjects = map[units.Subject]string{
+	units.SubjectFrequency:   "frequency",
+	units.SubjectPressure:    "drive",
+	units.SubjectTemperature: "cold",
+}
+
+// deviceOut writes the device file when device-out names one.
+func deviceOut(v *Values, r *Result, f *linear.DeviceFile) error {
+	path := strings.TrimSpace(v.Text("device-out"))
+	if path == "" {
+		return nil
+	}
+	b, err := f.Marshal()
+	if err == nil {
+		err = writeAtomic(path, b)
+	}
+	if err != nil {
+		return v.Blame(err, "device-out")
+	}
+	r.Note("Device file written to " + path + ".")
+	return nil
 }
 
 // designRows adds the design's figures, geometry, sensitivity and the

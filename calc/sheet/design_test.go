@@ -111,3 +111,55 @@ func TestDesignSheetBlamesInputs(t *testing.T) {
 		}
 	}
 }
+
+// TestDesignSheetHeatPump: the heat-pump variant designs a driven tube
+// that reaches the span wanted; its file, solved by linear.HeatPump with
+// default settings, gives the sheet's span; leaving out the driver
+// amplitude names that input.
+func TestDesignSheetHeatPump(t *testing.T) {
+	t.Parallel()
+	texts := map[string]string{"for": "heat-pump", "gas": "air", "pressure": "1 atm", "frequency": "400 Hz",
+		"diameter": "40 mm", "drive": "3 kPa", "span": "20 K", "ambient": "293 K"}
+	r, err := designSheet.Evaluate(texts)
+	if err != nil {
+		t.Fatal(err)
+	}
+	row, _ := r.Row("device")
+	d, err := linear.ParseDevice(strings.NewReader(row.Text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	hp, err := linear.HeatPump(d, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	span, _ := r.Row("span")
+	if !scalar.EqualWithinRel(span.Value, hp.TemperatureSpan, 1e-8) || span.Value < 20 {
+		t.Errorf("sheet span %.4f K, file %.4f K, wanted at least 20 K", span.Value, hp.TemperatureSpan)
+	}
+	if r.Worst() != Pass {
+		t.Errorf("verdicts %+v", r.Verdicts())
+	}
+	delete(texts, "drive")
+	_, err = designSheet.Evaluate(texts)
+	var fe *FieldError
+	if !errors.As(err, &fe) || fe.Key != "drive" || !errors.Is(err, ErrRequired) {
+		t.Errorf("without a drive: err = %v, want drive required", err)
+	}
+}
+
+// TestDesignSheetEngineNeedsHot: an engine design without the heater's
+// temperature names that input as required.
+func TestDesignSheetEngineNeedsHot(t *testing.T) {
+	t.Parallel()
+	texts := map[string]string{}
+	for k, v := range doneWhenTexts {
+		texts[k] = v
+	}
+	delete(texts, "hot")
+	_, err := designSheet.Evaluate(texts)
+	var fe *FieldError
+	if !errors.As(err, &fe) || fe.Key != "hot" || !errors.Is(err, ErrRequired) {
+		t.Errorf("err = %v, want hot required", err)
+	}
+}
