@@ -15,10 +15,11 @@ import (
 	"tubewright/calc/units"
 )
 
-// deviceEditor edits a device as an ordered list of parts on a phone: load
-// an example, add a part of a kind, move it up or down, edit its fields,
-// remove it. It holds the text of every field (as the device file has it)
-// and hands a linear.DeviceFile to the screen; it computes nothing.
+// deviceEditor edits a device as an ordered list of parts on a phone: add
+// a part of a kind, move it up or down, edit its fields, remove it (the
+// screen's example chips load an example into it). It holds the text of
+// every field (as the device file has it) and hands the device document
+// to the screen; it computes nothing.
 type deviceEditor struct {
 	env      *Env
 	gas      *GasPicker
@@ -31,7 +32,6 @@ type deviceEditor struct {
 	addKind  *Choice
 	add      widget.Clickable
 	example  string // the built-in example this editor starts from
-	reset    widget.Clickable
 	name     string
 	changed  bool
 	strip    *deviceStrip
@@ -45,8 +45,8 @@ var kindLabels = map[string]string{
 	linear.KindOpenEnd: "Open end",
 }
 
-// newDeviceEditor returns an editor holding the built-in example name; a
-// button loads it again. The examples are invented demo devices.
+// newDeviceEditor returns an editor holding the built-in example name. The
+// examples are invented demo devices.
 func newDeviceEditor(env *Env, example string) *deviceEditor {
 	e := &deviceEditor{
 		env:      env,
@@ -122,11 +122,18 @@ func (e *deviceEditor) File() *linear.DeviceFile {
 	return f
 }
 
+// document returns the device file the editor shows as one line of JSON:
+// the text of the calculators' "device" input.
+func (e *deviceEditor) document() string {
+	b, err := json.Marshal(e.File())
+	if err != nil {
+		panic("ui: device file cannot be written: " + err.Error())
+	}
+	return string(b)
+}
+
 // Update handles the editor's events and reports whether the device changed.
 func (e *deviceEditor) Update(gtx layout.Context) bool {
-	if e.reset.Clicked(gtx) {
-		_ = e.load(e.example)
-	}
 	e.saved.update(gtx, e)
 	if e.gas.Update(gtx) {
 		e.changed = true
@@ -243,18 +250,12 @@ func defaultPart(kind, diameter string) linear.PartFile {
 	return p
 }
 
-// Layout draws the editor: examples, gas and top-level fields, the strip,
-// the parts and the add row.
+// Layout draws the editor: the save buttons, the strip, the parts, the add
+// row, and the gas and fill fields.
 func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.Widget {
 	e.strip.dev = dev
 	th := e.env.Theme
-	ws := []layout.Widget{
-		func(gtx layout.Context) layout.Dimensions {
-			gtx.Constraints.Min.X = 0
-			return smallButton(e.env, gtx, &e.reset, "Start again from the "+exampleLabel(e.example)+" example")
-		},
-	}
-	ws = append(ws, e.saved.widgets(e.env)...)
+	ws := e.saved.widgets(e.env)
 	ws = append(ws,
 		e.strip.Layout,
 		func(gtx layout.Context) layout.Dimensions {
@@ -287,16 +288,6 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 // deviceStrip).
 const stripLegend = "To scale, start end on the left. Hatched: stack. Exchangers red when hot, blue at ambient, " +
 	"pale blue when cold, violet at a set temperature; tubes tinted the same way. Dark bars: closed ends; a wedge: the driver."
-
-func exampleLabel(name string) string {
-	switch name {
-	case "engine":
-		return "engine"
-	case "heatpump":
-		return "heat-pump"
-	}
-	return name
-}
 
 // smallButton draws a compact button.
 func smallButton(env *Env, gtx layout.Context, c *widget.Clickable, label string) layout.Dimensions {

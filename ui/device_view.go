@@ -1,116 +1,177 @@
 package ui
 
 import (
+	"context"
+
 	"gioui.org/layout"
 
 	"tubewright/calc/linear"
-	"tubewright/calc/units"
+	"tubewright/calc/sheet"
 )
 
-// deviceView is what the engine-onset and heat-pump screens share: a page
-// with the device editor, the results of the last solve and the caution
-// that goes with them, a status line while a solve runs, and the plots.
-// The screens embed it and add their own solve.
+// deviceView is what the engine-onset and heat-pump screens share: the
+// Form of the calculator's description (its fields, results and cautions),
+// the device editor, which supplies the Form's "device" input as the
+// device document it shows, the chips of the "example" input, which load a
+// built-in example into the editor, and the plots, drawn from the tables
+// the description returns for the profile and the sweep. The result rows
+// are computed with the Form (one solve, a few milliseconds); the plots,
+// several solves, run off the UI goroutine, and a newer edit cancels a
+// stale run.
 type deviceView struct {
-	env     *Env
-	page    *Page
-	editor  *deviceEditor
-	dev     *linear.Device // last valid device
-	results *Results
-	caution *Caution
-	plots   []*Plot
-	status  string
+	env    *Env
+	page   *Page
+	editor *deviceEditor
+	form   *Form
+	dev    *linear.Device // last valid device, for the strip
+	plots  []*Plot
+	job    *Job[*deviceTables]
+	status string
 }
 
-// newDeviceView returns a view on the example device example ("engine",
-// "heatpump") with n empty plots and a caution box under heading.
-func newDeviceView(env *Env, example, heading string, n int) deviceView {
+// deviceTables are the tables a screen's plots are drawn from.
+type deviceTables struct {
+	profile *sheet.Table // along the device
+	sweep   *sheet.Table // against mean pressure or drive frequency
+}
+
+// Input keys of the device calculators that the view handles itself.
+const (
+	keyDevice  = "device"
+	keyExample = "example"
+	noExample  = "none"
+)
+
+// newDeviceView returns a view of calculator s on the example device
+// example ("engine", "heatpump") with n empty plots.
+func newDeviceView(env *Env, s *sheet.Sheet, example string, n int) deviceView {
 	v := deviceView{
-		env:     env,
-		page:    NewPage(env),
-		editor:  newDeviceEditor(env, example),
-		results: NewResults(env),
-		caution: NewCaution(env, heading),
+		env:    env,
+		page:   NewPage(env),
+		editor: newDeviceEditor(env, example),
+		form:   NewForm(env, s),
+		job:    NewJob[*deviceTables](env.Invalidate),
 	}
 	for range n {
 		v.plots = append(v.plots, NewPlot(env))
 	}
+	v.takeDevice()
 	return v
 }
 
-// solving records d as the device being solved and says so.
-func (v *deviceView) solving(d *linear.Device) {
-	v.dev = d
-	v.status = "Solving…"
-}
+// Form implements formScreen: the screen is built on its description.
+func (v *deviceView) Form() *Form { return v.form }
 
-// fail shows err in place of results: no status, no plots and no caution
-// (its lines quote the numbers of the last solve, which no longer stand).
-func (v *deviceView) fail(err error) {
-	v.status = ""
-	v.results.Reset()
-	v.results.Fail(err)
-	v.caution.Lines = nil
-	for _, p := range v.plots {
-		p.Set(nil)
+// Leave cancels the plots' run.
+func (v *deviceView) Leave() { v.job.Cancel() }
+
+// takeDevice hands the editor's device to the Form and keeps the last
+// valid one for the strip.
+func (v *deviceView) takeDevice() {
+	v.form.SetText(keyDevice, v.editor.document())
+	if d, err := v.editor.File().Validate(); err == nil {
+		v.dev = d
 	}
 }
 
-// done empties the results and the status line before a finished solve
-// is shown.
-func (v *deviceView) done() {
+// update handles the example chips, the editor and the Form, in that
+// order, and reports whether the Form computed anew. A device problem is
+// shown as the device check words it, naming the part and field.
+func (v *deviceView) update(gtx layout.Context) bool {
+	if ex := v.form.Pick(keyExample); ex.Update(gtx) {
+		if name := ex.Selected(); name != noExample {
+			if err := v.editor.load(name); err != nil {
+				panic("ui: built-in example " + name + ": " + err.Error())
+			}
+		}
+		ex.Select(noExample)
+	}
+	if v.editor.Update(gtx) {
+		v.takeDevice()
+	}
+	if !v.form.Update(gtx) {
+		return false
+	}
+	if fes := sheet.FieldErrors(v.form.Err()); len(fes) > 0 && fes[0].Key == keyDevice {
+		v.form.Results.Reset()
+		v.form.Results.Fail(fes[0].Err)
+	}
+	return true
+}
+
+// startPlots runs tables off the UI goroutine for the Form's new result,
+// or clears the plots when there is none.
+func (v *deviceView) startPlots(tables func(ctx context.Context, texts map[string]string) (*deviceTables, error)) {
+	if v.form.Result() == nil {
+		v.job.Cancel()
+		v.status = ""
+		for _, p := range v.plots {
+			p.Set(nil)
+		}
+		return
+	}
+	texts := v.form.Texts()
+	v.status = "Drawing the plots…"
+	v.job.Start(func(ctx context.Context) (*deviceTables, error) { return tables(ctx, texts) })
+}
+
+// polled takes the plots' tables when they are ready (nil otherwise).
+func (v *deviceView) polled() *deviceTables {
+	if !v.job.Poll() {
+		return nil
+	}
 	v.status = ""
-	v.results.Reset()
+	t, err := v.job.Result()
+	if err != nil {
+		return nil
+	}
+	return t
+}
+
+// evaluateWith evaluates s on texts changed by the key-value pairs kv, for
+// the plots; a cancelled ctx stops before the solve.
+func evaluateWith(ctx context.Context, s *sheet.Sheet, texts map[string]string, kv ...string) (*sheet.Result, error) {
+	if err := ctx.Err(); err != nil {
+		return nil, err
+	}
+	t := make(map[string]string, len(texts))
+	for k, x := range texts {
+		t[k] = x
+	}
+	for i := 0; i+1 < len(kv); i += 2 {
+		t[kv[i]] = kv[i+1]
+	}
+	return s.Evaluate(t)
 }
 
 // top returns the first widgets of the screen: the intro, the heading, the
-// status line while solving, the results, the caution when it has lines
-// (always with results that bear on safety), the screen's own field, then
-// the device editor.
-func (v *deviceView) top(gtx layout.Context, intro, heading string, field *Field) []layout.Widget {
-	ws := []layout.Widget{Para(v.env, intro), Heading(v.env, heading)}
-	if v.status != "" {
-		ws = append(ws, Note(v.env, v.status))
+// results and their cautions, the screen's own inputs (by key), then the
+// example chips and the device editor.
+func (v *deviceView) top(gtx layout.Context, intro, heading string, keys ...string) []layout.Widget {
+	ws := []layout.Widget{Para(v.env, intro), Heading(v.env, heading), v.form.Results.Layout, v.form.CautionWidget}
+	for _, k := range keys {
+		ws = append(ws, v.form.InputWidget(k))
 	}
-	ws = append(ws, v.results.Layout)
-	if len(v.caution.Lines) > 0 {
-		ws = append(ws, v.caution.Layout)
-	}
-	ws = append(ws, field.Layout)
+	ws = append(ws, v.form.InputWidget(keyExample))
 	return append(ws, v.editor.Layout(gtx, v.dev)...)
 }
 
-// shortStackRows shows calc/linear's quick short-stack estimates under the
-// solved results, each with what it means and when it holds; the
-// estimate's own warnings go with the results' warnings. With pump, the
-// zero-load span of a heat pump is shown and Γ is the solved span over
-// the critical one; otherwise (an engine at onset) the critical
-// temperature difference, with Γ the onset difference over it.
-func shortStackRows(r *Results, ss *linear.ShortStackResult, pump bool) {
-	if ss == nil {
-		return
+// statusLine shows what runs in the background, or nothing.
+func (v *deviceView) statusLine(gtx layout.Context) layout.Dimensions {
+	if v.status == "" {
+		return layout.Dimensions{}
 	}
-	if pump {
-		if ss.ZeroLoadRatio > 0 {
-			r.Add("Short-stack zero-load span (quick estimate)", ss.ZeroLoadSpan, units.DimTemperatureDifference)
-			r.AddNote("with no load and no heat conducted back; compare with the solved span")
-		} else {
-			r.AddText("Short-stack zero-load span (quick estimate)", "none")
-			r.AddNote("viscous losses outweigh the pumping in this estimate")
-		}
-		r.Add("Short-stack Γ (solved span / critical)", ss.GradientRatio, units.DimNone)
-		r.AddNote("below 1 the stack pumps heat; at 1, the critical gradient, pumping stops")
-	} else {
-		r.Add("Short-stack critical ΔT (quick estimate)", ss.CriticalDifference, units.DimTemperatureDifference)
-		r.AddNote("gas at ambient temperature, stack centre from the closed end")
-		r.Add("Short-stack Γ (onset ΔT / critical)", ss.GradientRatio, units.DimNone)
-		r.AddNote("above 1 the stack can drive sound; losses elsewhere push onset higher")
+	return Note(v.env, v.status)(gtx)
+}
+
+// tableXY returns columns x and y of t as points.
+func tableXY(t *sheet.Table, x, y int, xScale float64) XYs {
+	if t == nil {
+		return nil
 	}
-	r.Add("k·Δx of the stack", ss.KDeltaX, units.DimNone)
-	r.AddNote("the short-stack estimate needs k·Δx much less than 1; rough above 0.3")
-	r.Add("δκ / y0 of the stack", ss.DepthRatio, units.DimNone)
-	r.AddNote("its boundary-layer form needs δκ much smaller than y0; rough above 0.5")
-	for _, w := range ss.Warnings {
-		r.Warn("Short-stack estimate: " + w)
+	xy := make(XYs, 0, len(t.Rows))
+	for _, r := range t.Rows {
+		xy = append(xy, XY{X: r[x] * xScale, Y: r[y]})
 	}
+	return xy
 }

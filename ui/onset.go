@@ -2,178 +2,84 @@ package ui
 
 import (
 	"context"
-	"fmt"
+	"strconv"
 
 	"gioui.org/layout"
 
-	"tubewright/calc/linear"
-	"tubewright/calc/units"
+	"tubewright/calc/sheet"
 )
 
-// onsetScreen builds an engine from parts and shows the hot temperature
-// and frequency at which it starts, the profiles along it and the onset
-// temperature against mean pressure. Every valid edit starts a new solve off
-// the UI goroutine; a newer edit cancels the stale one.
+// onsetScreen builds an engine from parts and shows, from the engine-onset
+// description, the hot temperature and frequency at which it starts (or,
+// with a hot temperature typed, the growth or decay of the nearest mode),
+// then the profiles along it and the onset temperature against mean
+// pressure, drawn from the description's tables off the UI goroutine.
 type onsetScreen struct {
 	deviceView
-	probe *Field // a hot temperature at which to show growth or decay
-	job   *Job[*onsetOutcome]
-}
-
-// onsetOutcome is what one solve produces.
-type onsetOutcome struct {
-	dev   *linear.Device
-	onset *linear.OnsetResult
-	sweep []linear.PressurePoint
-	probe float64            // K, 0 when none
-	mode  *linear.ModeResult // nearest mode at probe
-	merr  error
 }
 
 // newOnsetScreen builds the onset screen with the example engine.
 func newOnsetScreen(env *Env) Screen {
-	return &onsetScreen{
-		deviceView: newDeviceView(env, "engine", "Hot parts, pressure and sound", 5),
-		probe:      NewField(env, "Check a hot temperature below or above onset", units.DimTemperature, "500 K"),
-		job:        NewJob[*onsetOutcome](env.Invalidate),
-	}
+	s, _ := sheet.Lookup(sheet.IDOnset)
+	return &onsetScreen{deviceView: newDeviceView(env, s, "engine", 5)}
 }
 
 // Title implements Screen.
-func (s *onsetScreen) Title() string { return "Engine onset" }
+func (s *onsetScreen) Title() string { return s.form.Sheet.Title }
 
-// Leave cancels a running solve.
-func (s *onsetScreen) Leave() { s.job.Cancel() }
-
-// sweepPressures are the mean pressures of the onset sweep: an eighth to
-// four times the device's, geometric.
-func sweepPressures(pm float64) []float64 { return linear.Grid(pm/8, pm*4, 15, true) }
-
-// solveOnset is the job: onset with profiles, then the pressure sweep, one
-// point at a time so that a cancelled job stops early.
-func solveOnset(ctx context.Context, d *linear.Device, probe float64) (*onsetOutcome, error) {
-	r, err := linear.Onset(d, nil)
+// onsetTables is the plots' run: the profile of the result shown, then the
+// onset at mean pressures from an eighth to four times the device's.
+func onsetTables(ctx context.Context, s *sheet.Sheet, texts map[string]string) (*deviceTables, error) {
+	prof, err := evaluateWith(ctx, s, texts, "profile", "true")
 	if err != nil {
 		return nil, err
 	}
-	out := &onsetOutcome{dev: d, onset: r, probe: probe}
-	if probe > 0 {
-		out.mode, out.merr = linear.Mode(d, probe, &linear.Settings{FrequencyGuess: r.Frequency, NoProfile: true})
-	}
-	set := &linear.Settings{HotGuess: r.HotTemperature, FrequencyGuess: r.Frequency}
-	for _, p := range sweepPressures(d.MeanPressure) {
-		if err := ctx.Err(); err != nil {
-			return nil, err
+	out := &deviceTables{profile: prof.Table}
+	pm := 0.0
+	for _, d := range prof.Derived {
+		if d.Key == "mean_pressure" {
+			pm = d.Value
 		}
-		pt := linear.OnsetVsPressure(d, []float64{p}, set)[0]
-		out.sweep = append(out.sweep, pt)
 	}
-	return out, nil
+	if pm <= 0 {
+		return out, nil
+	}
+	span := strconv.FormatFloat(pm/8, 'g', -1, 64) + " Pa:" + strconv.FormatFloat(4*pm, 'g', -1, 64) + " Pa:15"
+	sw, err := evaluateWith(ctx, s, texts, "hot", "", "frequency-guess", "", "sweep-pressure", span)
+	if err == nil {
+		out.sweep = sw.Table
+	}
+	return out, ctx.Err()
 }
 
-// start validates the editor's device and starts a solve, or shows why not.
-func (s *onsetScreen) start() {
-	d, err := s.editor.File().Validate()
-	if err != nil {
-		s.job.Cancel()
-		s.fail(err)
-		return
-	}
-	s.solving(d)
-	probe, _ := s.probe.Value()
-	s.job.Start(func(ctx context.Context) (*onsetOutcome, error) { return solveOnset(ctx, d, probe) })
-}
-
-// show fills results, cautions and plots from a finished solve.
-func (s *onsetScreen) show(o *onsetOutcome, err error) {
-	if err != nil {
-		s.fail(err)
-		return
-	}
-	s.done()
-	r := s.results
-	res := o.onset
-	r.AddIn("Hot temperature at onset", res.HotTemperature, "K")
-	if c, err := units.FormatIn(res.HotTemperature, "degC"); err == nil {
-		r.AddNote("= " + c + "; the parts marked hot must reach this before the engine starts")
-	}
-	r.Add("Frequency", res.Frequency, units.DimFrequency)
-	r.Add("Hot / ambient temperature", res.TemperatureRatio, units.DimNone)
-	r.AddText("Newton iterations", fmt.Sprint(res.Iterations))
-	shortStackRows(r, res.ShortStack, false)
-	switch {
-	case o.probe <= 0:
-	case o.merr != nil:
-		r.AddText("At "+units.Format(o.probe, units.DimTemperature), "no mode found")
-		r.AddNote(o.merr.Error())
-	default:
-		verdict := "the sound decays"
-		if o.mode.Growing {
-			verdict = "the sound grows"
-		}
-		r.AddText("At "+units.Format(o.probe, units.DimTemperature), verdict)
-		r.AddNote(fmt.Sprintf("nearest mode %s, growth rate %s, Q %s", units.Format(o.mode.Frequency, units.DimFrequency),
-			units.Format(o.mode.GrowthRate, units.DimRate), modeQText(o.mode.Q)))
-	}
-	r.Warn(res.Warnings...)
-	s.caution.Lines = []string{
-		"Hot parts: the hot end must reach about " + units.Format(res.HotTemperature, units.DimTemperature) + " before the engine starts. Heaters, exchangers and walls at this temperature burn skin and can ignite nearby material; let them cool before touching.",
-		"Pressure: the device is charged to " + pressureText(o.dev.MeanPressure) + " absolute. The vessel must be rated for it at the hot temperature; use the Safety pass and defer to local pressure-vessel codes and licensed practice.",
-		"Sound: a running engine can be very loud; wear hearing protection near it.",
-		"A linear estimate: heat leaks, streaming and construction change real onset; approach it slowly.",
-	}
-	setProfilePlots(s.plots[:4], &res.Profile)
-	var xy XYs
-	for _, p := range o.sweep {
-		if p.Err == nil {
-			xy = append(xy, XY{X: p.Pressure / 1e5, Y: p.HotTemperature})
-		}
-	}
-	pp := lineXY(xy, "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure")
+// showPlots draws the profiles and the onset against mean pressure.
+func (s *onsetScreen) showPlots(t *deviceTables) {
+	setProfilePlots(s.plots[:4], t.profile)
+	pp := lineXY(tableXY(t.sweep, 0, 1, 1e-5), "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure")
 	if pp != nil {
-		// Pressures are spaced geometrically: a log axis shows the U.
 		pp.X.Log = true
 	}
 	s.plots[4].Set(pp)
 }
 
-// modeQText formats a quality factor; at onset it is unbounded.
-func modeQText(q float64) string {
-	if q > 1e12 {
-		return "unbounded (at onset)"
-	}
-	return units.Format(q, units.DimNone)
-}
-
-// pressureText is "8 bar (800 kPa)"-style text.
-func pressureText(p float64) string {
-	b, err := units.FormatIn(p, "bar")
-	if err != nil {
-		return units.Format(p, units.DimPressure)
-	}
-	return b
-}
-
-// setProfilePlots draws |p1|, |U1|, Tm and acoustic power along x.
-func setProfilePlots(plots []*Plot, pr *linear.Profile) {
+// setProfilePlots draws |p1|, |U1|, Tm and acoustic power along x from a
+// profile table (columns as calc/sheet writes them: x, |p1|, |U1|, phase,
+// Tm, acoustic power).
+func setProfilePlots(plots []*Plot, t *sheet.Table) {
 	cols := []struct {
-		y           []float64
+		col         int
 		label, unit string
 	}{
-		{pr.PressureAmp, "|p1|", "Pa"},
-		{pr.FlowAmp, "|U1|", "m³/s"},
-		{pr.Temperature, "Mean temperature Tm", "K"},
-		{pr.AcousticPower, "Acoustic power", "W"},
+		{1, "|p1|", "Pa"},
+		{2, "|U1|", "m³/s"},
+		{4, "Mean temperature Tm", "K"},
+		{5, "Acoustic power", "W"},
 	}
 	for i, c := range cols {
 		if i >= len(plots) {
 			break
 		}
-		xy := make(XYs, len(pr.X))
-		for k := range pr.X {
-			xy[k] = XY{X: pr.X[k], Y: c.y[k]}
-		}
-		plots[i].Set(lineXY(xy, "Position from the start end", "m", c.label, c.unit, c.label+" along the device"))
+		plots[i].Set(lineXY(tableXY(t, 0, c.col, 1), "Position from the start end", "m", c.label, c.unit, c.label+" along the device"))
 	}
 }
 
@@ -190,24 +96,23 @@ func lineXY(xy XYs, xl, xu, yl, yu, title string) *Chart {
 
 // Layout implements Screen.
 func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
-	if s.job.Poll() {
-		s.show(s.job.Result())
+	if t := s.polled(); t != nil {
+		s.showPlots(t)
 	}
-	changed := s.editor.Update(gtx)
-	if s.probe.Update(gtx) {
-		changed = true
-	}
-	if changed {
-		s.start()
+	if s.update(gtx) {
+		sh := s.form.Sheet
+		s.startPlots(func(ctx context.Context, texts map[string]string) (*deviceTables, error) {
+			return onsetTables(ctx, sh, texts)
+		})
 	}
 	ws := s.top(gtx, "Build the engine from parts, closed end first. The hot temperature and frequency at which it starts are solved with Rott's linear theory after every change.",
-		"Onset", s.probe)
-	ws = append(ws, Heading(s.env, "Along the device at onset"))
+		"Onset", "hot", "frequency-guess")
+	ws = append(ws, Heading(s.env, "Along the device"), s.statusLine)
 	for _, p := range s.plots[:4] {
 		ws = append(ws, p.Layout)
 	}
-	ws = append(ws, Note(s.env, "Profiles for |p1| = 1 Pa at the start end: the linear theory fixes shapes, not amplitudes."))
+	ws = append(ws, Note(s.env, "Profiles for |p1| = 1 Pa at the start end: the linear theory fixes shapes, not amplitudes. With a hot temperature typed, they are the nearest mode's at that temperature."))
 	ws = append(ws, Heading(s.env, "Onset and fill pressure"), s.plots[4].Layout)
-	ws = append(ws, Note(s.env, "Method: Rott's linear wave equations for p1 and U1 with the thermoviscous functions of each part (Swift 2002, ch. 4), integrated part by part; onset is the hot temperature and real frequency that meet the far-end condition."))
+	ws = append(ws, Note(s.env, s.form.Sheet.About))
 	return s.page.Layout(gtx, ws...)
 }

@@ -12,7 +12,8 @@ import (
 	"tubewright/calc/units"
 )
 
-// waitSolved runs frames until the screen's job has delivered a result.
+// waitSolved runs frames until the screen's plots job has delivered its
+// tables (the result rows come with the Form, at once).
 func waitSolved(t *testing.T, h *harness, running func() bool, have func() bool) {
 	t.Helper()
 	deadline := time.Now().Add(20 * time.Second)
@@ -54,12 +55,12 @@ func TestOnsetScreenEdits(t *testing.T) {
 	solved := func() { waitSolved(t, h, s.job.Running, s.job.Has) }
 	solved()
 	row := "Hot temperature at onset"
-	got, ok := s.results.Value(row)
+	got, ok := s.form.Results.Value(row)
 	if want := wantOnset(t, s.editor); !ok || got != want {
 		t.Fatalf("example engine: %q shows %q, want %q (calc/linear)", row, got, want)
 	}
-	if len(s.caution.Lines) == 0 || !strings.Contains(s.caution.Lines[0], "Hot parts") {
-		t.Errorf("no hot-parts caution beside the onset temperature: %q", s.caution.Lines)
+	if c := cautions(s.form); len(c) == 0 || !strings.Contains(c[0], "Hot parts") {
+		t.Errorf("no hot-parts caution beside the onset temperature: %q", c)
 	}
 	// Γ of the short-stack estimate, as calc/linear gives it.
 	d0, _ := s.editor.File().Validate()
@@ -67,25 +68,30 @@ func TestOnsetScreenEdits(t *testing.T) {
 	if err != nil || o0.ShortStack == nil {
 		t.Fatalf("calc/linear onset: %v, short stack %v", err, o0.ShortStack)
 	}
-	if got, want := rowValue(s.results, "Short-stack Γ (onset ΔT / critical)"), units.Format(o0.ShortStack.GradientRatio, units.DimNone); got != want {
+	if got, want := rowValue(s.form.Results, "Short-stack Γ (onset ΔT / critical)"), units.Format(o0.ShortStack.GradientRatio, units.DimNone); got != want {
 		t.Errorf("onset Γ %q, want %q", got, want)
 	}
 	// Open the stack and break its porosity: one message naming part and field.
 	h.click(h.mustDesc("Edit part 4").Desc.Bounds)
 	h.retype("Porosity (open fraction)", "0.76", "1.4")
-	if f := s.results.Failure(); !strings.Contains(f, `part 4 (stack): field "porosity" = 1.4 must be in (0, 1]`) {
+	if f := s.form.Results.Failure(); !strings.Contains(f, `part 4 (stack): field "porosity" = 1.4 must be in (0, 1]`) {
 		t.Errorf("porosity 1.4: failure %q", f)
 	}
 	// No result, no caution: its lines quoted the last onset temperature.
-	if len(s.caution.Lines) != 0 {
-		t.Errorf("porosity 1.4: a stale caution is still shown: %q", s.caution.Lines)
+	if c := cautions(s.form); len(c) != 0 {
+		t.Errorf("porosity 1.4: a stale caution is still shown: %q", c)
 	}
-	// Mend it: a new solve with the new value.
-	h.retype("Porosity (open fraction)", "1.4", "0.6")
+	// Mend it (a porosity that disagrees with the plates is refused too),
+	// then shorten the stack: a new solve with the new value.
+	h.retype("Porosity (open fraction)", "1.4", "0.76")
+	if got1, _ := s.form.Results.Value(row); got1 != got {
+		t.Errorf("porosity 0.76 again: %q, want the first %q", got1, got)
+	}
+	h.retype("Length", "60 mm", "45 mm")
 	solved()
-	got2, _ := s.results.Value(row)
+	got2, _ := s.form.Results.Value(row)
 	if want := wantOnset(t, s.editor); got2 != want || got2 == got {
-		t.Errorf("porosity 0.6: %q, want %q (and not the old %q)", got2, want, got)
+		t.Errorf("stack 45 mm: %q, want %q (and not the old %q)", got2, want, got)
 	}
 	// Move part 2 (hot tube) down: part 2 is now the heater.
 	h.click(h.mustDesc("Down part 2").Desc.Bounds)
@@ -100,7 +106,7 @@ func TestOnsetScreenEdits(t *testing.T) {
 		t.Fatalf("Remove: %d parts, want %d", len(s.editor.parts), n-1)
 	}
 	solved()
-	if f := s.results.Failure(); f != "" {
+	if f := s.form.Results.Failure(); f != "" {
 		t.Errorf("after removing the hot tube: %q", f)
 	}
 	// Add a cavity: it goes right after the open part (the stack).
@@ -124,21 +130,33 @@ func kinds(e *deviceEditor) []string {
 	return k
 }
 
-// TestOnsetScreenStaleSolve: an edit made while a solve runs cancels it;
-// the result shown is the newest device's.
+// TestOnsetScreenStaleSolve: an edit made while the plots are drawn
+// cancels their run; the result and the plots shown are the newest
+// device's.
 func TestOnsetScreenStaleSolve(t *testing.T) {
 	env := NewEnv(nil)
 	s := newOnsetScreen(env).(*onsetScreen)
 	h := newHarness(t, image.Pt(412, 6000), s.Layout)
 	if !s.job.Running() {
-		t.Fatal("no solve started for the example")
+		t.Fatal("no plots started for the example")
 	}
 	h.click(h.mustDesc("Edit part 4").Desc.Bounds)
 	h.retype("Length", "60 mm", "45 mm")
 	waitSolved(t, h, s.job.Running, s.job.Has)
-	got, _ := s.results.Value("Hot temperature at onset")
+	got, _ := s.form.Results.Value("Hot temperature at onset")
 	if want := wantOnset(t, s.editor); got != want {
 		t.Errorf("shown %q, want %q for the edited device", got, want)
+	}
+	d, _ := s.editor.File().Validate()
+	prof := s.plots[0].Chart()
+	if prof == nil || len(prof.Lines) != 1 {
+		t.Fatalf("no profile plot after the edit")
+	}
+	if l := prof.Lines[0]; l[len(l)-1].X != d.Length() {
+		t.Errorf("profile ends at %g m, the edited device is %g m long", l[len(l)-1].X, d.Length())
+	}
+	if s.plots[4].Chart() == nil {
+		t.Error("no onset-against-pressure plot")
 	}
 }
 
@@ -154,12 +172,12 @@ func TestHeatPumpScreen(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if got, want := rowValue(s.results, "Temperature span"), units.Format(r.TemperatureSpan, units.DimTemperatureDifference); got != want {
+	if got, want := rowValue(s.form.Results, "Temperature span"), units.Format(r.TemperatureSpan, units.DimTemperatureDifference); got != want {
 		t.Errorf("span %q, want %q", got, want)
 	}
 	// The driver's volume velocity in L/s, the short-stack estimates as
 	// calc/linear gives them (its tests check them against Swift 1988).
-	if got, want := rowValue(s.results, "Volume-velocity amplitude at the driver"), mustIn(t, r.DriverFlow, "L/s"); got != want || !strings.HasSuffix(got, " L/s") {
+	if got, want := rowValue(s.form.Results, "Volume-velocity amplitude at the driver"), devIn(t, r.DriverFlow, "L/s"); got != want || !strings.HasSuffix(got, " L/s") {
 		t.Errorf("driver volume velocity %q, want %q", got, want)
 	}
 	ss := r.ShortStack
@@ -177,26 +195,44 @@ func TestHeatPumpScreen(t *testing.T) {
 		{"k·Δx of the stack", ss.KDeltaX, units.DimNone, "k·Δx much less than 1"},
 		{"δκ / y0 of the stack", ss.DepthRatio, units.DimNone, "δκ much smaller than y0"},
 	} {
-		if got, want := rowValue(s.results, c.row), units.Format(c.v, c.dim); got != want {
+		if got, want := rowValue(s.form.Results, c.row), units.Format(c.v, c.dim); got != want {
 			t.Errorf("%s: %q, want %q", c.row, got, want)
 		}
-		if !strings.Contains(s.results.String(), c.note) {
-			t.Errorf("%s: validity note %q missing:\n%s", c.row, c.note, s.results.String())
+		if !strings.Contains(s.form.Results.String(), c.note) {
+			t.Errorf("%s: validity note %q missing:\n%s", c.row, c.note, s.form.Results.String())
 		}
 	}
 	h.retype("Cooling load at the cold side", "0 W", "100 mW")
 	waitSolved(t, h, s.job.Running, s.job.Has)
-	if v := rowValue(s.results, "COP / Carnot COP"); v == "" || strings.HasPrefix(v, "0 at") {
+	if v := rowValue(s.form.Results, "COP / Carnot COP"); v == "" || v == "0" {
 		t.Errorf("with a load: COP/Carnot %q", v)
 	}
-	if len(s.caution.Lines) == 0 || !strings.Contains(s.caution.Lines[0], "Sound") {
-		t.Errorf("no sound caution: %q", s.caution.Lines)
+	if c := cautions(s.form); len(c) == 0 || !strings.Contains(c[0], "Sound") {
+		t.Errorf("no sound caution: %q", c)
 	}
 }
 
 func rowValue(r *Results, label string) string {
 	v, _ := r.Value(label)
 	return v
+}
+
+// cautions are the cautions shown with the form's result (none without a
+// result).
+func cautions(f *Form) []string {
+	if f.Result() == nil {
+		return nil
+	}
+	return f.Result().Cautions
+}
+
+func devIn(t *testing.T, v float64, unit string) string {
+	t.Helper()
+	s, err := units.FormatIn(v, unit)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return s
 }
 
 // TestScreenshotOnsetSolved pictures both screens solved, with one part
@@ -236,19 +272,80 @@ func TestScreenshotOnsetSolved(t *testing.T) {
 }
 
 // TestOnsetScreenProbe: the growth or decay at a typed hot temperature is
-// the one of linear.Mode (decay below onset, growth above).
+// the one of linear.Mode (decay below onset, growth above); a typed ± is
+// carried to the growth rate.
 func TestOnsetScreenProbe(t *testing.T) {
 	env := NewEnv(nil)
 	s := newOnsetScreen(env).(*onsetScreen)
 	h := newHarness(t, image.Pt(412, 6000), s.Layout)
 	waitSolved(t, h, s.job.Running, s.job.Has)
-	if v := rowValue(s.results, "At 500 K"); v != "the sound decays" {
+	const probe, verdict = "Check a hot temperature below or above onset", "The sound at this hot temperature"
+	h.retype(probe, "", "500 K")
+	if v := rowValue(s.form.Results, verdict); v != "decays (below onset)" {
 		t.Errorf("at 500 K: %q, want decay (onset of the example is about 711 K)", v)
 	}
-	h.retype("Check a hot temperature below or above onset", "500 K", "800 K")
-	waitSolved(t, h, s.job.Running, s.job.Has)
-	if v := rowValue(s.results, "At 800 K"); v != "the sound grows" {
+	h.retype(probe, "500 K", "800 K")
+	if v := rowValue(s.form.Results, verdict); v != "grows (above onset)" {
 		t.Errorf("at 800 K: %q, want growth", v)
+	}
+	d, _ := s.editor.File().Validate()
+	m, err := linear.Mode(d, 800, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, want := rowValue(s.form.Results, "Growth rate (negative: decays)"), units.Format(m.GrowthRate, units.DimRate); got != want {
+		t.Errorf("growth rate at 800 K %q, linear.Mode %q", got, want)
+	}
+	h.retype(probe, "800 K", "800 K ± 10 K")
+	if got := rowValue(s.form.Results, "Growth rate (negative: decays)"); !strings.Contains(got, "±") {
+		t.Errorf("growth rate at 800 K ± 10 K shows no ±: %q", got)
+	}
+}
+
+// TestOnsetScreenDevicePM: a ± typed into the device (the mean pressure of
+// the editor) is refused with the device check's own words, the ones the
+// terminal prints for a file with the same ±, naming the field.
+func TestOnsetScreenDevicePM(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	h := newHarness(t, image.Pt(412, 6000), s.Layout)
+	h.retype("Mean pressure", s.editor.pressure.Text(), "8 bar ± 0.5 bar")
+	_, err := s.form.Sheet.Evaluate(map[string]string{"device": s.editor.document()})
+	fes := sheet.FieldErrors(err)
+	if len(fes) != 1 || fes[0].Key != "device" {
+		t.Fatalf("the description gives %v for the device with ±", err)
+	}
+	want := fes[0].Err.Error()
+	if f := s.form.Results.Failure(); f != want || !strings.Contains(f, `field "mean_pressure"`) {
+		t.Errorf("failure %q, want %q", f, want)
+	}
+	if s.form.Result() != nil || s.plots[0].Chart() != nil {
+		t.Error("a result or a plot is still shown")
+	}
+}
+
+// TestDeviceScreenExampleChips: the example chips load a built-in example
+// into the editor (the heat pump's driver is then the first part, which an
+// engine refuses by the part's kind) and the engine back.
+func TestDeviceScreenExampleChips(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	h := newHarness(t, image.Pt(412, 9000), s.Layout)
+	h.tap("The example heat pump")
+	h.frames(2)
+	if k := s.editor.parts[0].kind; k != linear.KindDriver {
+		t.Fatalf("after the heat-pump chip the first part is %s", k)
+	}
+	if s.form.Text("example") != "none" {
+		t.Errorf("the chip stays on %q; the editor holds the device", s.form.Text("example"))
+	}
+	if s.form.Result() != nil && rowValue(s.form.Results, "Hot temperature at onset") != "" {
+		t.Error("the heat pump shows an onset temperature")
+	}
+	h.tap("The example engine")
+	h.frames(2)
+	if got, want := rowValue(s.form.Results, "Hot temperature at onset"), wantOnset(t, s.editor); got != want {
+		t.Errorf("engine again: %q, want %q", got, want)
 	}
 }
 

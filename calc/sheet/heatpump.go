@@ -20,7 +20,7 @@ var heatPumpSheet = &Sheet{
 		exampleInput(),
 		{Key: "load", Label: "Cooling load at the cold side", Kind: Quantity, Dim: units.DimPower, Default: "0 W",
 			PM: true, Min: 0, Max: 1e6, Hint: "W or mW, e.g. 0.5 W; 0 for the zero-load span; ± or +- for an uncertainty"},
-		{Key: "frequency", Label: "Drive frequency", Kind: Quantity, Dim: units.DimFrequency, Optional: true,
+		{Key: "frequency", Label: "Drive at another frequency", Kind: Quantity, Dim: units.DimFrequency, Optional: true,
 			Min: 0.1, Max: 1e6, Advanced: true, Hint: "e.g. 400 Hz (empty: the driver's own \"frequency\")"},
 		{Key: "sweep-frequency", Label: "Span against drive frequency", Kind: Sweep, Dim: units.DimFrequency,
 			Optional: true, Min: 0.1, Max: 1e6, Hint: "span against drive frequency as a table, FROM:TO[:N], e.g. 300Hz:480Hz:19"},
