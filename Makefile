@@ -15,8 +15,16 @@ DEB_PKGS := gcc pkg-config libwayland-dev libx11-dev libx11-xcb-dev \
 
 FUZZTIME ?= 20s
 
+# The browser build and its test: Debian's chromium driven by playwright-core
+# from npm (no browser download), installed under build/npm.
+WEB_DIR := build/web
+NPM_DIR := build/npm
+PLAYWRIGHT_VERSION := 1.65.2
+BROWSER_PKGS := chromium fonts-dejavu-core
+SERVE_ADDR ?= 127.0.0.1:8080
+
 .PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
-	web shots bench fuzz clean
+	web serve-web web-size browser-deps browser-test shots bench fuzz clean
 
 all: test
 
@@ -25,7 +33,7 @@ run: deps
 	$(GO) run -ldflags "$(LDFLAGS)" ./cmd/tubewright
 
 ## test: everything CI checks
-test: deps fmt-check vet lint unit build-twcalc build-wasm
+test: deps fmt-check vet lint unit build-twcalc build-wasm browser-test
 	@echo "make test: all checks passed"
 
 check-go:
@@ -67,12 +75,51 @@ build-twcalc:
 build-wasm:
 	GOOS=js GOARCH=wasm $(GO) build -o /dev/null ./cmd/tubewright
 
-## web: the WebAssembly build with its page shell, in build/web
+## web: the WebAssembly build with its page shell in build/web: the app raw
+## and gzip-compressed, and a service worker that lists exactly these files
 web: check-go
-	rm -rf build/web && mkdir -p build/web
-	GOOS=js GOARCH=wasm $(GO) build -ldflags "-s -w $(LDFLAGS)" -o build/web/tubewright.wasm ./cmd/tubewright
-	cp assets/web/* build/web/
-	cp "$$($(GO) env GOROOT)/lib/wasm/wasm_exec.js" build/web/
+	rm -rf $(WEB_DIR) && mkdir -p build
+	GOOS=js GOARCH=wasm $(GO) build -trimpath -ldflags "-s -w $(LDFLAGS)" -o build/tubewright.wasm ./cmd/tubewright
+	$(GO) run ./assets/web/pack -wasm build/tubewright.wasm -out $(WEB_DIR)
+
+## serve-web: build, then serve build/web on http://$(SERVE_ADDR)/ to try it here
+serve-web: web
+	$(GO) run ./assets/web/pack -serve $(WEB_DIR) -addr $(SERVE_ADDR)
+
+## web-size: a table of the app's raw and compressed sizes, the bytes of a cold
+## visit and the first-frame time in headless Chromium at phone size
+web-size: web browser-deps
+	NODE_PATH=$(CURDIR)/$(NPM_DIR)/node_modules node assets/web/browsertest/run.js size $(WEB_DIR)
+
+browser-deps:
+	@missing=""; \
+	for p in $(BROWSER_PKGS); do \
+		dpkg-query -W -f='$${Status}' $$p 2>/dev/null | grep -q 'install ok installed' || missing="$$missing $$p"; \
+	done; \
+	if [ -n "$$missing" ]; then \
+		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
+			echo "installing system packages:$$missing"; \
+			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends $$missing >/dev/null; \
+		else \
+			echo "missing system packages; run:"; \
+			echo "  sudo apt-get install -y --no-install-recommends$$missing"; \
+			exit 1; \
+		fi; \
+	fi
+	@command -v npm >/dev/null || { \
+		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
+			echo "installing system packages: nodejs npm"; \
+			DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends nodejs npm >/dev/null; \
+		else \
+			echo "npm is missing; run:"; echo "  sudo apt-get install -y --no-install-recommends nodejs npm"; exit 1; \
+		fi; }
+	@test -f $(NPM_DIR)/node_modules/playwright-core/package.json || \
+		npm install --prefix $(NPM_DIR) --no-save --no-audit --no-fund playwright-core@$(PLAYWRIGHT_VERSION)
+
+## browser-test: the built folder in headless Chromium at phone size with touch
+browser-test: web browser-deps
+	$(GO) run ./assets/web/pack -check $(WEB_DIR)
+	NODE_PATH=$(CURDIR)/$(NPM_DIR)/node_modules node assets/web/browsertest/run.js test $(WEB_DIR)
 
 ## shots: screenshots of every screen at phone, tablet and desktop sizes, in build/shots
 shots: deps

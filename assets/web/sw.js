@@ -1,30 +1,55 @@
-// Tubewright's service worker: keeps the app's own files in a cache so the
-// app starts with no network. Cache first, then the network (same origin
-// only) to fill the cache. Bump VERSION when the file list changes; a new
-// build is picked up because the network copy refreshes the cache in the
-// background.
+// Tubewright's service worker: the app's own files, kept as one set per
+// build so the app starts with no network.
+//
+// assets/web/pack fills in BUILD (a hash of the build's files) and FILES
+// (exactly the files of the built folder but this one; a Go test checks
+// the list against the folder). A new build is fetched whole into a new
+// cache; only when every file has arrived does the new set take over and
+// the old one go. Nothing is fetched from any other site.
 "use strict";
-const VERSION = "tubewright-v1";
-const FILES = [
-  "./",
-  "index.html",
-  "wasm_exec.js",
-  "tubewright.wasm",
-  "manifest.webmanifest",
-  "icon.svg",
-  "icon-192.png",
-  "icon-512.png",
-];
+const BUILD = "__BUILD__";
+const CACHE = "tubewright-" + BUILD;
+const FILES = [];
+const WASM_GZ = "tubewright.wasm.gz";
+const WASM_RAW = "tubewright.wasm";
+// The app is needed in one form: compressed where the browser can unpack
+// it (as the page does), else raw. The other form is not downloaded.
+const GZ = typeof DecompressionStream === "function";
+const SET = FILES.filter((f) => f !== (GZ ? WASM_RAW : WASM_GZ));
 
 self.addEventListener("install", (event) => {
-  event.waitUntil(caches.open(VERSION).then((c) => c.addAll(FILES)).then(() => self.skipWaiting()));
+  event.waitUntil((async () => {
+    const cache = await caches.open(CACHE);
+    try {
+      const got = await Promise.all(SET.map(async (f) => {
+        // The page fetched the app as f?v=BUILD a moment ago: take that
+        // copy from the browser's HTTP cache rather than download it again.
+        const wasm = f === WASM_GZ || f === WASM_RAW;
+        const req = new Request(wasm ? f + "?v=" + BUILD : f, { cache: wasm ? "force-cache" : "no-cache" });
+        const resp = await fetch(req);
+        if (!resp.ok) throw new Error(f + ": HTTP " + resp.status);
+        // A fresh response: a redirected one cannot answer a navigation.
+        return [f, new Response(await resp.blob(), { headers: resp.headers })];
+      }));
+      for (const [f, resp] of got) {
+        if (f === "index.html") await cache.put("./", resp.clone());
+        await cache.put(f, resp);
+      }
+    } catch (err) {
+      await caches.delete(CACHE); // an incomplete set is never used
+      throw err;
+    }
+    await self.skipWaiting();
+  })());
 });
 
 self.addEventListener("activate", (event) => {
-  event.waitUntil(
-    caches.keys()
-      .then((keys) => Promise.all(keys.filter((k) => k !== VERSION).map((k) => caches.delete(k))))
-      .then(() => self.clients.claim()));
+  event.waitUntil((async () => {
+    for (const k of await caches.keys()) {
+      if (k.startsWith("tubewright-") && k !== CACHE) await caches.delete(k);
+    }
+    await self.clients.claim();
+  })());
 });
 
 self.addEventListener("fetch", (event) => {
@@ -32,20 +57,15 @@ self.addEventListener("fetch", (event) => {
   if (req.method !== "GET" || new URL(req.url).origin !== self.location.origin) {
     return; // the app never asks other sites for anything
   }
-  event.respondWith(
-    caches.open(VERSION).then(async (cache) => {
-      const hit = await cache.match(req, { ignoreSearch: true });
-      const refresh = fetch(req)
-        .then((resp) => {
-          if (resp.ok) cache.put(req, resp.clone());
-          return resp;
-        })
-        .catch(() => undefined);
-      if (hit) {
-        event.waitUntil(refresh);
-        return hit;
-      }
-      const resp = await refresh;
-      return resp || new Response("offline and not cached: " + req.url, { status: 503 });
-    }));
+  event.respondWith((async () => {
+    const cache = await caches.open(CACHE);
+    const hit = await cache.match(req, { ignoreSearch: true });
+    if (hit) return hit;
+    try {
+      return await fetch(req);
+    } catch (err) {
+      return new Response("Tubewright is offline and this file is not in its set: " + req.url,
+        { status: 503, headers: { "Content-Type": "text/plain; charset=utf-8" } });
+    }
+  })());
 });

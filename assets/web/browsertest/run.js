@@ -1,0 +1,175 @@
+// The browser test of the built web folder, in Debian's headless Chromium
+// driven by playwright-core (no browser download).
+//
+//   node run.js test DIR   phone size with touch: the page loads and draws,
+//                          a tap opens a calculator, typing into a field
+//                          changes the result, offline + reload still
+//                          starts, and no request leaves the origin
+//   node run.js size DIR   a table of raw and compressed sizes, the bytes a
+//                          cold visit downloads and the first-frame time
+//
+// It serves DIR itself on 127.0.0.1 (a secure context, so the service
+// worker registers) and counts the bytes it sends.
+"use strict";
+const http = require("http");
+const fs = require("fs");
+const path = require("path");
+const zlib = require("zlib");
+const { chromium } = require("playwright-core");
+
+const TYPES = { ".html": "text/html; charset=utf-8", ".js": "text/javascript", ".wasm": "application/wasm",
+  ".gz": "application/gzip", ".webmanifest": "application/manifest+json", ".svg": "image/svg+xml", ".png": "image/png" };
+
+// serve starts a static server for dir; sent counts body bytes per path.
+function serve(dir) {
+  const stats = { bytes: 0, requests: [] };
+  const server = http.createServer((req, res) => {
+    let p = decodeURIComponent(new URL(req.url, "http://x").pathname);
+    if (p.endsWith("/")) p += "index.html";
+    const file = path.join(dir, path.normalize(p));
+    if (!file.startsWith(path.resolve(dir)) || !fs.existsSync(file) || !fs.statSync(file).isFile()) {
+      res.writeHead(404); res.end("not found"); return;
+    }
+    const body = fs.readFileSync(file);
+    const st = fs.statSync(file);
+    res.writeHead(200, { "Content-Type": TYPES[path.extname(file)] || "application/octet-stream",
+      "Content-Length": body.length, "Last-Modified": st.mtime.toUTCString(), "Cache-Control": "no-cache" });
+    res.end(body);
+    stats.bytes += body.length;
+    stats.requests.push(p);
+  });
+  return new Promise((ok) => server.listen(0, "127.0.0.1", () => ok({ server, stats, url: `http://127.0.0.1:${server.address().port}/` })));
+}
+
+async function launch() {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM || "/usr/bin/chromium",
+    args: ["--no-sandbox", "--disable-quic", "--disable-background-networking", "--disable-component-update",
+      "--disable-sync", "--disable-dev-shm-usage"],
+  });
+}
+
+const phone = { viewport: { width: 412, height: 915 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
+
+// firstFrame waits for the page's "tw-first-frame" mark and returns its
+// time in ms from navigation start.
+async function firstFrame(page) {
+  await page.waitForFunction(() => performance.getEntriesByName("tw-first-frame").length > 0, null, { timeout: 60000 });
+  return page.evaluate(() => performance.getEntriesByName("tw-first-frame")[0].startTime);
+}
+
+function check(ok, what) {
+  if (!ok) throw new Error("FAIL: " + what);
+  console.log("ok: " + what);
+}
+
+async function test(dir) {
+  const { server, stats, url } = await serve(dir);
+  const browser = await launch();
+  let failed = false;
+  try {
+    const ctx = await browser.newContext(phone);
+    const page = await ctx.newPage();
+    const foreign = [];
+    const errors = [];
+    ctx.on("request", (r) => { if (!r.url().startsWith(url) && !r.url().startsWith("data:") && !r.url().startsWith("blob:")) foreign.push(r.url()); });
+    page.on("pageerror", (e) => errors.push(e.message));
+    await page.goto(url);
+    const ms = await firstFrame(page);
+    check(await page.locator("canvas").count() === 1, `the app drew its canvas (first frame at ${ms.toFixed(0)} ms)`);
+    await page.waitForTimeout(1500);
+    const home = await page.screenshot();
+    check(home.length > 20000, `the home screen has content (${home.length} bytes of PNG)`);
+
+    // Tap the first calculator in the list (Working gas), then retype its
+    // first field (Temperature). The places are those of the phone layout
+    // at 412x915; TAP and FIELD ({"x":..,"y":..}) override them.
+    const tap = JSON.parse(process.env.TAP || "null") || { x: 200, y: 100 };
+    await page.touchscreen.tap(tap.x, tap.y);
+    await page.waitForTimeout(1500);
+    const screen = await page.screenshot();
+    check(!screen.equals(home), "tapping a calculator opened it");
+    const field = JSON.parse(process.env.FIELD || "null") || { x: 200, y: 284 };
+    await page.touchscreen.tap(field.x, field.y);
+    await page.waitForTimeout(500);
+    const before = await page.screenshot({ clip: { x: 0, y: field.y + 60, width: 412, height: 915 - field.y - 60 } });
+    await page.keyboard.press("Control+A");
+    await page.keyboard.type("350 K");
+    await page.waitForTimeout(1500);
+    const after = await page.screenshot({ clip: { x: 0, y: field.y + 60, width: 412, height: 915 - field.y - 60 } });
+    if (process.env.SHOTS) { // for people: SHOTS=folder keeps the pictures
+      fs.mkdirSync(process.env.SHOTS, { recursive: true });
+      fs.writeFileSync(path.join(process.env.SHOTS, "web-home.png"), home);
+      fs.writeFileSync(path.join(process.env.SHOTS, "web-screen.png"), screen);
+      await page.screenshot({ path: path.join(process.env.SHOTS, "web-typed.png") });
+    }
+    check(!after.equals(before), "typing into a field changed the result shown below it");
+
+    // Offline: the service worker's set must start the app with no network.
+    await page.waitForFunction(async () => {
+      const r = await navigator.serviceWorker.getRegistration();
+      return !!(r && r.active && navigator.serviceWorker.controller);
+    }, null, { timeout: 60000 });
+    await ctx.setOffline(true);
+    const doc = await page.reload();
+    const ms2 = await firstFrame(page);
+    check(doc && doc.fromServiceWorker(), "offline, the page came from the service worker's set");
+    check(await page.locator("canvas").count() === 1, `offline reload started the app (first frame at ${ms2.toFixed(0)} ms)`);
+    await ctx.setOffline(false);
+    check(foreign.length === 0, "no request left the origin" + (foreign.length ? ": " + foreign.join(", ") : ""));
+    check(errors.length === 0, "no page errors" + (errors.length ? ": " + errors.join("; ") : ""));
+    await ctx.close();
+  } catch (e) {
+    console.error(e.message || e);
+    failed = true;
+  } finally {
+    await browser.close();
+    server.close();
+  }
+  if (failed) process.exit(1);
+  console.log("browser test: passed");
+}
+
+function human(n) { return (n / 1e6).toFixed(2) + " MB"; }
+
+async function size(dir) {
+  const raw = fs.readFileSync(path.join(dir, "tubewright.wasm"));
+  const gz = fs.readFileSync(path.join(dir, "tubewright.wasm.gz"));
+  const br = zlib.brotliCompressSync(raw, { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 11 } });
+  const { server, stats, url } = await serve(dir);
+  const browser = await launch();
+  const cold = [];
+  let coldBytes = 0;
+  try {
+    for (let i = 0; i < 3; i++) {
+      const ctx = await browser.newContext(phone); // a fresh profile: a cold visit
+      const page = await ctx.newPage();
+      stats.bytes = 0;
+      await page.goto(url);
+      cold.push(await firstFrame(page));
+      // The service worker fills its set after the start: count it too.
+      await page.waitForFunction(async () => {
+        const r = await navigator.serviceWorker.getRegistration();
+        return !!(r && r.active);
+      }, null, { timeout: 60000 });
+      coldBytes = stats.bytes;
+      await ctx.close();
+    }
+  } finally {
+    await browser.close();
+    server.close();
+  }
+  cold.sort((a, b) => a - b);
+  const rows = [
+    ["tubewright.wasm (raw)", human(raw.length)],
+    ["tubewright.wasm.gz (served)", human(gz.length)],
+    ["tubewright.wasm, Brotli 11 (for comparison)", human(br.length)],
+    ["cold visit, all bytes sent (page, app, service worker set)", human(coldBytes)],
+    ["first frame, cold, phone size (median of 3)", cold[1].toFixed(0) + " ms"],
+  ];
+  const w = Math.max(...rows.map((r) => r[0].length));
+  for (const [k, v] of rows) console.log(k.padEnd(w + 2) + v);
+}
+
+const [mode, dir] = process.argv.slice(2);
+(mode === "size" ? size : test)(path.resolve(dir || "build/web")).catch((e) => { console.error(e); process.exit(1); });
