@@ -100,8 +100,8 @@ type Result struct {
 	Wavelength float64
 	// Sensitivity tells how onset and frequency move with the build.
 	Sensitivity []Sensitivity
-	// Solves counts onset solves; Iterations the optimiser's major
-	// iterations; Status is the optimiser's stopping reason.
+	// Solves counts the onset solves of the whole design; Iterations the
+	// optimiser's major iterations; Status is its stopping reason.
 	Solves, Iterations int
 	Status             string
 	Rules              []string // every rule and method used, with its source
@@ -120,10 +120,10 @@ type UnreachableError struct {
 func (e *UnreachableError) Error() string { return "design: " + e.Problem }
 
 // errSolve marks an evaluation that did not solve.
-var errSolve = errors.New("design: no onset")
+var errSolve = errors.New("design: no solution")
 
-// Design finds an engine for the target: parallel-wall hot space, heater,
-// stack, cooler and resonator of the target's diameter, closed at the hot
+// Design finds an engine for the target: a hot space, heater, stack,
+// cooler and resonator, all of the target's diameter, closed at the hot
 // end and closed or open at the far end.
 //
 // Method:
@@ -155,6 +155,9 @@ func Design(t Target, s *Settings) (Result, error) {
 	}
 	w, err := newWave(&t, gas)
 	if err != nil {
+		return Result{}, err
+	}
+	if err := w.checkLength(&t); err != nil {
 		return Result{}, err
 	}
 	sv := &solver{t: &t, gas: gas, w: w, set: set}

@@ -252,6 +252,7 @@ func TestDesignBadInput(t *testing.T) {
 		field string
 	}{
 		{"frequency", func(t *Target) { t.Frequency = 0 }, "target frequency"},
+		{"frequency for a tube over 90 m", func(t *Target) { t.Frequency = 3 }, "target frequency"},
 		{"pressure", func(t *Target) { t.MeanPressure = math.NaN() }, "mean pressure"},
 		{"hot below ambient", func(t *Target) { t.HotTemperature = 280 }, "hot temperature"},
 		{"diameter", func(t *Target) { t.Diameter = 5 }, "tube diameter"},

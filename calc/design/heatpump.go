@@ -133,8 +133,8 @@ const heatPumpRhOverDelta = 2.0
 // r_h = 2 δκ, exchangers and the shortest stack from the gas displacement
 // at the driver amplitude (as for Design), the resonator length solved by
 // Brent so that the tube at ambient resonates at the target frequency, and
-// the drive frequency: the resonance once the cold side has cooled,
-// found by alternating linear.HeatPump and linear.Mode.
+// the drive frequency: the resonance once the cold side has cooled, solved
+// with linear.HeatPump and linear.Mode together (see pump).
 //
 // Errors: bad input as *units.RangeError; a span the design cannot reach,
 // or a tube longer than the limit, as *UnreachableError whose Nearest is
@@ -153,6 +153,9 @@ func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 	et := t.engineTarget()
 	w, err := newWave(&et, gas)
 	if err != nil {
+		return HeatPumpResult{}, err
+	}
+	if err := w.checkLength(&et); err != nil {
 		return HeatPumpResult{}, err
 	}
 	hp := &pumpSolver{t: &t, gas: gas, w: w, set: set}

@@ -109,6 +109,20 @@ func (w wave) tubeGuess(t *Target) float64 {
 	return w.lambda / 2
 }
 
+// maxTube is the longest tube a device file may describe, m (calc/linear
+// accepts parts up to 100 m; the design keeps a margin).
+const maxTube = 90.0
+
+// checkLength refuses a target frequency so low that the tube would be
+// longer than maxTube, as a range error on the frequency.
+func (w wave) checkLength(t *Target) error {
+	if l := w.tubeGuess(t); l > maxTube {
+		fmin := t.Frequency * l / maxTube
+		return units.NewRangeError("target frequency", t.Frequency, fmin, 20000, "Hz").Of(units.SubjectFrequency)
+	}
+	return nil
+}
+
 // startGeometry returns the start of the search: the hydraulic radius from
 // the penetration-depth rule of calc/pore (RuleFor(RoleStack): r_h = 1.5
 // δκ), the stack at the position that minimises the short-stack onset
