@@ -52,7 +52,7 @@ type Recording struct {
 	ClippedRuns, ClippedSamples int
 
 	// Notes are things noticed while reading that do not stop the analysis
-	// (a data chunk cut short, extra chunks skipped).
+	// (a data chunk cut short).
 	Notes []string
 }
 

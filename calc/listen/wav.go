@@ -79,7 +79,6 @@ func ReadWAV(r io.Reader) (*Recording, error) {
 		return nil, fmt.Errorf("%w: the file starts with %q, not RIFF…WAVE", ErrNotWAV, printable(head[:]))
 	}
 	var fc *fmtChunk
-	var notes []string
 	for {
 		var ch [8]byte
 		if _, err := io.ReadFull(br, ch[:]); err != nil {
@@ -104,12 +103,11 @@ func ReadWAV(r io.Reader) (*Recording, error) {
 			if fc == nil {
 				return nil, fmt.Errorf("%w: the audio data comes before the fmt chunk that says how it is stored", ErrNotWAV)
 			}
-			return readData(br, fc, size, notes)
+			return readData(br, fc, size)
 		default:
 			if err := skip(br, int64(size)+int64(size&1)); err != nil {
 				return nil, fmt.Errorf("%w: chunk %q runs past the end of the file before any audio", ErrNotWAV, printable(ch[0:4]))
 			}
-			notes = append(notes, fmt.Sprintf("skipped a %q chunk of %d bytes", printable(ch[0:4]), size))
 		}
 	}
 }
@@ -203,7 +201,7 @@ func readFmt(r io.Reader, size uint32) (*fmtChunk, error) {
 }
 
 // readData decodes the data chunk of declared size bytes.
-func readData(r io.Reader, f *fmtChunk, size uint32, notes []string) (*Recording, error) {
+func readData(r io.Reader, f *fmtChunk, size uint32) (*Recording, error) {
 	ba := f.blockAlign
 	streaming := size == 0xFFFFFFFF
 	if !streaming {
@@ -223,7 +221,6 @@ func readData(r io.Reader, f *fmtChunk, size uint32, notes []string) (*Recording
 		SampleRate: f.rate,
 		Channels:   f.channels,
 		Encoding:   Encoding{Float: f.format == formatFloat, Bits: f.bits},
-		Notes:      notes,
 		Samples:    make([]float64, 0, min(want, 1<<16)),
 	}
 	dec := decoder(f)
