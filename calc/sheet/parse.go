@@ -102,9 +102,9 @@ func read(in *Input, v *Value) error {
 		}
 		v.X = x
 	case Switch:
-		b, err := strconv.ParseBool(s)
-		if err != nil {
-			return fmt.Errorf("%s: say true or false", quote(s))
+		b, ok := switchWords[strings.ToLower(s)]
+		if !ok {
+			return fmt.Errorf("%s: say on or off (yes/no, true/false)", quote(s))
 		}
 		v.On = b
 	case Text:
@@ -145,6 +145,12 @@ func rangeSuffix(in *Input) string {
 		return fmt.Sprintf(" (at least %g)", in.Min)
 	}
 	return fmt.Sprintf(" (valid range %g to %g)", in.Min, in.Max)
+}
+
+// switchWords are the words a Switch takes.
+var switchWords = map[string]bool{
+	"on": true, "yes": true, "true": true, "1": true, "t": true,
+	"off": false, "no": false, "false": false, "0": false, "f": false,
 }
 
 // readSpan parses FROM:TO or FROM:TO:N (11 points by default).
