@@ -1,7 +1,6 @@
 package ui
 
 import (
-	"fmt"
 	"image"
 	"os"
 	"strings"
@@ -20,10 +19,10 @@ func TestScreenshotResonanceTall(t *testing.T) {
 	if os.Getenv("SHOT_DIR") == "" {
 		t.Skip("set SHOT_DIR to look at the full pages")
 	}
-	for _, id := range []string{"resonance", "diagnose"} {
+	for _, id := range []sheet.ID{sheet.IDResonance, sheet.IDDiagnose} {
 		a := NewApp(nil)
-		a.Open(sheet.ID(id))
-		shootApp(t, id+"-tallphone", image.Pt(412, 2900), a)
+		a.Open(id)
+		shootApp(t, string(id)+"-tallphone", image.Pt(412, 2900), a)
 	}
 }
 
@@ -84,7 +83,7 @@ func TestResonanceScreenTyping(t *testing.T) {
 	if _, ok := h.shown("Resonance frequency"); ok {
 		t.Fatal("a zero length still shows a frequency")
 	}
-	if e := s.(*resonanceScreen).tube.length.ErrorText(); !strings.Contains(e, "length") {
+	if e := s.(*resonanceScreen).form.Field("length").ErrorText(); !strings.Contains(e, "length") {
 		t.Fatalf("error under the length field %q does not name the length", e)
 	}
 	if _, ok := h.byDesc("No result"); !ok {
@@ -99,14 +98,43 @@ func TestResonanceScreenTyping(t *testing.T) {
 	}
 }
 
+// TestResonanceScreenRealGas: the real-gas switch, once only in the
+// terminal, is on the screen and changes the frequency of helium at 30 bar
+// to what the calculator gives with the second-virial correction.
+func TestResonanceScreenRealGas(t *testing.T) {
+	env := NewEnv(nil)
+	s := newResonanceScreen(env).(*resonanceScreen)
+	h := newHarness(t, image.Pt(412, 3600), s.Layout)
+	s.form.Gas("gas").SetText("helium")
+	s.form.Invalidate()
+	h.retype("Mean pressure", "1 atm", "30 bar")
+	he, _ := gasprops.ParseMixture("helium")
+	setup := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: 0.5, Radius: 0.012},
+		Gas: he, Temperature: 293.15, Pressure: 30e5}
+	ideal, _ := setup.SolveFrequency()
+	setup.GasOptions = &gasprops.Options{NonIdeal: true}
+	real, _ := setup.SolveFrequency()
+	if got, _ := h.shown("Resonance frequency"); got != units.Format(ideal.Frequency, units.DimFrequency) {
+		t.Fatalf("ideal helium at 30 bar: shown %q, want %q", got, units.Format(ideal.Frequency, units.DimFrequency))
+	}
+	h.tap(s.form.Sheet.Input("non-ideal").Label)
+	h.frames(2)
+	if got, _ := h.shown("Resonance frequency"); got != units.Format(real.Frequency, units.DimFrequency) || real.Frequency == ideal.Frequency {
+		t.Fatalf("with the real-gas correction: shown %q, want %q (ideal %q)", got,
+			units.Format(real.Frequency, units.DimFrequency), units.Format(ideal.Frequency, units.DimFrequency))
+	}
+}
+
 // TestResonanceScreenZonesAndHelmholtz: the zoned tube shows the
-// calculator's modes for the starting zones, and the Helmholtz resonator
-// its frequency; a neck shorter than its radius is refused under the
-// field.
+// calculator's modes for the starting zones; the zone fields and the
+// one-line zones input stay in step; up to five zones and the number of
+// modes chosen; a zone the gas model refuses is marked on its own field;
+// the Helmholtz resonator shows its frequency and a neck shorter than its
+// radius is refused under the field.
 func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 	env := NewEnv(nil)
-	s := newResonanceScreen(env)
-	h := newHarness(t, image.Pt(412, 4000), s.Layout)
+	s := newResonanceScreen(env).(*resonanceScreen)
+	h := newHarness(t, image.Pt(412, 5000), s.Layout)
 	h.tap("Hot and cold zones")
 	air, _ := gasprops.ParseMixture("air")
 	zt := resonator.ZonedTube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Gas: air, Pressure: units.StandardAtmosphere,
@@ -115,17 +143,45 @@ func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
+	if got, _ := h.shown("Lowest mode"); got != units.Format(want.Modes[0].Frequency, units.DimFrequency) {
+		t.Errorf("lowest mode shown %q, want %q", got, units.Format(want.Modes[0].Frequency, units.DimFrequency))
+	}
+	list, _ := h.shown("First 3 modes")
 	for _, m := range want.Modes {
-		got, _ := h.shown(fmt.Sprintf("Mode %d", m.Number))
-		if w := units.Format(m.Frequency, units.DimFrequency); got != w {
-			t.Errorf("mode %d shown %q, want %q", m.Number, got, w)
+		if w := units.Format(m.Frequency, units.DimFrequency); !strings.Contains(list, w) {
+			t.Errorf("modes %q do not list mode %d at %q", list, m.Number, w)
 		}
 	}
 	h.retype("Zone 1 temperature", "600 K", "700 K")
 	zt.Zones[0].Temperature = 700
 	want, _ = zt.Modes(3)
-	if got, _ := h.shown("Mode 1"); got != units.Format(want.Modes[0].Frequency, units.DimFrequency) {
-		t.Errorf("after 700 K: mode 1 shown %q, want %q", got, units.Format(want.Modes[0].Frequency, units.DimFrequency))
+	if got, _ := h.shown("Lowest mode"); got != units.Format(want.Modes[0].Frequency, units.DimFrequency) {
+		t.Errorf("after 700 K: lowest mode shown %q, want %q", got, units.Format(want.Modes[0].Frequency, units.DimFrequency))
+	}
+	if line := s.form.Text("zones"); !strings.Contains(line, "700 K") {
+		t.Errorf("the zones line %q did not take the zone field", line)
+	}
+
+	// five zones and ten modes, as in the terminal
+	h.tap("5 zones")
+	h.retype("Modes to list", "3", "10")
+	if zs := strings.Count(s.form.Text("zones"), ";") + 1; zs != 5 {
+		t.Errorf("%d zones in %q, want 5", zs, s.form.Text("zones"))
+	}
+	if _, ok := h.shown("First 10 modes"); !ok {
+		t.Errorf("no list of 10 modes; failure %q", s.form.Results.Failure())
+	}
+	// the one-line input fills the fields
+	h.retype("Zones from the first end", s.form.Text("zones"), "0.2 m, 10 mm, 500 K; 0.3 m, 10 mm, 300 K")
+	if got := s.zones.zones[1].length.Text(); got != "0.3 m" || s.zones.n() != 2 {
+		t.Errorf("after typing the line: %d zones, zone 2 length %q", s.zones.n(), got)
+	}
+	h.retype("Zone 2 temperature", "300 K", "5 K")
+	if e := s.zones.zones[1].temp.ErrorText(); !strings.Contains(e, "zone 2") {
+		t.Errorf("zone 2 temperature of 5 K: field error %q", e)
+	}
+	if e := s.zones.zones[0].temp.ErrorText(); e != "" {
+		t.Errorf("zone 1 marked too: %q", e)
 	}
 
 	h.tap("Helmholtz resonator")
@@ -135,7 +191,7 @@ func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 		t.Errorf("Helmholtz shown %q, want %q", got, units.Format(hr.Frequency, units.DimFrequency))
 	}
 	h.retype("Neck length", "50 mm", "5 mm")
-	if e := s.(*resonanceScreen).helm.neckRadius.ErrorText(); !strings.Contains(e, "neck radius") {
+	if e := s.form.Field("neck-radius").ErrorText(); !strings.Contains(e, "neck radius") {
 		t.Errorf("error under the neck radius %q", e)
 	}
 }
@@ -147,8 +203,7 @@ func TestScreenshotResonanceKinds(t *testing.T) {
 	for _, kind := range []string{"zones", "helmholtz"} {
 		env := NewEnv(nil)
 		s := newResonanceScreen(env).(*resonanceScreen)
-		s.kind.Select(kind)
-		s.dirty = true
+		s.form.SetText("resonator", kind)
 		shoot(t, "resonance-"+kind, env, s)
 	}
 }

@@ -3,33 +3,60 @@ package ui
 import (
 	"errors"
 	"fmt"
+	"strconv"
 
 	"gioui.org/layout"
 
 	"tubewright/calc/resonator"
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
-// zoneInputs describe a tube of two or three zones, each with its own
-// length, radius and gas temperature, for the Tube resonance screen.
-type zoneInputs struct {
+// zoneEditor edits the "zones" input of the resonance form one field per
+// value: how many zones, then the length, radius and gas temperature of
+// each. The form's one-line zones field stays below it (it takes a list
+// pasted from twcalc); the two are kept in step, and an error about one
+// zone marks that zone's field.
+type zoneEditor struct {
+	form  *Form
 	count *Choice
-	zones [3]zoneFields
+	zones [resonator.MaxZones]zoneFields
+	// line is the form's zones text the fields last agreed with.
+	line string
 }
 
+// zoneFields are the fields of one zone.
 type zoneFields struct {
 	length, radius, temp *Field
 }
 
-func newZoneInputs(env *Env) *zoneInputs {
-	z := &zoneInputs{count: NewChoice(env, "Number of zones", []string{"2", "3"}, []string{"Two zones", "Three zones"})}
-	start := [3][3]string{{"100 mm", "12 mm", "600 K"}, {"400 mm", "12 mm", "20 degC"}, {"200 mm", "12 mm", "20 degC"}}
+// field returns the field of part p (nil for the zone as a whole).
+func (f *zoneFields) field(p sheet.ZonePart) *Field {
+	switch p {
+	case sheet.ZoneLength:
+		return f.length
+	case sheet.ZoneRadius:
+		return f.radius
+	case sheet.ZoneTemperature:
+		return f.temp
+	}
+	return nil
+}
+
+func newZoneEditor(env *Env, form *Form) *zoneEditor {
+	keys, words := make([]string, resonator.MaxZones), make([]string, resonator.MaxZones)
+	for i := range keys {
+		keys[i] = strconv.Itoa(i + 1)
+		words[i] = fmt.Sprintf("%d zones", i+1)
+	}
+	words[0] = "1 zone"
+	z := &zoneEditor{form: form, count: NewChoice(env, "Number of zones", keys, words), line: "\x00"}
 	for i := range z.zones {
 		n := fmt.Sprintf("Zone %d ", i+1)
 		z.zones[i] = zoneFields{
-			length: NewField(env, n+"length", units.DimLength, start[i][0]),
-			radius: NewField(env, n+"radius", units.DimLength, start[i][1]),
-			temp:   NewField(env, n+"temperature", units.DimTemperature, start[i][2]),
+			length: NewField(env, n+"length", units.DimLength, "200 mm"),
+			radius: NewField(env, n+"radius", units.DimLength, "12 mm"),
+			temp:   NewField(env, n+"temperature", units.DimTemperature, "20 degC"),
 		}
 		z.zones[i].temp.Options.DefaultUnit = "K"
 		z.zones[i].length.Hint = "e.g. 100 mm, 0.4 m, 4 in"
@@ -38,19 +65,19 @@ func newZoneInputs(env *Env) *zoneInputs {
 	}
 	z.zones[0].length.Hint = "zone 1 starts at the first end named above (the closed end of a closed – open tube)"
 	z.zones[0].temp.Hint = "mean gas temperature in this zone, e.g. 600 K for a hot end"
-	z.zones[1].temp.Hint = "mean gas temperature in this zone, e.g. 20 degC for an ambient section"
+	z.sync()
 	return z
 }
 
 // n returns the number of zones in use.
-func (z *zoneInputs) n() int {
-	if z.count.Selected() == "3" {
-		return 3
-	}
-	return 2
+func (z *zoneEditor) n() int {
+	n, _ := strconv.Atoi(z.count.Selected())
+	return n
 }
 
-func (z *zoneInputs) update(gtx layout.Context) bool {
+// update handles the zone fields' events; a change by the user writes the
+// zones into the form's input.
+func (z *zoneEditor) update(gtx layout.Context) {
 	ch := z.count.Update(gtx)
 	for i := range z.zones {
 		f := &z.zones[i]
@@ -58,169 +85,54 @@ func (z *zoneInputs) update(gtx layout.Context) bool {
 		ch = f.radius.Update(gtx) || ch
 		ch = f.temp.Update(gtx) || ch
 	}
-	return ch
+	if !ch {
+		return
+	}
+	texts := make([][3]string, z.n())
+	for i := range texts {
+		f := &z.zones[i]
+		texts[i] = [3]string{f.length.Text(), f.radius.Text(), f.temp.Text()}
+	}
+	z.line = sheet.JoinZones(texts)
+	z.form.SetText("zones", z.line)
 }
 
-// widgets lists the controls in layout order.
-func (z *zoneInputs) widgets() []layout.Widget {
+// sync takes the form's zones text into the fields when it was changed
+// there (typed into the one-line field), and marks the field of the zone
+// an error is about.
+func (z *zoneEditor) sync() {
+	if t := z.form.Text("zones"); t != z.line {
+		z.line = t
+		if zs, err := sheet.SplitZones(t); err == nil && len(zs) > 0 {
+			z.count.Select(strconv.Itoa(len(zs)))
+			for i, texts := range zs {
+				for j, fd := range []*Field{z.zones[i].length, z.zones[i].radius, z.zones[i].temp} {
+					if fd.Text() != texts[j] {
+						fd.SetText(texts[j])
+					}
+				}
+			}
+		}
+	}
+	for i := range z.zones {
+		for _, fd := range []*Field{z.zones[i].length, z.zones[i].radius, z.zones[i].temp} {
+			fd.SetError(nil)
+		}
+	}
+	var ze *sheet.ZoneError
+	if errors.As(z.form.Err(), &ze) && ze.Zone >= 0 && ze.Zone < len(z.zones) {
+		if fd := z.zones[ze.Zone].field(ze.Part); fd != nil {
+			fd.SetError(ze)
+		}
+	}
+}
+
+// widgets lists the count and the fields of the zones in use.
+func (z *zoneEditor) widgets() []layout.Widget {
 	ws := []layout.Widget{z.count.Layout}
 	for i := 0; i < z.n(); i++ {
 		f := &z.zones[i]
 		ws = append(ws, f.length.Layout, f.radius.Layout, f.temp.Layout)
 	}
 	return ws
-}
-
-// read returns the zones; parse errors are shown under their fields.
-func (z *zoneInputs) read() ([]resonator.Zone, error) {
-	var errs []error
-	zs := make([]resonator.Zone, z.n())
-	for i := range zs {
-		f := &z.zones[i]
-		for _, fl := range []*Field{f.length, f.radius, f.temp} {
-			fl.SetError(nil)
-		}
-		l, e1 := f.length.Value()
-		r, e2 := f.radius.Value()
-		t, e3 := f.temp.Value()
-		if !e1 || !e2 || !e3 {
-			errs = append(errs, errors.New("bad zone"))
-		}
-		zs[i] = resonator.Zone{Length: l, Radius: r, Temperature: t}
-	}
-	if len(errs) > 0 {
-		return nil, errors.New("check the fields marked in red")
-	}
-	return zs, nil
-}
-
-// computeZones solves the zoned tube for its first modes.
-func (s *resonanceScreen) computeZones() {
-	r := s.results
-	zs, err := s.zones.read()
-	if err != nil {
-		r.Fail(err)
-		return
-	}
-	mix, err := s.picker.Mixture()
-	if err != nil {
-		r.Fail(err)
-		return
-	}
-	pq, err := s.press.Quantity()
-	if err != nil {
-		r.Fail(errors.New("check the fields marked in red"))
-		return
-	}
-	ends, _ := resonator.ParseEnds(s.tube.ends.Selected())
-	corr, _ := resonator.ParseEndCorrection(s.tube.corr.Selected())
-	zt := resonator.ZonedTube{Ends: ends, Correction: corr, Zones: zs, Gas: mix, Pressure: pq.Value}
-	res, err := zt.Modes(3)
-	if err != nil {
-		fields := map[string]*Field{"pressure": s.press}
-		for i := range zs {
-			f := &s.zones.zones[i]
-			n := fmt.Sprintf("zone %d ", i+1)
-			fields[n+"length"], fields[n+"radius"], fields[n+"temperature"] = f.length, f.radius, f.temp
-		}
-		blameField(err, fields)
-		r.Fail(err)
-		return
-	}
-	s.env.Bench.SetGas(s.picker.Text())
-	s.env.Bench.SetPressure(pq.Value)
-	for _, m := range res.Modes {
-		r.Add(fmt.Sprintf("Mode %d", m.Number), m.Frequency, units.DimFrequency)
-		r.AddNote(fmt.Sprintf("travel-time estimate %s, %s", units.Format(m.TravelTime, units.DimFrequency), differenceText(m)))
-	}
-	s.head, _ = r.Value("Mode 1")
-	s.last = res.Modes[0].Frequency
-	r.Warn(res.Warnings...)
-}
-
-// differenceText says how far the travel-time estimate is off, in Hz and %.
-func differenceText(m resonator.ZoneMode) string {
-	pct := 100 * m.Difference / m.Frequency
-	word := "higher"
-	if m.Difference < 0 {
-		word = "lower"
-	}
-	return fmt.Sprintf("%s %s (%.2g %%)", units.Format(abs(m.Difference), units.DimFrequency), word, abs(pct))
-}
-
-// helmholtzInputs describe a Helmholtz resonator.
-type helmholtzInputs struct {
-	volume, neckLength, neckRadius *Field
-	outer                          *Choice
-}
-
-func newHelmholtzInputs(env *Env) *helmholtzInputs {
-	h := &helmholtzInputs{
-		volume:     NewField(env, "Cavity volume", units.DimVolume, "1 L"),
-		neckLength: NewField(env, "Neck length", units.DimLength, "50 mm"),
-		neckRadius: NewField(env, "Neck inner radius", units.DimLength, "10 mm"),
-		outer: NewChoice(env, "Outer end of the neck", []string{"none", "unflanged", "flanged"},
-			[]string{"No correction", "Unflanged (bare tube end)", "Flanged (end in a wall)"}),
-	}
-	h.outer.Select("unflanged")
-	h.volume.Hint = "e.g. 1 L, 500 mL, 0.002 m3"
-	h.neckLength.Hint = "e.g. 50 mm, 2 in; at least the neck radius"
-	h.neckRadius.Hint = "half the neck's inner diameter: 10 mm"
-	return h
-}
-
-func (h *helmholtzInputs) update(gtx layout.Context) bool {
-	ch := h.volume.Update(gtx)
-	ch = h.neckLength.Update(gtx) || ch
-	ch = h.neckRadius.Update(gtx) || ch
-	return h.outer.Update(gtx) || ch
-}
-
-// computeHelmholtz solves the Helmholtz resonator.
-func (s *resonanceScreen) computeHelmholtz() {
-	r := s.results
-	h := s.helm
-	for _, f := range []*Field{h.volume, h.neckLength, h.neckRadius} {
-		f.SetError(nil)
-	}
-	v, ok1 := h.volume.Value()
-	l, ok2 := h.neckLength.Value()
-	a, ok3 := h.neckRadius.Value()
-	mix, gerr := s.picker.Mixture()
-	tq, terr := s.temp.Quantity()
-	pq, perr := s.press.Quantity()
-	if gerr != nil {
-		r.Fail(gerr)
-		return
-	}
-	if !ok1 || !ok2 || !ok3 || terr != nil || perr != nil {
-		r.Fail(errors.New("check the fields marked in red"))
-		return
-	}
-	g, err := mix.Properties(units.Temperature(tq.Value), units.Pressure(pq.Value), nil)
-	if err != nil {
-		blameField(err, map[string]*Field{"temperature": s.temp, "pressure": s.press})
-		r.Fail(err)
-		return
-	}
-	outer, _ := resonator.ParseEndCorrection(h.outer.Selected())
-	res, err := resonator.HelmholtzFrequency(resonator.Helmholtz{Volume: v, NeckLength: l, NeckRadius: a, Outer: outer}, g)
-	if err != nil {
-		blameField(err, map[string]*Field{"cavity volume": h.volume, "neck length": h.neckLength, "neck radius": h.neckRadius})
-		r.Fail(err)
-		return
-	}
-	s.env.Bench.SetGas(s.picker.Text())
-	s.env.Bench.SetTemperature(tq.Value)
-	s.env.Bench.SetPressure(pq.Value)
-	r.Add("Resonance frequency", res.Frequency, units.DimFrequency)
-	s.head, _ = r.Value("Resonance frequency")
-	s.last = res.Frequency
-	r.AddIn("Inner end correction", res.InnerCorrection, "mm")
-	r.AddNote("where the neck opens into the cavity (flanged)")
-	r.AddIn("Outer end correction", res.OuterCorrection, "mm")
-	r.Add("Effective neck length", res.EffectiveLength, units.DimLength)
-	r.Add("Sound speed", res.SoundSpeed, units.DimSpeed)
-	r.Add("Wavelength", res.Wavelength, units.DimLength)
-	r.Warn(res.Warnings...)
 }

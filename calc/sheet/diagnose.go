@@ -37,7 +37,7 @@ var diagnoseSheet = &Sheet{
 		tubeRadiusInput(false),
 		endCorrectionInput(),
 		modeInput(),
-		GasInput("gas", ""),
+		diagnoseGasInput(),
 		secondGasInput("Second gas (contaminant or admixture)", "the noble gas mixed into the working gas (a pure noble gas) when finding a fraction: argon"),
 		knownTemperatureInput(),
 		MeanPressureInput("pressure", "Mean pressure", "1 atm"),
@@ -53,6 +53,14 @@ var diagnoseSheet = &Sheet{
 		"twcalc diagnose --gas helium --second-gas argon --find fraction --temperature 300K --ends closed-open --length 0.5m --radius 10mm --measured-frequency 480Hz+-2Hz --json",
 	},
 	Run: runDiagnose,
+}
+
+// diagnoseGasInput is the working gas, required; a screen starts with
+// air, the gas of most tubes on the bench.
+func diagnoseGasInput() Input {
+	in := GasInput("gas", "")
+	in.Example = "air"
+	return in
 }
 
 // knownTemperatureInput is the gas temperature of a fraction diagnosis.
@@ -120,4 +128,3 @@ func diagnoseBlame(v *Values, err error, bySubject map[units.Subject]string) err
 	}
 	return v.BlameSubject(err, bySubject)
 }
-

@@ -90,7 +90,7 @@ func secondGasInput(label, hint string) Input {
 		if err != nil || !sp.Noble() {
 			continue
 		}
-		in.Choices = append(in.Choices, Choice{Key: sp.Name, Words: strings.ToUpper(sp.Name[:1]) + sp.Name[1:], Value: sp})
+		in.Choices = append(in.Choices, Choice{Key: sp.Name, Words: strings.ToUpper(sp.Name[:1]) + sp.Name[1:] + " (" + sp.Symbol + ")", Value: sp})
 	}
 	return in
 }

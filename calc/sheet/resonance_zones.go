@@ -144,7 +144,7 @@ func zonesInputs() []Input {
 	return []Input{
 		{Key: "zones", Label: "Zones from the first end", Kind: Text, Optional: true,
 			Example: "100 mm, 12 mm, 600 K; 400 mm, 12 mm, 20 degC",
-			Hint: fmt.Sprintf("LENGTH, RADIUS, TEMPERATURE of each zone from the first end (the closed end of a closed – open tube), zones apart by ;  e.g. 0.1 m, 10 mm, 700 K; 0.4 m, 10 mm, 295 K (up to %d zones)", resonator.MaxZones)},
+			Hint:    fmt.Sprintf("LENGTH, RADIUS, TEMPERATURE of each zone from the first end (the closed end of a closed – open tube), zones apart by ;  e.g. 0.1 m, 10 mm, 700 K; 0.4 m, 10 mm, 295 K (up to %d zones)", resonator.MaxZones)},
 		{Key: "modes", Label: "Modes to list", Kind: Count, Default: "3", Min: 1, Max: MaxZoneModes,
 			Hint: fmt.Sprintf("how many modes of the zoned tube to list, 1 to %d", MaxZoneModes)},
 	}

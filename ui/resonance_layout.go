@@ -1,0 +1,91 @@
+package ui
+
+import (
+	"gioui.org/layout"
+	"gioui.org/unit"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/sheet"
+)
+
+// wideMin is the width from which calculator screens put inputs and
+// results side by side (the app gives a screen at most 760 dp, and about
+// 700 dp on a tablet beside the catalog).
+const wideMin = 680
+
+// splitLayout lays a calculator screen out: on a narrow window one
+// scrolling column with the headline answer on top, then the inputs, then
+// the outputs; from wideMin dp on, inputs on the left and the headline and
+// outputs on the right, each column scrolling on its own.
+func splitLayout(gtx layout.Context, env *Env, left, right *Page, head layout.Widget, inputs, outputs []layout.Widget) layout.Dimensions {
+	if gtx.Constraints.Max.X < gtx.Dp(wideMin) {
+		all := append(append([]layout.Widget{head}, inputs...), outputs...)
+		return left.Layout(gtx, all...)
+	}
+	return layout.Flex{}.Layout(gtx,
+		layout.Flexed(0.45, func(gtx layout.Context) layout.Dimensions {
+			return left.Layout(gtx, inputs...)
+		}),
+		layout.Flexed(0.55, func(gtx layout.Context) layout.Dimensions {
+			return right.Layout(gtx, append([]layout.Widget{head}, outputs...)...)
+		}),
+	)
+}
+
+// headline shows the main answer large, or nothing when there is none.
+func headline(env *Env, label, value string) layout.Widget {
+	return func(gtx layout.Context) layout.Dimensions {
+		if value == "" {
+			return layout.Dimensions{}
+		}
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+				l := material.Body2(env.Theme, label)
+				l.Color = env.Colors.Muted
+				return l.Layout(gtx)
+			}),
+			layout.Rigid(Described("Answer", func(gtx layout.Context) layout.Dimensions {
+				l := material.Label(env.Theme, unit.Sp(30), value)
+				l.Color = env.Colors.Accent
+				l.Font.Weight = 700
+				return l.Layout(gtx)
+			})),
+		)
+	}
+}
+
+// formHeadline is the headline of a form's first result row: its label
+// and its value as the results card shows it.
+func formHeadline(env *Env, f *Form) layout.Widget {
+	res := f.Result()
+	if res == nil || len(res.Rows) == 0 {
+		return headline(env, "", "")
+	}
+	row := res.Rows[0]
+	value, _ := f.Results.Value(row.Label)
+	return headline(env, row.Label, value)
+}
+
+// curveChart draws a calculator's curve with its result marked; nil when
+// there is no curve.
+func curveChart(c sheet.Curve, ok bool) *Chart {
+	if !ok {
+		return nil
+	}
+	xy := make(XYs, len(c.X))
+	for i := range c.X {
+		xy[i].X, xy[i].Y = c.X[i], c.Y[i]
+	}
+	return linePlot(xy, c.MarkX, c.MarkY, c.XLabel, c.XUnit, c.Title).WithError(c.MarkDX, c.MarkDY)
+}
+
+// linePlot draws xy as a line and marks (x0, y0) when finite.
+func linePlot(xy XYs, x0, y0 float64, xLabel, xUnit, title string) *Chart {
+	p := NewXYPlot(xLabel, xUnit, "Resonance frequency", "Hz")
+	p.Title = title
+	p.AddLine(xy)
+	if finite(x0) && finite(y0) {
+		p.AddMark(x0, y0, 0, 0)
+	}
+	return p
+}
