@@ -3,6 +3,7 @@ package ui
 import (
 	"fmt"
 	"image"
+	"slices"
 	"strings"
 	"time"
 
@@ -38,11 +39,7 @@ type safetyScreen struct {
 	openLog, restart   widget.Clickable
 	rig                widget.Editor
 
-	wall     *wallCalc
-	relief   *reliefCalc
-	test     *testCalc
-	cylinder *cylinderCalc
-	oxygen   *oxygenCalc
+	forms *safetyForms
 
 	status    string // after a save attempt
 	statusBad bool
@@ -70,25 +67,21 @@ func newSafetyScreen(env *Env) Screen {
 		now:     time.Now,
 	}
 	s.rig.SingleLine = true
+	s.forms = newSafetyForms(env)
 	for i, it := range p.Items {
 		switch it.Calc {
 		case safety.CalcWallStress:
-			s.wall = newWallCalc(env)
-			s.calcs[i] = s.wall
+			s.calcs[i] = newWallStep(env, s.forms, it)
 		case safety.CalcRelief:
-			s.relief = newReliefCalc(env)
-			s.calcs[i] = s.relief
+			s.calcs[i] = newReliefStep(env, s.forms, it)
 		case safety.CalcTestEnergy:
-			s.test = newTestCalc(env)
-			s.calcs[i] = s.test
+			s.calcs[i] = newTestStep(env, s.forms, it)
 		case safety.CalcCylinder:
-			s.cylinder = newCylinderCalc(env)
-			s.calcs[i] = s.cylinder
+			s.calcs[i] = newCylinderStep(env, s.forms, it)
 		case safety.CalcOxygen:
-			s.oxygen = newOxygenCalc(env)
-			s.calcs[i] = s.oxygen
+			s.calcs[i] = newOxygenStep(env, s.forms, it)
 		case safety.CalcSound:
-			s.calcs[i] = newSoundCalc(env)
+			s.calcs[i] = newHearingStep(env, s.forms, it)
 		}
 	}
 	return s
@@ -100,51 +93,29 @@ func (s *safetyScreen) Title() string { return safetyTitle }
 // items returns the number of checklist items.
 func (s *safetyScreen) items() int { return len(s.pass.Items) }
 
-// goTo shows step i, carrying numbers from earlier items into fields the
-// user has not typed in: the MAWP of the wall item into the relief and
-// test items, the cylinder's release into the oxygen item.
+// goTo shows step i. The steps that share a calculator share its inputs
+// (the vessel's MAWP typed on the relief step is the test step's), and the
+// test step's charge pressure follows the vessel's MAWP until typed.
 func (s *safetyScreen) goTo(i int) {
 	s.step = max(0, min(i, s.items()))
-	if s.wall != nil && s.wall.mawpOK {
-		// The vessel's MAWP is its nameplate rating, which the user types;
-		// until then the lower of the design pressure and the shell's code
-		// MAWP stands in, the safe side for the relief check.
-		carry := min(s.wall.mawp, s.wall.design)
-		for _, f := range []*Field{fieldOf(s.relief, "mawp"), fieldOf(s.test, "mawp")} {
-			if f != nil && strings.TrimSpace(f.Text()) == "" {
-				f.SetText(gaugeText(carry))
-			}
-		}
-		if s.relief != nil {
-			s.relief.dirty = true
-		}
-		if s.test != nil {
-			s.test.dirty = true
-		}
-	}
-	if s.cylinder != nil && s.oxygen != nil && s.cylinder.ok && !s.oxygen.releaseTyped {
-		s.oxygen.setRelease(s.cylinder.release)
-	}
-	if s.cylinder != nil && s.oxygen != nil {
-		// The gas the cylinder holds is the gas released into the room.
-		s.oxygen.setGas(s.cylinder.gas.Text())
-	}
 	s.env.Invalidate()
 }
 
-// fieldOf returns the MAWP field of the relief or test calculator.
-func fieldOf(c inlineCalc, which string) *Field {
-	switch c := c.(type) {
-	case *reliefCalc:
-		if c != nil && which == "mawp" {
-			return c.mawp
+// stepShowing returns the first step that shows input key of form f, or
+// -1.
+func (s *safetyScreen) stepShowing(f *Form, key string) int {
+	for i, c := range s.calcs {
+		st, ok := c.(*sheetStep)
+		if !ok {
+			continue
 		}
-	case *testCalc:
-		if c != nil && which == "mawp" {
-			return c.mawp
+		for _, p := range st.parts {
+			if p.form == f && slices.Contains(p.keys, key) {
+				return i
+			}
 		}
 	}
-	return nil
+	return -1
 }
 
 // update handles the controls of the step on show.
@@ -229,6 +200,8 @@ func (s *safetyScreen) buildPass() store.Pass {
 	for i, it := range s.pass.Items {
 		item := store.Item{ID: it.ID, Title: it.Title, Done: s.pass.Done[i], Note: strings.TrimSpace(s.pass.Notes[i])}
 		if c := s.calcs[i]; c != nil {
+			item.Inputs = c.Typed()
+			item.Verdicts = c.Checks()
 			if nums := c.Numbers(); len(nums) > 0 {
 				item.Numbers = nums
 				item.Cautions = c.Cautions()
@@ -298,8 +271,14 @@ func (s *safetyScreen) progress(gtx layout.Context) layout.Dimensions {
 // itemWidgets draws checklist item i.
 func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
 	it := s.pass.Items[i]
-	ws := []layout.Widget{Heading(s.env, it.Title), Para(s.env, it.Why)}
-	if c := s.calcs[i]; c != nil {
+	ws := []layout.Widget{Heading(s.env, it.Title)}
+	c := s.calcs[i]
+	if c != nil {
+		// The step's worst outcome first, where it cannot be missed.
+		ws = append(ws, c.Verdict())
+	}
+	ws = append(ws, Para(s.env, it.Why))
+	if c != nil {
 		in := c.Inputs()
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, in) })
 		// The numbers and their caution box side by side where the width

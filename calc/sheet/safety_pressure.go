@@ -30,9 +30,12 @@ func SafetyPressureInput(key, label, def, example, hint string) Input {
 
 // ReadingOf says how the pressure input key was read ("30 bar read as
 // 30 barg = 31.01 bar absolute"), or "" when it holds no value.
-func ReadingOf(v *Values, key string) string {
-	val := v.Get(key)
-	if !val.Set || val.In.Kind != Quantity || val.In.Dim != units.DimPressure {
+func ReadingOf(v *Values, key string) string { return ReadingOfValue(*v.Get(key)) }
+
+// ReadingOfValue says how a parsed pressure value was read, or "" when it
+// is not a pressure or holds no value. A screen shows it under the field.
+func ReadingOfValue(val Value) string {
+	if !val.Set || val.In == nil || val.In.Kind != Quantity || val.In.Dim != units.DimPressure {
 		return ""
 	}
 	return units.DescribePressure(val.Text, val.Q, val.In.Units.Atmosphere)
