@@ -28,7 +28,8 @@ func newOnsetScreen(env *Env) Screen {
 func (s *onsetScreen) Title() string { return s.form.Sheet.Title }
 
 // onsetTables is the plots' run: the profile of the result shown, then the
-// onset at mean pressures from an eighth to four times the device's.
+// onset at mean pressures from an eighth to four times the device's, 16
+// points spaced nearly geometrically.
 func onsetTables(ctx context.Context, s *sheet.Sheet, texts map[string]string) (*deviceTables, error) {
 	prof, err := evaluateWith(ctx, s, texts, "profile", "true")
 	if err != nil {
@@ -44,10 +45,25 @@ func onsetTables(ctx context.Context, s *sheet.Sheet, texts map[string]string) (
 	if pm <= 0 {
 		return out, nil
 	}
-	span := strconv.FormatFloat(pm/8, 'g', -1, 64) + " Pa:" + strconv.FormatFloat(4*pm, 'g', -1, 64) + " Pa:15"
-	sw, err := evaluateWith(ctx, s, texts, "hot", "", "frequency-guess", "", "sweep-pressure", span)
-	if err == nil {
-		out.sweep = sw.Table
+	// One octave at a time, so that the points are spaced nearly
+	// geometrically (the log axis shows the U at low pressure).
+	for lo := pm / 8; lo < 4*pm*0.99; lo *= 2 {
+		span := strconv.FormatFloat(lo, 'g', -1, 64) + " Pa:" + strconv.FormatFloat(2*lo, 'g', -1, 64) + " Pa:4"
+		sw, err := evaluateWith(ctx, s, texts, "hot", "", "frequency-guess", "", "sweep-pressure", span)
+		if err != nil {
+			if ctx.Err() != nil {
+				return nil, ctx.Err()
+			}
+			continue
+		}
+		if out.sweep == nil {
+			out.sweep = &sheet.Table{Header: sw.Table.Header}
+		}
+		for _, r := range sw.Table.Rows {
+			if n := len(out.sweep.Rows); n == 0 || out.sweep.Rows[n-1][0] < r[0] {
+				out.sweep.Rows = append(out.sweep.Rows, r)
+			}
+		}
 	}
 	return out, ctx.Err()
 }
