@@ -119,6 +119,10 @@ type UnreachableError struct {
 // Error names the problem and the nearest design.
 func (e *UnreachableError) Error() string { return "design: " + e.Problem }
 
+// searchTol is the relative tolerance of the search's solves; they use
+// the tabulated gas (tableGas). Final solves use 1e-9 and the gas itself.
+const searchTol = 1e-5
+
 // errSolve marks an evaluation that did not solve.
 var errSolve = errors.New("design: no solution")
 
@@ -161,6 +165,7 @@ func Design(t Target, s *Settings) (Result, error) {
 		return Result{}, err
 	}
 	sv := &solver{t: &t, gas: gas, w: w, set: set}
+	sv.fast = searchGas(set, linear.MixtureGas{Mixture: gas}, t.MeanPressure, 0.3*t.Ambient, 1.5*t.HotTemperature)
 	rhLo, rhHi := rhLimits(t.Stack, t.wire(), t.MinGap)
 	if rhLo > rhHi {
 		return Result{}, units.NewRangeError("smallest gap", t.MinGap, 0, gapOf(t.Stack, rhHi, t.wire()), "m")
@@ -168,7 +173,7 @@ func Design(t Target, s *Settings) (Result, error) {
 	res := Result{Target: t, ThermalDepth: w.deltaKappa, ViscousDepth: w.deltaNu, Wavelength: w.lambda}
 	start := t.startGeometry(w, set.DriveRatio, rhLo, rhHi)
 	res.Start = start
-	if r, err := sv.tune(&start, 1e-5); err == nil {
+	if r, err := sv.tune(&start, searchTol); err == nil {
 		res.StartOnset = r.HotTemperature
 		res.Start = start
 	}
@@ -208,6 +213,8 @@ type solver struct {
 	// highest is the highest onset frequency met with the shortest
 	// resonator when the target was higher, Hz (0: never).
 	highest float64
+	// fast is the tabulated gas of the search's solves (tableGas).
+	fast linear.Gas
 }
 
 // onset solves the onset of geometry g, warm-started from the last answer.
@@ -220,6 +227,9 @@ func (sv *solver) onset(g Geometry, tol float64) (*linear.OnsetResult, error) {
 	}
 	d := sv.t.device(g, sv.gas)
 	ls := &linear.Settings{Gas: sv.set.Gas, NoProfile: true, RelTol: tol, Tolerance: tol}
+	if tol >= searchTol {
+		ls.Gas = sv.fast
+	}
 	if sv.lastTh > 0 {
 		ls.HotGuess = sv.lastTh
 		ls.FrequencyGuess = sv.lastF * sv.lastLen / g.Length()
@@ -256,7 +266,7 @@ func (sv *solver) search(g0 Geometry, rhLo, rhHi float64) (*Geometry, string, in
 		pores, phi, gap := poresFor(t.Stack, rh, t.wire())
 		g := Geometry{HydraulicRadius: rh, Porosity: phi, Pores: pores, Gap: gap, Resonator: lastLr}
 		t.place(&g, w, pos, dx, sv.set.DriveRatio)
-		r, err := sv.tune(&g, 1e-5)
+		r, err := sv.tune(&g, searchTol)
 		if err != nil {
 			return 10*ta + 10*ta*pen
 		}

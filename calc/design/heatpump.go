@@ -159,6 +159,7 @@ func DesignHeatPump(t HeatPumpTarget, s *Settings) (HeatPumpResult, error) {
 		return HeatPumpResult{}, err
 	}
 	hp := &pumpSolver{t: &t, gas: gas, w: w, set: set}
+	hp.fast = searchGas(set, linear.MixtureGas{Mixture: gas}, t.MeanPressure, 0.3*t.Ambient, 1.1*t.Ambient)
 	rhLo, rhHi := rhLimits(t.Stack, et.wire(), t.MinGap)
 	if rhLo > rhHi {
 		return HeatPumpResult{}, units.NewRangeError("smallest gap", t.MinGap, 0, gapOf(t.Stack, rhHi, et.wire()), "m")
@@ -210,6 +211,16 @@ type pumpSolver struct {
 	set    Settings
 	solves int
 	slope  float64 // d f_res(Tc(f)) / df at the last drive frequency solved
+	fast   linear.Gas
+}
+
+// gasFor returns the tabulated gas for the search's tolerance, the gas
+// itself (Settings.Gas or nil for the device's) for final solves.
+func (hp *pumpSolver) gasFor(tol float64) linear.Gas {
+	if tol >= searchTol {
+		return hp.fast
+	}
+	return hp.set.Gas
 }
 
 // place sets the driver space, exchangers and stack for a stack whose warm
@@ -249,7 +260,7 @@ func (hp *pumpSolver) device(g HeatPumpGeometry, f float64) *linear.Device {
 
 // resonance returns the frequency (Hz) of the tube's mode near f0 with
 // the start end rigid and the cold parts held at tc (K).
-func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc float64) (float64, error) {
+func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc, tol float64) (float64, error) {
 	d := hp.device(g, f0)
 	for i := range d.Parts {
 		if d.Parts[i].Temp == linear.TempCold {
@@ -257,7 +268,7 @@ func (hp *pumpSolver) resonance(g HeatPumpGeometry, f0, tc float64) (float64, er
 		}
 	}
 	hp.set.done(&hp.solves)
-	m, err := linear.Mode(d, 0, &linear.Settings{Gas: hp.set.Gas, NoProfile: true, FrequencyGuess: f0})
+	m, err := linear.Mode(d, 0, &linear.Settings{Gas: hp.gasFor(tol), NoProfile: true, FrequencyGuess: f0})
 	if err != nil {
 		return 0, err
 	}
@@ -272,7 +283,7 @@ func (hp *pumpSolver) tune(g *HeatPumpGeometry, tol float64) error {
 	F := func(lr float64) float64 {
 		gg := *g
 		gg.Resonator = lr
-		f, err := hp.resonance(gg, ft*gg.Length()/g.Length(), hp.t.Ambient)
+		f, err := hp.resonance(gg, ft*gg.Length()/g.Length(), hp.t.Ambient, tol)
 		if err != nil {
 			return math.NaN()
 		}
@@ -312,10 +323,10 @@ func (hp *pumpSolver) pump(g HeatPumpGeometry, f0 float64, tol float64) (*linear
 			return p
 		}
 		hp.set.done(&hp.solves)
-		r, err := linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{Gas: hp.set.Gas, NoProfile: true, RelTol: tol, Tolerance: tol}})
+		r, err := linear.HeatPump(hp.device(g, f), &linear.HeatPumpSettings{Settings: linear.Settings{Gas: hp.gasFor(tol), NoProfile: true, RelTol: tol, Tolerance: tol}})
 		p := point{r: r, err: err, h: math.NaN()}
 		if err == nil {
-			fr, err := hp.resonance(g, f, r.ColdTemperature)
+			fr, err := hp.resonance(g, f, r.ColdTemperature, tol)
 			if err == nil {
 				p.h = fr - f
 			} else {
@@ -396,11 +407,11 @@ func (hp *pumpSolver) search(g0 HeatPumpGeometry) (*HeatPumpGeometry, string, in
 		if hp.solves >= hp.set.MaxSolves || hp.set.stop() != nil {
 			return 2 * t.Ambient
 		}
-		if err := hp.tune(&g, 1e-5); err != nil {
+		if err := hp.tune(&g, searchTol); err != nil {
 			return 2*t.Ambient + t.Ambient*pen
 		}
 		lastLr = g.Resonator
-		r, f, err := hp.pump(g, lastF, 1e-5)
+		r, f, err := hp.pump(g, lastF, searchTol)
 		if err != nil {
 			return 2*t.Ambient + t.Ambient*pen
 		}
