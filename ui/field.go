@@ -64,9 +64,11 @@ func NewField(env *Env, label string, dim units.Dimension, text string) *Field {
 	f := &Field{Label: label, Dim: dim, env: env}
 	f.editor.SingleLine = true
 	f.editor.Submit = true
-	// Units need letters, so not key.HintNumeric: HintText keeps a full
-	// keyboard on phones.
-	f.editor.InputHint = key.HintText
+	// Units need letters, so not key.HintNumeric. HintURL keeps a full
+	// keyboard with autocorrect, capitals and spell checking off (Gio
+	// turns them on for HintText); the page shell (assets/web/index.html)
+	// turns the browser's URL keyboard and suggestions back to plain text.
+	f.editor.InputHint = key.HintURL
 	f.SetText(text)
 	return f
 }
