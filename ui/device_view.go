@@ -99,9 +99,25 @@ func (v *deviceView) update(gtx layout.Context) bool {
 	return true
 }
 
+// tablesFunc computes a screen's plot tables from its calculator s and
+// the texts of the Form's inputs; it runs off the UI goroutine.
+type tablesFunc func(ctx context.Context, s *sheet.Sheet, texts map[string]string) (*deviceTables, error)
+
+// begin starts a frame of a device screen: it draws the plots whose tables
+// arrived (show), handles the inputs, and for a new result starts the
+// plots' run (tables).
+func (v *deviceView) begin(gtx layout.Context, tables tablesFunc, show func(*deviceTables)) {
+	if t := v.polled(); t != nil {
+		show(t)
+	}
+	if v.update(gtx) {
+		v.startPlots(tables)
+	}
+}
+
 // startPlots runs tables off the UI goroutine for the Form's new result,
 // or clears the plots when there is none.
-func (v *deviceView) startPlots(tables func(ctx context.Context, texts map[string]string) (*deviceTables, error)) {
+func (v *deviceView) startPlots(tables tablesFunc) {
 	if v.form.Result() == nil {
 		v.job.Cancel()
 		v.status = ""
@@ -110,9 +126,9 @@ func (v *deviceView) startPlots(tables func(ctx context.Context, texts map[strin
 		}
 		return
 	}
-	texts := v.form.Texts()
+	s, texts := v.form.Sheet, v.form.Texts()
 	v.status = "Drawing the plots…"
-	v.job.Start(func(ctx context.Context) (*deviceTables, error) { return tables(ctx, texts) })
+	v.job.Start(func(ctx context.Context) (*deviceTables, error) { return tables(ctx, s, texts) })
 }
 
 // polled takes the plots' tables when they are ready (nil otherwise).

@@ -59,15 +59,7 @@ func (s *heatPumpScreen) showPlots(t *deviceTables) {
 
 // Layout implements Screen.
 func (s *heatPumpScreen) Layout(gtx layout.Context) layout.Dimensions {
-	if t := s.polled(); t != nil {
-		s.showPlots(t)
-	}
-	if s.update(gtx) {
-		sh := s.form.Sheet
-		s.startPlots(func(ctx context.Context, texts map[string]string) (*deviceTables, error) {
-			return pumpTables(ctx, sh, texts)
-		})
-	}
+	s.begin(gtx, pumpTables, s.showPlots)
 	ws := s.top(gtx, "Build the heat pump from parts, driver first; mark the stack's cold side \"cold\". The span is solved with Rott's linear theory and the total-power equation through the stack after every change.",
 		"Heat pump", "load", "frequency")
 	ws = append(ws, Heading(s.env, "Along the device"), s.statusLine, s.plots[0].Layout, s.plots[1].Layout, s.plots[2].Layout)

@@ -112,15 +112,7 @@ func lineXY(xy XYs, xl, xu, yl, yu, title string) *Chart {
 
 // Layout implements Screen.
 func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
-	if t := s.polled(); t != nil {
-		s.showPlots(t)
-	}
-	if s.update(gtx) {
-		sh := s.form.Sheet
-		s.startPlots(func(ctx context.Context, texts map[string]string) (*deviceTables, error) {
-			return onsetTables(ctx, sh, texts)
-		})
-	}
+	s.begin(gtx, onsetTables, s.showPlots)
 	ws := s.top(gtx, "Build the engine from parts, closed end first. The hot temperature and frequency at which it starts are solved with Rott's linear theory after every change.",
 		"Onset", "hot", "frequency-guess")
 	ws = append(ws, Heading(s.env, "Along the device"), s.statusLine)
