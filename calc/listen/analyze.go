@@ -43,21 +43,29 @@ const silentPeak = 1.0 / 65536
 //
 // Method, in order:
 //  1. the mean is removed; frames of about 0.1 s (half overlapping, Hann
-//     window) give the track: level in dBFS and the strongest peak by the
-//     Grandke interpolation (see spectrum.grandke);
+//     window) give the track: level in dBFS and the strongest peak (see
+//     frames);
 //  2. the loud part (frames within 30 dB of the loudest) is analysed as one
-//     stretch: its strongest peak between MinFrequency and MaxFrequency,
-//     first by Grandke's interpolation on the Hann-windowed FFT (gonum
-//     dsp/fourier), then refined to the maximum of the windowed periodogram
-//     (Rife & Boorstyn 1974; see refinePeak);
+//     stretch: its strongest peak between MinFrequency and MaxFrequency by
+//     Grandke's interpolation on the Hann-windowed FFT (gonum dsp/fourier;
+//     see spectrum.grandke);
 //  3. the envelope of the component at that frequency by complex
-//     demodulation (see demodEnvelope), the noise from the quieter of a
-//     spectral and an envelope estimate, the decay time by a weighted
-//     straight-line fit to the log envelope (see fitDecay); Q = π f τ
-//     (Kinsler, Frey, Coppens & Sanders, Fundamentals of Acoustics, 4th ed.
-//     2000, §10.8: τ = 1/β with β = ω/(2Q) the amplitude decay rate);
-//  4. the ± of the frequency from the noise and the width of the peak (see
-//     frequencySigma) combined with the wander of the frame frequencies.
+//     demodulation (see demodEnvelope), and the noise near it from the
+//     lower of an envelope and a spectral estimate (see
+//     envelope.noiseAmplitude), at least the rounding noise of the samples;
+//  4. the frequency refined by a least-squares sine fit with the envelope as
+//     its amplitude over the loud stretch, or from just after the peak for a
+//     ring-down (see sineFit, fitStretch): the periodogram maximum of Rife
+//     & Boorstyn (1974) made exact for a short ring;
+//  5. its ± from the noise and the width of the peak (see frequencySigma),
+//     combined with the wander of the frame frequencies (see drift);
+//  6. the decay time by a weighted straight-line fit to the log envelope
+//     (see fitDecay) and Q = π f τ: the amplitude of a resonator of quality
+//     factor Q decays as exp(-ω t/(2Q)) (Kinsler, Frey, Coppens & Sanders,
+//     Fundamentals of Acoustics, 4th ed. 2000, ch. 1, damped free
+//     oscillations, Q = ω₀/(2β));
+//  7. harmonics near 2f … 10f, a warning when a peak near f/2 or f/3 could
+//     be the fundamental, and the clipping and hearing cautions.
 //
 // Errors: ErrEmpty (too short for the band), ErrSilent (no variation above
 // half a 16-bit step), ErrTooLong, ErrUnsupported (sample rate), and a

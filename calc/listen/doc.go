@@ -35,7 +35,7 @@
 // ring-down is the frequency of the damped oscillation, which lies below
 // the undamped resonance by the factor √(1 - 1/(4Q²)) (a 0.01 % effect at
 // Q = 35; Kinsler, Frey, Coppens & Sanders, Fundamentals of Acoustics, 4th
-// ed. 2000, §1.10). The ± is a standard uncertainty (one standard
+// ed. 2000, ch. 1, damped free oscillations). The ± is a standard uncertainty (one standard
 // deviation) from the noise and the width of the peak, combined with the
 // wander of the pitch during the recording; it does not include the
 // accuracy of the recorder's sample clock (typically tens of parts per

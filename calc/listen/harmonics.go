@@ -27,7 +27,7 @@ func harmonics(sp spectrum, f, lowHz, highHz float64) []Harmonic {
 	}
 	p0 := peakAround(sp, k0, 1)
 	sigma2 := sp.noisePower(lo, hi, 0, 0)
-	if sigma2 < 0 {
+	if sigma2 < 0 || !(p0 > 0) {
 		return nil
 	}
 	noise := sigma2 * sp.sumW2 // mean noise power per bin
@@ -73,6 +73,9 @@ func peakIn(sp spectrum, lowHz, highHz float64) int {
 func lowerFundamental(sp spectrum, f, lowHz float64) string {
 	k0 := int(math.Round(f / sp.binHz))
 	p0 := peakAround(sp, k0, 1)
+	if !(p0 > 0) {
+		return ""
+	}
 	for _, d := range []int{2, 3} {
 		fd := f / float64(d)
 		if fd*(1-harmonicSpread) < lowHz {
