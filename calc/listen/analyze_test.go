@@ -28,6 +28,8 @@ func TestAnalyzeSynthetic(t *testing.T) {
 		{"tap Q≈39, 1234.5 Hz, 16 kHz", tone{Rate: 16000, Length: 1, Freq: 1234.5, Amp: 0.3, Tau: 0.01, Onset: 0.2, Noise: 0.0003, Seed: 4}},
 		{"tap Q≈10, 318 Hz, 8 kHz (lossy tube)", tone{Rate: 8000, Length: 1, Freq: 318, Amp: 0.5, Tau: 0.01, Onset: 0.25, Noise: 0.0005, Harmonic2: 0.2, Seed: 5}},
 		{"tap in louder noise, 742 Hz, 22.05 kHz", tone{Rate: 22050, Length: 1.5, Freq: 742, Amp: 0.3, Tau: 0.08, Onset: 0.4, Noise: 0.01, Seed: 6}},
+		{"drive switched off after 1 s, 287.9 Hz, 44.1 kHz", tone{Rate: 44100, Length: 2.5, Freq: 287.9, Amp: 0.4, Tau: 0.08, Hold: 1, Noise: 0.002, Seed: 7}},
+		{"tap with the click of the knock, 611.3 Hz, 48 kHz", tone{Rate: 48000, Length: 1.5, Freq: 611.3, Amp: 0.3, Tau: 0.05, Onset: 0.3, Noise: 0.002, Harmonic2: 0.2, Click: 0.8, Seed: 8}},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {

@@ -20,6 +20,8 @@ type tone struct {
 	Onset     float64 // s
 	Harmonic2 float64 // amplitude of 2f relative to f
 	Noise     float64 // noise standard deviation
+	Hold      float64 // s the amplitude stays at Amp before decaying (a drive switched off)
+	Click     float64 // amplitude of a 20-sample noise burst at the onset (the tap itself)
 	Seed      uint64
 }
 
@@ -32,12 +34,15 @@ func (t tone) samples() []float64 {
 		if tt >= t.Onset {
 			d := tt - t.Onset
 			a := t.Amp
-			if t.Tau > 0 {
-				a *= math.Exp(-d / t.Tau)
+			if t.Tau > 0 && d > t.Hold {
+				a *= math.Exp(-(d - t.Hold) / t.Tau)
 			}
 			x[i] = a * (math.Sin(2*math.Pi*t.Freq*d+0.3) + t.Harmonic2*math.Sin(4*math.Pi*t.Freq*d+1.1))
 		}
 		x[i] += t.Noise * r.NormFloat64()
+		if on := int(math.Ceil(t.Onset * t.Rate)); t.Click > 0 && i >= on && i < on+20 {
+			x[i] += t.Click * r.NormFloat64()
+		}
 	}
 	return x
 }
