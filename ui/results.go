@@ -181,14 +181,23 @@ func (r *Results) Layout(gtx layout.Context) layout.Dimensions {
 	})
 }
 
-// layoutRow draws one row: label on the left, value on the right, note
-// below; a hairline under it when divider is set.
+// longValue is the length (in characters) above which a row's value is
+// words rather than a number, and goes under its label as a paragraph.
+const longValue = 40
+
+// layoutRow draws one row: label on the left, value on the right (or, for
+// a value in many words, under the label), note below; a hairline under it
+// when divider is set.
 func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) layout.Dimensions {
 	th := r.env.Theme
 	c := r.env.Colors
 	m := op.Record(gtx.Ops)
+	long := len([]rune(row.value)) > longValue
 	dims := layout.Inset{Left: 14, Right: 14, Top: 9, Bottom: 9}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 		gtx.Constraints.Min.X = gtx.Constraints.Max.X
+		if long {
+			return r.layoutLongRow(gtx, row)
+		}
 		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
 			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 				return layout.Flex{Alignment: layout.Baseline, Spacing: layout.SpaceBetween}.Layout(gtx,
@@ -229,6 +238,41 @@ func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) lay
 		st.Pop()
 	}
 	return dims
+}
+
+// layoutLongRow draws a row whose value is many words: the label (with
+// the badge of a check), the value as a paragraph under it, then the note.
+func (r *Results) layoutLongRow(gtx layout.Context, row resultRow) layout.Dimensions {
+	th := r.env.Theme
+	c := r.env.Colors
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
+				layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+					l := material.Body1(th, row.label)
+					l.Color = c.Muted
+					return l.Layout(gtx)
+				}),
+				layout.Rigid(func(gtx layout.Context) layout.Dimensions { return r.badge(gtx, row) }),
+			)
+		}),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return layout.Inset{Top: 4}.Layout(gtx, Described(row.label, func(gtx layout.Context) layout.Dimensions {
+				l := material.Body1(th, row.value)
+				l.Color = c.Text
+				return l.Layout(gtx)
+			}))
+		}),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			if row.note == "" {
+				return layout.Dimensions{}
+			}
+			l := material.Caption(th, row.note)
+			l.Color = c.Muted
+			l.TextSize = unit.Sp(13)
+			return layout.Inset{Top: 2}.Layout(gtx, l.Layout)
+		}),
+	)
 }
 
 // badge draws a check's outcome as a coloured box with its word ("FAIL"
