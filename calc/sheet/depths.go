@@ -58,9 +58,9 @@ func runDepths(v *Values) (*Result, error) {
 		{"viscous_penetration_depth", "Viscous penetration depth δν", "mm", ""},
 		{"wavelength", "Wavelength", "", ""},
 		{"stack_plate_gap_low", fmt.Sprintf("Stack plate gap, narrow end (%g δκ)", 2*stack.Low), "mm", depthsStackNote},
-		{"stack_plate_gap_high", fmt.Sprintf("Stack plate gap, wide end (%g δκ)", 2*stack.High), "mm", depthsStackNote},
+		{"stack_plate_gap_high", fmt.Sprintf("Stack plate gap, wide end (%g δκ)", 2*stack.High), "mm", ""},
 		{"regenerator_hydraulic_radius_low", fmt.Sprintf("Regenerator hydraulic radius, narrow end (%g δκ)", regen.Low), "mm", depthsRegenNote},
-		{"regenerator_hydraulic_radius_high", fmt.Sprintf("Regenerator hydraulic radius, wide end (%g δκ)", regen.High), "mm", depthsRegenNote},
+		{"regenerator_hydraulic_radius_high", fmt.Sprintf("Regenerator hydraulic radius, wide end (%g δκ)", regen.High), "mm", ""},
 	}
 	r := &Result{}
 	for k, row := range rows {

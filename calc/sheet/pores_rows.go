@@ -1,6 +1,8 @@
 package sheet
 
 import (
+	"fmt"
+
 	"tubewright/calc/pore"
 	"tubewright/calc/units"
 )
@@ -32,8 +34,10 @@ func poresRows(r *Result, v *Values, g poreGeometry, op *operatingPoint, j pores
 	r.AddComplex("f_nu", "Rott's fν", s.F(op.DN)).Note = "time dependence e^(+iωt), as in Swift 2002: Im f < 0"
 	depth(2, "hydraulic_radius_over_thermal_depth", "Hydraulic radius / δκ", "")
 	depth(3, "spacing_over_thermal_depth", "Equivalent plate spacing / δκ (2 r_h/δκ)", "")
-	r.Check("verdict", "Verdict for a "+verdict.Role.String(), verdict.Call.String(), poreOutcomes[verdict.Call], verdict.Words)
-	r.AddWords("explanation", "Why", verdict.Words)
+	r.Check("verdict", "Verdict for a "+verdict.Role.String(), verdict.Call.String(), poreOutcomes[verdict.Call],
+		fmt.Sprintf("the hydraulic radius is %.3g δκ; the usual range for a %s is %.3g–%.3g δκ",
+			verdict.RhOverDelta, verdict.Role, verdict.Rule.Low, verdict.Rule.High))
+	r.AddWords("explanation", "What it means", verdict.Words)
 	r.AddWords("rule_of_thumb", "Rule of thumb", verdict.Rule.Text)
 	depth(4, "target_hydraulic_radius", "Hydraulic radius for the aim", "mm")
 	r.AddWords("suggestion", "What would hit the aim", verdict.Suggestion)
