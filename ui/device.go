@@ -3,6 +3,7 @@ package ui
 import (
 	"bytes"
 	"encoding/json"
+	"errors"
 	"fmt"
 	"strings"
 
@@ -344,4 +345,49 @@ func partTitle(i int, p linear.PartFile) string {
 		t += " · " + p.Label
 	}
 	return t
+}
+
+// mark shows a device problem under the field it names (err holds a
+// *linear.FieldError: the part, from 0, and the JSON key) and opens that
+// part; any other error, or nil, clears the marks.
+func (e *deviceEditor) mark(err error) {
+	for _, f := range []*Field{e.pressure, e.ambient} {
+		f.SetError(nil)
+	}
+	for _, p := range e.parts {
+		for _, pf := range p.fields {
+			pf.f.SetError(nil)
+		}
+		if p.tvalue != nil {
+			p.tvalue.SetError(nil)
+		}
+	}
+	var fe *linear.FieldError
+	if !errors.As(err, &fe) {
+		return
+	}
+	var f *Field
+	switch {
+	case fe.Part < 0 && fe.Field == "mean_pressure":
+		f = e.pressure
+	case fe.Part < 0 && fe.Field == "ambient_temperature":
+		f = e.ambient
+	case fe.Part >= 0 && fe.Part < len(e.parts):
+		p := e.parts[fe.Part]
+		key := strings.TrimPrefix(fe.Field, "pores.")
+		for _, pf := range p.fields {
+			if pf.key == key {
+				f = pf.f
+			}
+		}
+		if fe.Field == "temperature" && p.tvalue != nil {
+			f = p.tvalue
+		}
+		if f != nil {
+			e.selected = fe.Part
+		}
+	}
+	if f != nil {
+		f.SetError(errors.New(strings.TrimPrefix(fe.Msg, "= ")))
+	}
 }

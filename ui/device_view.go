@@ -76,7 +76,8 @@ func (v *deviceView) takeDevice() {
 
 // update handles the example chips, the editor and the Form, in that
 // order, and reports whether the Form computed anew. A device problem is
-// shown as the device check words it, naming the part and field.
+// shown as the device check words it, naming the part and field, and
+// marked under that field of the editor.
 func (v *deviceView) update(gtx layout.Context) bool {
 	if ex := v.form.Pick(keyExample); ex.Update(gtx) {
 		if name := ex.Selected(); name != noExample {
@@ -92,10 +93,13 @@ func (v *deviceView) update(gtx layout.Context) bool {
 	if !v.form.Update(gtx) {
 		return false
 	}
+	var devErr error
 	if fes := sheet.FieldErrors(v.form.Err()); len(fes) > 0 && fes[0].Key == keyDevice {
+		devErr = fes[0].Err
 		v.form.Results.Reset()
-		v.form.Results.Fail(fes[0].Err)
+		v.form.Results.Fail(devErr)
 	}
+	v.editor.mark(devErr)
 	return true
 }
 

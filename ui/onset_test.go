@@ -77,6 +77,9 @@ func TestOnsetScreenEdits(t *testing.T) {
 	if f := s.form.Results.Failure(); !strings.Contains(f, `part 4 (stack): field "porosity" = 1.4 must be in (0, 1]`) {
 		t.Errorf("porosity 1.4: failure %q", f)
 	}
+	if e := s.editor.parts[3].fields[2].f.ErrorText(); e != "Porosity (open fraction): 1.4 must be in (0, 1]" {
+		t.Errorf("porosity 1.4: the field shows %q", e)
+	}
 	// No result, no caution: its lines quoted the last onset temperature.
 	if c := cautions(s.form); len(c) != 0 {
 		t.Errorf("porosity 1.4: a stale caution is still shown: %q", c)
@@ -321,6 +324,13 @@ func TestOnsetScreenDevicePM(t *testing.T) {
 	}
 	if s.form.Result() != nil || s.plots[0].Chart() != nil {
 		t.Error("a result or a plot is still shown")
+	}
+	if e := s.editor.pressure.ErrorText(); !strings.Contains(e, "Mean pressure") || !strings.Contains(e, "uncertainty") {
+		t.Errorf("the mean-pressure field shows %q", e)
+	}
+	h.retype("Mean pressure", s.editor.pressure.Text(), "8 bar")
+	if e := s.editor.pressure.ErrorText(); e != "" || s.form.Result() == nil {
+		t.Errorf("8 bar again: field error %q, result %v", e, s.form.Result() != nil)
 	}
 }
 
