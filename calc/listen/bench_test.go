@@ -11,7 +11,9 @@ var (
 )
 
 // Issue 14 asks for a 10 s, 48 kHz recording analysed within 200 ms
-// natively. Three regimes: a tap that rings down, a steady tone (the whole
+// natively. Besides the wall time per analysis the benchmark reports the
+// process's CPU time per analysis (cpu-ms/op, garbage collection included),
+// which a busy shared machine does not inflate. Three regimes: a tap that rings down, a steady tone (the whole
 // recording is the loud stretch), and reading the same recording from a
 // 16-bit WAV file.
 func BenchmarkAnalyze10s48k(b *testing.B) {
@@ -27,8 +29,12 @@ func BenchmarkAnalyze10s48k(b *testing.B) {
 		}
 		b.Run(c.name, func(b *testing.B) {
 			b.ReportAllocs()
+			c0 := cpuSeconds()
 			for b.Loop() {
 				sinkResult, _ = Analyze(rec, nil)
+			}
+			if c0 >= 0 {
+				b.ReportMetric((cpuSeconds()-c0)*1e3/float64(b.N), "cpu-ms/op")
 			}
 		})
 	}
