@@ -51,6 +51,9 @@ func (s *resonanceScreen) update(gtx layout.Context) {
 	s.zones.update(gtx)
 	if s.form.Update(gtx) {
 		s.carried = ""
+		if res := s.form.Result(); res != nil && s.kind() == sheet.ResonatorZones {
+			showModes(s.form.Results, res)
+		}
 		s.plot.Set(curveChart(sheet.ResonanceCurve(s.form.Result())))
 	}
 	s.zones.sync()

@@ -3,6 +3,7 @@ package ui
 import (
 	"errors"
 	"fmt"
+	"math"
 	"strconv"
 
 	"gioui.org/layout"
@@ -135,4 +136,33 @@ func (z *zoneEditor) widgets() []layout.Widget {
 		ws = append(ws, f.length.Layout, f.radius.Layout, f.temp.Layout)
 	}
 	return ws
+}
+
+// showModes fills the results card of a zoned-tube result with one row
+// per mode (frequency, with the travel-time estimate in the note) in place
+// of the one-line list the terminal prints, which is too wide for a row.
+func showModes(r *Results, res *sheet.Result) {
+	row, ok := res.Row("modes")
+	modes, isList := row.Any.([]sheet.ZoneMode)
+	if !ok || !isList {
+		return
+	}
+	rest := *res
+	rest.Rows = nil
+	for _, row := range res.Rows {
+		if row.Key != "modes" {
+			rest.Rows = append(rest.Rows, row)
+		}
+	}
+	r.Reset()
+	r.Show(&rest)
+	for _, m := range modes {
+		r.Add(fmt.Sprintf("Mode %d", m.Mode), m.Frequency, units.DimFrequency)
+		word := "higher"
+		if m.Difference < 0 {
+			word = "lower"
+		}
+		r.AddNote(fmt.Sprintf("travel-time estimate %s, %s %s", units.Format(m.TravelTime, units.DimFrequency),
+			units.Format(math.Abs(m.Difference), units.DimFrequency), word))
+	}
 }
