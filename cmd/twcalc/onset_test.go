@@ -55,12 +55,19 @@ func TestOnsetCommandFileAndErrors(t *testing.T) {
 	}
 	bad := filepath.Join(dir, "bad.json")
 	_ = os.WriteFile(bad, []byte(strings.Replace(string(b), `"porosity": "0.76"`, `"porosity": "1.4"`, 1)), 0o600)
+	// A ± inside the device is refused with the device check's words, the
+	// same the app shows under its mean-pressure field.
+	pm := filepath.Join(dir, "pm.json")
+	_ = os.WriteFile(pm, []byte(strings.Replace(string(b), `"mean_pressure": "8 bar"`, `"mean_pressure": "8 bar ± 0.5 bar"`, 1)), 0o600)
 	cases := []struct {
 		args []string
 		code int
 		want string
 	}{
 		{[]string{"onset", bad}, exitUsage, `part 4 (stack): field "porosity" = 1.4 must be in (0, 1]`},
+		{[]string{"onset", pm}, exitUsage, `device: field "mean_pressure" = "8 bar ± 0.5 bar": an uncertainty is not used here; give the value alone`},
+		{[]string{"onset", good, "--example", "engine"}, exitUsage, "not both"},
+		{[]string{"onset", "--example", "engine", "--hot", "500 K", "--sweep-pressure", "1bar:2bar"}, exitUsage, "--sweep-pressure"},
 		{[]string{"onset"}, exitUsage, "--example"},
 		{[]string{"onset", "--example", "teapot"}, exitUsage, "teapot"},
 		{[]string{"onset", "--example", "engine", "--hot", "-5 K"}, exitUsage, "--hot"},
