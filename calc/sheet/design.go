@@ -33,11 +33,11 @@ var designSheet = &Sheet{
 				{Key: "heat-pump", Words: "A driven heat pump that reaches my cold temperature", Value: "heat-pump"},
 			}},
 		GasInput("gas", ""),
-		noPM(MeanPressureInput("pressure", "Mean pressure", ""), "10 bar"),
+		bounded(noPM(MeanPressureInput("pressure", "Mean pressure", ""), "10 bar"), 1e3, 50e6),
 		{Key: "frequency", Label: "Target frequency", Kind: Quantity, Dim: units.DimFrequency, Example: "300 Hz",
 			Min: 1, Max: 20000, Hint: "engine: the frequency it should sing at; heat pump: the tube's resonance at room temperature; e.g. 300 Hz", Share: ShareFrequency},
-		askedFor(noPM(TemperatureInput("hot", "Hottest the heater reaches (engine)", "", "650 K"), "")),
-		noPM(TemperatureInput("ambient", "Ambient (cooler) temperature", "295 K", ""), ""),
+		bounded(askedFor(noPM(TemperatureInput("hot", "Hottest the heater reaches (engine)", "", "650 K"), "")), 150, 2000),
+		bounded(noPM(TemperatureInput("ambient", "Ambient (cooler) temperature", "295 K", ""), ""), 150, 500),
 		{Key: "diameter", Label: "Tube inside diameter", Kind: Quantity, Dim: units.DimLength, Example: "50 mm",
 			Min: 1e-3, Max: 2, Hint: "inside diameter of the tube, e.g. 50 mm or 2 in"},
 		{Key: "ends", Label: "Tube ends", Kind: Pick, Default: design.HalfWave.String(),
@@ -64,7 +64,7 @@ var designSheet = &Sheet{
 			Hint: "plate gap, pore diameter, screen opening or the wool's hydraulic diameter, e.g. 0.3 mm (empty: no limit)"},
 		{Key: "drive", Label: "Driver pressure amplitude (heat pump)", Kind: Quantity, Dim: units.DimPressure, Optional: true,
 			Min: 0, MinOpen: true, Max: 10e6, Example: "3 kPa", Hint: "pressure amplitude at the driver face, e.g. 3 kPa"},
-		askedFor(noPM(TemperatureInput("cold", "Cold temperature wanted (heat pump)", "", "273 K"), "")),
+		bounded(askedFor(noPM(TemperatureInput("cold", "Cold temperature wanted (heat pump)", "", "273 K"), "")), 20, 500),
 		{Key: "span", Label: "Or the span wanted below ambient (heat pump)", Kind: Quantity, Dim: units.DimTemperatureDifference, Optional: true,
 			Min: 0, MinOpen: true, Max: 1000, Hint: "e.g. 20 K, when no cold temperature is given"},
 		{Key: "device-out", Label: "Write the device file to", Kind: Text, Optional: true, Advanced: true,
@@ -88,6 +88,13 @@ var designSheet = &Sheet{
 // needed).
 func askedFor(in Input) Input {
 	in.Optional = true
+	return in
+}
+
+// bounded returns in with the range calc/design accepts (SI), so that a
+// value outside it is blamed on its input when read.
+func bounded(in Input, lo, hi float64) Input {
+	in.Min, in.Max = lo, hi
 	return in
 }
 

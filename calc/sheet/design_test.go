@@ -97,6 +97,8 @@ func TestDesignSheetBlamesInputs(t *testing.T) {
 		{"hot", "280 K"},
 		{"frequency", "0 Hz"},
 		{"ends", "open-open"},
+		{"ambient", "10 K"},
+		{"pressure", "10 Pa"},
 		{"device-out", filepath.Join(t.TempDir(), "no", "such", "folder", "d.json")},
 	} {
 		texts := map[string]string{}
