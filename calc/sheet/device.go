@@ -69,32 +69,31 @@ func profileInput() Input {
 		Hint: "give the profile along the device as a table (x, |p1|, |U1|, phase, Tm, acoustic power)"}
 }
 
-// LoadDevice returns the device of a sheet with the device inputs and
-// where it came from ("example engine", a file path, or "document"). A
+// loadDevice returns the device of a sheet with the device inputs. A
 // problem is a *FieldError about the input that named the device.
-func LoadDevice(v *Values) (*linear.Device, string, error) {
+func loadDevice(v *Values) (*linear.Device, error) {
 	text := strings.TrimSpace(v.Text(keyDevice))
 	example, _ := v.Pick(keyExample).(string)
 	switch {
 	case text != "" && example != "":
-		return nil, "", v.Blame(errors.New("give a device file or an example, not both"), keyExample)
+		return nil, v.Blame(errors.New("give a device file or an example, not both"), keyExample)
 	case example != "":
 		d, err := linear.Example(example)
-		return d, "example " + example, v.Blame(err, keyExample)
+		return d, v.Blame(err, keyExample)
 	case strings.HasPrefix(text, "{"):
 		d, err := linear.ParseDevice(strings.NewReader(text))
-		return d, "document", v.Blame(err, keyDevice)
+		return d, v.Blame(err, keyDevice)
 	case text != "":
 		f, err := os.Open(text)
 		if err != nil {
-			return nil, "", v.Blame(err, keyDevice)
+			return nil, v.Blame(err, keyDevice)
 		}
 		defer f.Close()
 		d, err := linear.ParseDevice(f)
-		return d, text, v.Blame(err, keyDevice)
+		return d, v.Blame(err, keyDevice)
 	}
 	in := v.Get(keyDevice).In
-	return nil, "", &FieldError{Key: keyDevice, Label: in.Label, Err: fmt.Errorf("%w: name a device file or an example", ErrRequired)}
+	return nil, &FieldError{Key: keyDevice, Label: in.Label, Err: fmt.Errorf("%w: name a device file or an example", ErrRequired)}
 }
 
 // deviceSource is the key of the input the device came from.

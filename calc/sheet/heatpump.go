@@ -60,7 +60,7 @@ func pumpValues(x *linear.HeatPumpResult) []float64 {
 }
 
 func runHeatPump(v *Values) (*Result, error) {
-	d, _, err := LoadDevice(v)
+	d, err := loadDevice(v)
 	if err != nil {
 		return nil, err
 	}

@@ -42,7 +42,7 @@ var onsetSheet = &Sheet{
 }
 
 func runOnset(v *Values) (*Result, error) {
-	d, _, err := LoadDevice(v)
+	d, err := loadDevice(v)
 	if err != nil {
 		return nil, err
 	}
