@@ -8,7 +8,7 @@ import "tubewright/calc/safety"
 func newOxygenStep(env *Env, f *safetyForms, item safety.Item) *sheetStep {
 	return newSheetStep(env, "Oxygen-deficient air", item.Cautions, &stepPart{form: f.oxygen, warnings: true,
 		keys: []string{"room", "release", "release-from-vessel", "vessel-pressure", "gas", "model", "ventilation", "vessel-temperature", "room-temperature"},
-		rows: []string{"oxygen_deficient", "oxygen_fraction", "release_volume", "vessel_release", "max_release", "recovery_time", "model",
+		rows: []string{"oxygen_deficient", "oxygen_fraction", "release_volume", "vessel_release", "max_release", "recovery_time",
 			"oxygen_fraction_displacement", "oxygen_fraction_mixed", "oxygen_fraction_sealed"},
 	})
 }

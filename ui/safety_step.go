@@ -295,13 +295,20 @@ func (s *sheetStep) Inputs() []layout.Widget {
 	return ws
 }
 
-// Outputs implements inlineCalc.
+// Outputs implements inlineCalc: the parts' cards one above the other,
+// and the caution box (beside them where the width allows).
 func (s *sheetStep) Outputs() []layout.Widget {
-	ws := make([]layout.Widget, 0, len(s.parts)+1)
-	for _, p := range s.parts {
-		ws = append(ws, p.results.Layout)
+	cards := func(gtx layout.Context) layout.Dimensions {
+		children := make([]layout.FlexChild, 0, 2*len(s.parts))
+		for i, p := range s.parts {
+			if i > 0 {
+				children = append(children, layout.Rigid(layout.Spacer{Height: 12}.Layout))
+			}
+			children = append(children, layout.Rigid(p.results.Layout))
+		}
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
 	}
-	return append(ws, s.caution.Layout)
+	return []layout.Widget{cards, s.caution.Layout}
 }
 
 // Numbers implements inlineCalc: the number rows shown, in SI with the

@@ -55,8 +55,8 @@ var energyRows = []struct {
 	dim        units.Dimension
 	show       string
 }{
-	{"stored_energy", "Stored energy (isentropic)", units.DimEnergy, ""},
-	{"brode_energy", "Brode (isochoric) value", units.DimEnergy, ""},
+	{"stored_energy", "Stored energy (isentropic)", units.DimEnergy, "kJ"},
+	{"brode_energy", "Brode (isochoric) value", units.DimEnergy, "kJ"},
 	{"tnt_equivalent", "TNT equivalent (4.184 MJ/kg)", units.DimMass, ""},
 	{"tnt_equivalent_brode", "TNT equivalent of the Brode value", units.DimMass, ""},
 }
@@ -114,8 +114,8 @@ func runEnergy(v *Values) (*Result, error) {
 			return nil, energyBlame(v, err, "test-pressure")
 		}
 		deriveReading(r, v, "test-pressure")
-		r.Add("gas_test_energy", "Stored in a gas test at "+barg(safety.GaugeOf(tp, 0)), g.Isentropic, units.DimEnergy).Note =
-			"a liquid-filled test stores only the liquid's small compression energy"
+		row := r.Add("gas_test_energy", "Stored in a gas test at "+barg(safety.GaugeOf(tp, 0)), g.Isentropic, units.DimEnergy)
+		row.Show, row.Note = "kJ", "a liquid-filled test stores only the liquid's small compression energy"
 	}
 	return r, nil
 }

@@ -137,7 +137,7 @@ func runOxygen(v *Values) (*Result, error) {
 	r.AddPM("max_release", "Largest release keeping 19.5 %", o.MaxRelease, sig[1], units.DimVolume)
 	r.Warn(o.Warnings...)
 	if o.Ventilated {
-		r.Add("recovery_time", "Back to 19.5 % after", o.RecoveryTime, units.DimTime)
+		r.Add("recovery_time", "Back to 19.5 % after", o.RecoveryTime, units.DimTime).Show = "min"
 	} else if o.Deficient {
 		r.Warn("no ventilation given: the oxygen stays low until the room is ventilated (give the ventilation to estimate the recovery time)")
 	}
@@ -165,7 +165,7 @@ func oxygenCheck(r *Result, o safety.Oxygen) {
 		words, out = "below "+limit, Fail
 		why = "oxygen " + left + " after the release (" + o.Model.Label() + "), below the " + limit + " oxygen-deficient threshold of US OSHA 29 CFR 1910.134: people lose judgement without noticing; ventilate and monitor before anyone enters"
 		if o.Ventilated {
-			why += fmt.Sprintf("; back to %s after about %s", limit, units.Format(o.RecoveryTime, units.DimTime))
+			why += fmt.Sprintf("; back to %s after about %s", limit, minutes(o.RecoveryTime))
 		}
 	}
 	row := r.AddObject("oxygen_deficient", "Oxygen against "+limit, o.Deficient, words)
@@ -239,4 +239,12 @@ func vesselRelease(r *Result, v *Values, warn bool) (float64, error) {
 		r.Warn(c.Warnings...)
 	}
 	return rel, nil
+}
+
+// minutes writes a time in minutes.
+func minutes(s float64) string {
+	if t, err := units.FormatIn(s, "min"); err == nil {
+		return t
+	}
+	return units.Format(s, units.DimTime)
 }

@@ -12,7 +12,7 @@ import (
 // Helpers shared by the safety calculators (vessel, energy, oxygen, spl).
 
 // gaugeHint is the hint of every pressure input of the safety checks.
-const gaugeHint = "a bare pressure is gauge, as a gauge shows it: 30 bar = 30 barg; absolute: 31 bara, 450 psia"
+const gaugeHint = "a bare pressure is gauge (30 bar = 30 barg); absolute: 31 bara, 450 psia"
 
 // SafetyPressureInput is a pressure of the safety checks: a bare unit
 // ("30 bar", "145 psi") is read as gauge, the conservative reading for
@@ -33,9 +33,9 @@ func SafetyPressureInput(key, label, def, example, hint string) Input {
 func ReadingOf(v *Values, key string) string { return ReadingOfValue(*v.Get(key)) }
 
 // ReadingOfValue says how a parsed pressure value was read, or "" when it
-// is not a pressure or holds no value. A screen shows it under the field.
+// is not a safety pressure (SafetyPressureInput) or holds no value. A screen shows it under the field.
 func ReadingOfValue(val Value) string {
-	if !val.Set || val.In == nil || val.In.Kind != Quantity || val.In.Dim != units.DimPressure {
+	if !val.Set || val.In == nil || val.In.Kind != Quantity || val.In.Dim != units.DimPressure || !val.In.Units.BareGauge {
 		return ""
 	}
 	return units.DescribePressure(val.Text, val.Q, val.In.Units.Atmosphere)
@@ -96,4 +96,12 @@ func withPM(in Input) Input {
 	in.PM = true
 	in.Hint += "; ± or +- for an uncertainty"
 	return in
+}
+
+// hours writes a time in hours.
+func hours(s float64) string {
+	if t, err := units.FormatIn(s, "h"); err == nil {
+		return t
+	}
+	return units.Format(s, units.DimTime)
 }

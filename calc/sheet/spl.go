@@ -108,12 +108,13 @@ func limitsRow(r *Result, s safety.SoundLevel) {
 func exposureRows(r *Result, L float64) {
 	osha := safety.OSHAPermitted(L)
 	if osha.Permitted {
-		r.Add("osha_permitted_time", "OSHA permitted time per day", osha.Hours*3600, units.DimTime).Note = osha.Note
+		row := r.Add("osha_permitted_time", "OSHA permitted time per day", osha.Hours*3600, units.DimTime)
+		row.Show, row.Note = "h", osha.Note
 	} else {
 		r.Check("osha_permitted_time", "OSHA permitted time per day", "not permitted", Fail, osha.Note)
 	}
 	_, eu := safety.PermittedHours(L)
-	r.Add("eu_limit_time", fmt.Sprintf("Time to the EU limit of %g dB(A)", EUExposureLimit), eu*3600, units.DimTime)
+	r.Add("eu_limit_time", fmt.Sprintf("Time to the EU limit of %g dB(A)", EUExposureLimit), eu*3600, units.DimTime).Show = "h"
 	r.AddWords("exposure_basis", "Exposure from", "OSHA 1910.95 Table G-16: 8 h / 2^((L−90)/5) up to 115 dBA, not permitted above; EU 2003/10/EC: time to reach L_EX,8h = 87 dB(A)")
 	lvl := fmt.Sprintf("%.1f dB(A)", L)
 	switch {
@@ -122,7 +123,7 @@ func exposureRows(r *Result, L float64) {
 			lvl+" is above "+fmt.Sprintf("%g dBA", safety.OSHAMaxLevel)+", the highest level of OSHA 1910.95 Table G-16: no exposure is permitted; stop the source or keep everyone out")
 	case L >= EUUpperActionLevel:
 		r.Check("exposure_check", "Level where people stand", "hearing protection", Warn,
-			fmt.Sprintf("%s is at or above the EU upper exposure action value %g dB(A): hearing protection must be worn; OSHA permits %s per day", lvl, EUUpperActionLevel, units.Format(osha.Hours*3600, units.DimTime)))
+			fmt.Sprintf("%s is at or above the EU upper exposure action value %g dB(A): hearing protection must be worn; OSHA permits %s per day", lvl, EUUpperActionLevel, hours(osha.Hours*3600)))
 	case L >= EULowerActionLevel:
 		r.Check("exposure_check", "Level where people stand", "protection available", Warn,
 			fmt.Sprintf("%s is at or above the EU lower exposure action value %g dB(A): hearing protection must be made available", lvl, EULowerActionLevel))

@@ -38,7 +38,7 @@ var vesselSheet = &Sheet{
 			Hint: "extra wall kept for corrosion or wear, e.g. 1 mm"},
 		{Key: "code-family", Label: "Code family to compare with", Kind: Pick, Default: "asme",
 			Hint: "formulas only for ASME; the others show their reference", Choices: familyChoices()},
-		optional(SafetyPressureInput("mawp", "Vessel MAWP from the nameplate", "", "", "the rated maximum allowable working pressure of the whole vessel, e.g. 40 barg; leave empty when unknown")),
+		optional(SafetyPressureInput("mawp", "Vessel MAWP from the nameplate", "", "", "the whole vessel's rating, e.g. 40 barg; empty when unknown")),
 		optional(SafetyPressureInput("relief-set", "Relief set pressure", "", "", "set pressure of the relief valve or bursting disc, from its tag, e.g. 33 barg")),
 		{Key: "stress-ratio", Label: "Stress ratio, test to design temperature", Kind: Number, Default: "1",
 			Hint: "allowable stress at the test temperature / at the design temperature; 1 if unsure", Min: 0.01, Max: 100, Advanced: true},
