@@ -149,8 +149,10 @@ var errSolve = errors.New("design: no solution")
 //
 // Errors: bad input as *units.RangeError naming the field; an onset above
 // the available hot temperature, a tube longer than Target.MaxLength or a
-// frequency no tube of the design can reach as *UnreachableError with the
-// nearest design (also returned as the Result).
+// frequency no tube of the design can reach as *UnreachableError. The
+// error's Nearest is the nearest design that can be built: the design
+// itself, or for a tube too long the same stack in the longest tube. The
+// Result returned with it is the design found for the target.
 func Design(t Target, s *Settings) (Result, error) {
 	set := s.values()
 	gas, err := t.validate()

@@ -69,8 +69,8 @@ type HeatPumpResult struct {
 	// Pump is linear.HeatPump of Device at zero load and DriveFrequency.
 	Pump *linear.HeatPumpResult
 	// DriveFrequency is the resonance of the tube with its cold side at the
-	// reached cold temperature (linear.Mode, the start end rigid), Hz: the
-	// frequency at which the pressure-driven driver moves least.
+	// reached cold temperature (linear.Mode, the start end rigid), Hz:
+	// about where the pressure-driven driver needs the least motion.
 	DriveFrequency float64
 	// Span is ambient less the reached cold temperature at zero load, K;
 	// Margin is Span less the wanted span, K.
