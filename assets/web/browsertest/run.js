@@ -104,6 +104,26 @@ async function test(dir) {
       await page.screenshot({ path: path.join(process.env.SHOTS, "web-typed.png") });
     }
     check(!after.equals(before), "typing into a field changed the result shown below it");
+    const attrs = await page.evaluate(() => {
+      const t = document.querySelector("#giowindow textarea");
+      return t && [t.inputMode, t.autocomplete, t.getAttribute("autocorrect"), t.getAttribute("autocapitalize"), t.spellcheck].join(" ");
+    });
+    check(attrs === "text off off off false",
+      `the quantity field types without autocorrect, capitals or spell checking (inputmode, autocomplete, autocorrect, autocapitalize, spellcheck: ${attrs})`);
+
+    // A soft keyboard shrinks the page: the focused field must stay in view.
+    const low = JSON.parse(process.env.LOW_FIELD || "null") || { x: 200, y: 377 };
+    await page.touchscreen.tap(low.x, low.y);
+    await page.waitForTimeout(500);
+    const keyboardTop = 300;
+    await page.setViewportSize({ width: 412, height: keyboardTop });
+    await page.waitForTimeout(1000);
+    const caret = await page.evaluate(() => document.querySelector("#giowindow textarea").getBoundingClientRect().top);
+    // Below the app's 56 px top bar and above the keyboard.
+    check(caret > 60 && caret < keyboardTop - 24,
+      `the focused field stayed in view when the page shrank to ${keyboardTop} px (caret at ${caret.toFixed(0)} px)`);
+    await page.setViewportSize(phone.viewport);
+    await page.waitForTimeout(300);
 
     // Offline: the service worker's set must start the app with no network.
     await page.waitForFunction(async () => {
