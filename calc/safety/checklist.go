@@ -37,7 +37,7 @@ func Checklist() []Item {
 			Calc: CalcWallStress, Cautions: []string{CautionStress, CautionHotSurfaces}},
 		{ID: "relief", Title: "Relief device set at or below the MAWP",
 			Why:  "A regulator can fail open and a heated, closed volume rises in pressure. A relief valve or bursting disc that opens at or below the MAWP is what keeps a fault from becoming a rupture.",
-			Calc: CalcRelief},
+			Calc: CalcRelief, Cautions: []string{CautionReliefSizing}},
 		{ID: "test-pressure", Title: "Pressure test done or planned (liquid preferred)",
 			Why:  "A proof test above the working pressure finds weak joints before the gas goes in. A liquid test stores little energy; a gas test at the same pressure stores enough to turn a failure into a blast.",
 			Calc: CalcTestEnergy, Cautions: []string{CautionTestPressure, CautionStoredEnergy}},

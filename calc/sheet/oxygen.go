@@ -17,7 +17,7 @@ import (
 var oxygenSheet = &Sheet{
 	ID:      IDOxygen,
 	Title:   "Room oxygen",
-	Summary: "Oxygen left in a room after a gas release from a cylinder, the rig or both, against 19.5 % (safety)",
+	Summary: "Oxygen left in a room after a gas release from a cylinder, the rig or both, against the oxygen-deficient threshold (safety)",
 	Inputs: []Input{
 		{Key: "room", Label: "Room volume", Kind: Quantity, Dim: units.DimVolume, Example: "30 m3",
 			Hint: "free air volume of the room, e.g. 30 m³, 1000 ft³; ± or +- for an uncertainty", Min: 0, Max: 1e7, MinOpen: true, PM: true},
@@ -42,7 +42,7 @@ var oxygenSheet = &Sheet{
 			Hint: "fresh-air changes per hour, e.g. 2 /h; 0 when unknown", Min: 0, Max: 1},
 	},
 	About: "Oxygen fraction 20.9 % of air diluted by the release: displacement 20.9 % (1 − V/Vroom), well mixed 20.9 % e^(−V/Vroom), " +
-		"sealed room 20.9 %/(1 + V/Vroom). 19.5 % is the oxygen-deficient threshold of US OSHA 29 CFR 1910.134. " +
+		"sealed room 20.9 %/(1 + V/Vroom). " + oxygenLimit + " is the oxygen-deficient threshold of US OSHA 29 CFR 1910.134. " +
 		"A cylinder's release from its contents with the gas model's compressibility at the fill state (ISO 13443 reference state).",
 	Examples: []string{
 		"twcalc oxygen --release 9m3 --room 30m3 --model mixed --ventilation 2/h",
@@ -67,13 +67,13 @@ func roomModelChoices() []Choice {
 	return out
 }
 
-// releaseRequired is the reason when no release is given.
-var releaseRequired = fmt.Errorf("%w: give the gas released, a cylinder emptied into the room (release-from-cylinder with fill-pressure) or the rig's vessel (release-from-vessel with vessel-pressure)", ErrRequired)
+// errNoRelease is the reason when no release is given.
+var errNoRelease = fmt.Errorf("%w: give the gas released, a cylinder emptied into the room (release-from-cylinder with fill-pressure) or the rig's vessel (release-from-vessel with vessel-pressure)", ErrRequired)
 
 func runOxygen(v *Values) (*Result, error) {
 	cyl, ves := v.Has("release-from-cylinder"), v.Has("release-from-vessel")
 	if !v.Has("release") && !cyl && !ves {
-		return nil, v.Blame(releaseRequired, "release")
+		return nil, v.Blame(errNoRelease, "release")
 	}
 	r := &Result{}
 	mix := v.Gas("gas")
@@ -134,10 +134,10 @@ func runOxygen(v *Values) (*Result, error) {
 	r.AddPM("oxygen_fraction", "Oxygen after the release", o.Fraction, sig[0], units.DimNone).Show = "%"
 	oxygenCheck(r, o)
 	r.Add("threshold", "Oxygen-deficient below", safety.OxygenDeficient, units.DimNone).Show = "%"
-	r.AddPM("max_release", "Largest release keeping 19.5 %", o.MaxRelease, sig[1], units.DimVolume)
+	r.AddPM("max_release", "Largest release keeping "+oxygenLimit, o.MaxRelease, sig[1], units.DimVolume)
 	r.Warn(o.Warnings...)
 	if o.Ventilated {
-		r.Add("recovery_time", "Back to 19.5 % after", o.RecoveryTime, units.DimTime).Show = "min"
+		r.Add("recovery_time", "Back to "+oxygenLimit+" after", o.RecoveryTime, units.DimTime).Show = "min"
 	} else if o.Deficient {
 		r.Warn("no ventilation given: the oxygen stays low until the room is ventilated (give the ventilation to estimate the recovery time)")
 	}
@@ -155,9 +155,12 @@ func runOxygen(v *Values) (*Result, error) {
 	return r, nil
 }
 
-// oxygenCheck is the check of the oxygen left against 19.5 %.
+// oxygenLimit is safety.OxygenDeficient in words, "19.5 %".
+var oxygenLimit = fmt.Sprintf("%.1f %%", 100*safety.OxygenDeficient)
+
+// oxygenCheck is the check of the oxygen left against oxygenLimit.
 func oxygenCheck(r *Result, o safety.Oxygen) {
-	limit := fmt.Sprintf("%.1f %%", 100*safety.OxygenDeficient)
+	limit := oxygenLimit
 	left := fmt.Sprintf("%.1f %%", 100*o.Fraction)
 	words, out := "above "+limit, Pass
 	why := "oxygen " + left + " after the release (" + o.Model.Label() + "), at or above the " + limit + " oxygen-deficient threshold of US OSHA 29 CFR 1910.134"
