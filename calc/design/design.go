@@ -172,6 +172,7 @@ func Design(t Target, s *Settings) (Result, error) {
 	if rhLo > rhHi {
 		return Result{}, units.NewRangeError("smallest gap", t.MinGap, 0, gapOf(t.Stack, rhHi, t.wire()), "m")
 	}
+	sv.rhLo = rhLo
 	res := Result{Target: t, ThermalDepth: w.deltaKappa, ViscousDepth: w.deltaNu, Wavelength: w.lambda}
 	start := t.startGeometry(w, set.DriveRatio, rhLo, rhHi)
 	res.Start = start
@@ -217,6 +218,9 @@ type solver struct {
 	highest float64
 	// fast is the tabulated gas of the search's solves (tableGas).
 	fast linear.Gas
+	// rhLo is the smallest hydraulic radius the kind and the smallest gap
+	// allow, m.
+	rhLo float64
 }
 
 // onset solves the onset of geometry g, warm-started from the last answer.
@@ -338,11 +342,16 @@ func (sv *solver) check(res *Result) error {
 		return &UnreachableError{Nearest: *res, Problem: fmt.Sprintf("the nearest design sings at %s, not within 1 %% of %s", units.Format(on.Frequency, units.DimFrequency), units.Format(t.Frequency, units.DimFrequency))}
 	}
 	if res.Margin < 0 {
+		why := "A higher mean pressure, a wider tube or a hotter heater may reach it"
+		if g := res.Geometry; t.MinGap > 0 && g.HydraulicRadius <= sv.rhLo*(1+1e-3) {
+			why = fmt.Sprintf("The smallest gap you can make, %s, holds the stack's pores at %.1f δκ, wider than the 1–2 δκ that start lowest; a finer stack, a higher mean pressure or a hotter heater may reach it",
+				mm(t.MinGap, 2), g.HydraulicRadius/res.ThermalDepth)
+		}
 		return &UnreachableError{Nearest: *res, Problem: fmt.Sprintf(
-			"with %s at %s in a %s tube, the lowest onset found is %s, above the %s the heater reaches; the nearest design (returned) needs %s more. A higher mean pressure, a wider tube or a hotter heater may reach it",
+			"with %s at %s in a %s tube, the lowest onset found is %s, above the %s the heater reaches; the nearest design (returned) needs %s more. %s",
 			t.Gas, pressureText(t.MeanPressure), mm(t.Diameter, 1),
 			units.Format(on.HotTemperature, units.DimTemperature), units.Format(t.HotTemperature, units.DimTemperature),
-			units.Format(-res.Margin, units.DimTemperatureDifference))}
+			units.Format(-res.Margin, units.DimTemperatureDifference), why)}
 	}
 	if t.MaxLength > 0 && res.Geometry.Length() > t.MaxLength {
 		return sv.tooLong(res)

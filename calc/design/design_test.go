@@ -212,6 +212,19 @@ func TestDesignUnreachable(t *testing.T) {
 			t.Errorf("the nearest design is off its frequency by %.3g", ue.Nearest.FrequencyError)
 		}
 	})
+	t.Run("gap too wide", func(t *testing.T) {
+		t.Parallel()
+		tg := doneWhen
+		tg.MinGap = 5e-3 // about 36 δκ
+		_, err := Design(tg, &Settings{NoSensitivity: true})
+		var ue *UnreachableError
+		if !errors.As(err, &ue) || !strings.Contains(err.Error(), "smallest gap") {
+			t.Fatalf("err = %v, want an unreachable target that names the smallest gap", err)
+		}
+		if g := ue.Nearest.Geometry.Gap; math.Abs(g-5e-3) > 5e-6 {
+			t.Errorf("nearest design's gap %.4f mm, want the smallest, 5 mm", g*1e3)
+		}
+	})
 	t.Run("tube too long", func(t *testing.T) {
 		t.Parallel()
 		tg := doneWhen
