@@ -48,16 +48,15 @@ func (g Geometry) Length() float64 {
 // Porosities used for the stack kinds whose porosity the design does not
 // derive, and for the heat exchangers' fins (common practice, no published
 // source: plate stacks and ceramic cell stacks are commonly 70–80 % open,
-// finned exchangers about 60–70 %; the built-in example engine has 76 %
-// and 62 %).
+// finned exchangers about 60–70 %).
 const (
 	stackPorosity     = 0.75
 	exchangerPorosity = 0.7
 )
 
 // Packing limits of screens and metal wool, as porosity (common practice,
-// no published source: stacked screens are about 60–80 % open, metal wool
-// about 70–98 %).
+// no published source: stacked screens are about 60–90 % open, the coarse
+// meshes of stacks at the open end; metal wool about 70–98 %).
 const (
 	screenPorosityMin, screenPorosityMax = 0.6, 0.9
 	woolPorosityMin, woolPorosityMax     = 0.7, 0.98
