@@ -15,8 +15,8 @@ const IDListen ID = "listen"
 // listenSheet is the recording calculator: from a WAV recording of the
 // tube, its resonance frequency with ±, the ring-down's decay time and Q,
 // the harmonics, and frequency and level against time (calc/listen's
-// Analyze). Terminal only for now: the app's screen (open a file, record
-// from the microphone) is separate work.
+// Analyze). The app's screen opens a file by its path or, in the browser,
+// records from the microphone and analyses the recording with ListenTo.
 var listenSheet = &Sheet{
 	ID:      IDListen,
 	Title:   "Listen to the tube",
@@ -58,6 +58,29 @@ func runListen(v *Values) (*Result, error) {
 	if err != nil {
 		return nil, v.Blame(err, "file")
 	}
+	return analyseListen(v, rec)
+}
+
+// ListenTo returns the recording calculator analysing rec instead of
+// reading the file its "file" input names: what the app uses for a
+// recording it holds in memory (made from the microphone in the browser).
+// The "file" text stays the recording's name; the other inputs, the rows,
+// warnings and cautions are the description's own. rec must not change
+// while the sheet is in use.
+func ListenTo(rec *listen.Recording) *Sheet {
+	s := *listenSheet
+	s.Run = func(v *Values) (*Result, error) {
+		if rec == nil {
+			return nil, v.Blame(errors.New("no recording to analyse"), "file")
+		}
+		return analyseListen(v, rec)
+	}
+	return &s
+}
+
+// analyseListen runs calc/listen's Analyze on rec with the band of v and
+// writes the rows.
+func analyseListen(v *Values, rec *listen.Recording) (*Result, error) {
 	nyquist := rec.SampleRate / 2
 	s := &listen.Settings{MinFrequency: v.SI("lowest")}
 	if s.MinFrequency >= nyquist {
