@@ -14,6 +14,8 @@ var _ = addAgreeCases(
 		"temperature": "300 K ± 1 K", "measured-frequency": "480 Hz ± 2 Hz", "length": "0.5 m", "radius": "10 mm"}},
 	agreeCase{id: sheet.IDDiagnose, name: "hot tube", texts: map[string]string{"gas": "air", "ends": "closed-closed", "end-correction": "none",
 		"length": "1 m", "radius": "20 mm", "measured-frequency": "250 Hz"}},
+	agreeCase{id: sheet.IDDiagnose, name: "humid air, wall losses", texts: map[string]string{"gas": "air", "humidity": "50 %", "losses": "wall",
+		"measured-frequency": "280 Hz +- 1 Hz", "length": "300 mm", "radius": "3 mm"}},
 	agreeCase{id: sheet.IDDiagnose, name: "out of band", texts: map[string]string{"gas": "air", "length": "0.3 m", "radius": "10 mm",
 		"measured-frequency": "5000 Hz"}, errKey: "measured-frequency"},
 	agreeCase{id: sheet.IDDiagnose, name: "fraction of a mixture", texts: map[string]string{"find": "fraction", "gas": "helium:0.5,argon:0.5",

@@ -53,7 +53,7 @@ func (s *diagnoseScreen) inputKeys() []string {
 	if s.form.Text("find") == sheet.FindFraction {
 		keys = append(keys, "second-gas", "temperature")
 	}
-	return append(keys, "pressure", "non-ideal")
+	return append(keys, "pressure", "humidity", "non-ideal", "losses")
 }
 
 // Layout implements Screen.

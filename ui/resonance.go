@@ -87,16 +87,17 @@ func (s *resonanceScreen) frequency() float64 {
 func (s *resonanceScreen) inputKeys() []string {
 	switch s.kind() {
 	case sheet.ResonatorZones:
-		return []string{"resonator", "ends", "zones", "modes", "end-correction", "gas", "pressure", "non-ideal"}
+		return []string{"resonator", "ends", "zones", "modes", "end-correction", "gas", "pressure", "humidity", "non-ideal", "losses"}
 	case sheet.ResonatorHelmholtz:
-		return []string{"resonator", "volume", "neck-length", "neck-radius", "end-correction", "gas", "temperature", "pressure", "non-ideal"}
+		return []string{"resonator", "volume", "neck-length", "neck-radius", "end-correction", "gas", "temperature", "pressure", "humidity",
+			"non-ideal"}
 	}
 	given := "length"
 	if s.form.Text("solve") == "length" {
 		given = "frequency"
 	}
-	return []string{"resonator", "solve", "ends", given, "radius", "end-correction", "mode", "gas", "temperature", "pressure", "non-ideal",
-		"sweep", "second-gas"}
+	return []string{"resonator", "solve", "ends", given, "radius", "end-correction", "mode", "gas", "temperature", "pressure", "humidity",
+		"non-ideal", "losses", "sweep", "second-gas"}
 }
 
 // Layout implements Screen.

@@ -41,7 +41,9 @@ var diagnoseSheet = &Sheet{
 		secondGasInput("Second gas (contaminant or admixture)", "the noble gas mixed into the working gas (a pure noble gas) when finding a fraction: argon"),
 		knownTemperatureInput(),
 		MeanPressureInput("pressure", "Mean pressure", "1 atm"),
+		humidityInput(),
 		NonIdealInput(),
+		lossesInput(),
 	},
 	About: "The tube model of the Tube resonance calculator solved backwards with Brent's method over the gas " +
 		"model's temperature range, or over mole fractions 0 to 1. The ± of every input is carried to the answer to " +
@@ -82,7 +84,11 @@ func runDiagnose(v *Values) (*Result, error) {
 	}
 	f, p := v.Q("measured-frequency"), v.Q("pressure")
 	u.Frequency, u.Pressure = f.Uncertainty, p.Uncertainty
-	s := resonator.Setup{Tube: tube, Gas: v.Gas("gas"), Pressure: p.Value, GasOptions: GasOptions(v), U: u}
+	if err := checkHumidity(v); err != nil {
+		return nil, err
+	}
+	s := resonator.Setup{Tube: tube, Gas: v.Gas("gas"), Pressure: p.Value, GasOptions: GasOptions(v), U: u,
+		RelativeHumidity: v.SI("humidity")}
 	r := &Result{}
 	if v.PickKey("find") == FindFraction {
 		first, second, err := binaryPair(v)
@@ -126,5 +132,5 @@ func diagnoseBlame(v *Values, err error, bySubject map[units.Subject]string) err
 	if errors.Is(err, resonator.ErrNoSolution) {
 		return v.Blame(err, "measured-frequency")
 	}
-	return v.BlameSubject(err, bySubject)
+	return noResonanceBlame(v, v.BlameSubject(err, bySubject), "radius")
 }

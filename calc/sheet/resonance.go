@@ -52,7 +52,9 @@ var resonanceSheet = &Sheet{
 		GasInput("gas", "air"),
 		tubeTemperatureInput("Mean gas temperature"),
 		MeanPressureInput("pressure", "Mean pressure", "1 atm"),
+		humidityInput(),
 		NonIdealInput(),
+		lossesInput(),
 		sweepInput(),
 		secondGasInput("Second gas of the fraction sweep", "mixed into the working gas (a pure noble gas) for a fraction sweep: argon"),
 	),
@@ -152,7 +154,11 @@ func runTube(v *Values) (*Result, error) {
 	}
 	T, p := v.Q("temperature"), v.Q("pressure")
 	u.Temperature, u.Pressure = T.Uncertainty, p.Uncertainty
-	s := resonator.Setup{Tube: tube, Gas: v.Gas("gas"), Temperature: T.Value, Pressure: p.Value, GasOptions: GasOptions(v), U: u}
+	if err := checkHumidity(v); err != nil {
+		return nil, err
+	}
+	s := resonator.Setup{Tube: tube, Gas: v.Gas("gas"), Temperature: T.Value, Pressure: p.Value, GasOptions: GasOptions(v), U: u,
+		RelativeHumidity: v.SI("humidity")}
 	var res resonator.Result
 	if byFreq {
 		if err := tubeRequirePositive(v, "frequency"); err != nil {
@@ -164,7 +170,7 @@ func runTube(v *Values) (*Result, error) {
 		res, err = s.SolveFrequency()
 	}
 	if err != nil {
-		err = v.BlameSubject(err, tubeGasSubjects)
+		err = noResonanceBlame(v, v.BlameSubject(err, tubeGasSubjects), "radius")
 		if _, ok := AsFieldError(err); !ok && byFreq && tubeIsRangeError(err) {
 			// with every size checked above, the one range the length
 			// solve can leave is the frequency's: too high for the radius
@@ -177,6 +183,13 @@ func runTube(v *Values) (*Result, error) {
 		r.AddPM("length", "Tube length to cut", res.Length, res.LengthSigma, units.DimLength)
 	} else {
 		r.AddPM("frequency", "Resonance frequency", res.Frequency, res.FrequencySigma, units.DimFrequency)
+	}
+	if tube.Losses == resonator.WallLosses {
+		r.Rows[0].Note = "with the wall losses (Rott's complex wave number)"
+		if !byFreq {
+			r.Add("loss_free_frequency", "Loss-free frequency", res.LossFreeFrequency, units.DimFrequency).Note =
+				"the same tube at the adiabatic sound speed"
+		}
 	}
 	addTubeRows(r, tube, res, u.Radius > 0)
 	r.Warn(res.Warnings...)

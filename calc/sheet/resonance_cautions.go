@@ -1,7 +1,8 @@
 package sheet
 
 import (
-	"tubewright/calc/safety"
+	"fmt"
+
 	"tubewright/calc/units"
 )
 
@@ -20,23 +21,22 @@ const PressurisedGauge = 0.5e5
 
 // tubeCautions adds the cautions of a tube filled with gas at the highest
 // temperature hot (K) and mean pressure p (Pa, absolute): hot parts above
-// HotGasTemperature, pressure above PressurisedGauge. The same words on
-// every calculator that uses them.
+// HotGasTemperature, pressure above PressurisedGauge. They are worded as
+// the engine-onset cautions (OnsetCautions), so that the same hazard reads
+// the same on every calculator.
 func tubeCautions(r *Result, hot, p float64) {
 	if hot > HotGasTemperature {
-		r.Caution("Hot parts: the gas is at about " + tubeInUnit(hot, units.DimTemperature, "degC") +
-			", above " + tubeInUnit(HotGasTemperature, units.DimTemperature, "degC") + "; the tube and its fittings may be as hot. " +
-			safety.CautionHotSurfaces)
+		r.Caution(fmt.Sprintf("Hot parts: the gas in the tube is at about %s; heaters, exchangers and tube walls at this temperature burn skin and can ignite nearby material. Let parts cool before touching; follow your lab's hot-work rules.",
+			withAlt(hot, units.DimTemperature, "degC")))
 	}
 	if p-units.StandardAtmosphere > PressurisedGauge {
-		r.Caution("Pressure: the mean pressure " + tubeInUnit(p, units.DimPressure, "bar") + " absolute is above " +
-			tubeInUnit(PressurisedGauge, units.DimPressure, "bar") + " gauge, where pressure-equipment rules begin. " + safety.CautionGeneral)
-		r.Caution(safety.CautionStoredEnergy)
+		r.Caution(fmt.Sprintf("Pressure: the tube is charged to %s absolute, above %s gauge, where pressure-equipment rules begin; the vessel must be rated for it at its working temperature (check its wall with the vessel calculation). Defer to local pressure-vessel codes and licensed practice.",
+			tubeInUnit(p, units.DimPressure, "bar"), tubeInUnit(PressurisedGauge, units.DimPressure, "bar")))
 	}
 }
 
-// tubeInUnit formats v (SI, of dimension dim) in unit, or in the SI unit when
-// that fails.
+// tubeInUnit formats v (SI, of dimension dim) in unit, or in the SI unit
+// when that fails.
 func tubeInUnit(v float64, dim units.Dimension, unit string) string {
 	if s, err := units.FormatInDim(v, dim, unit); err == nil {
 		return s

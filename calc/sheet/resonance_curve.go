@@ -50,7 +50,9 @@ func curveSetup(v *Values, length float64) resonator.Setup {
 		Mode:       v.Count("mode"),
 		Length:     length,
 		Radius:     v.SI("radius"),
-	}, Gas: v.Gas("gas"), Temperature: v.SI("temperature"), Pressure: v.SI("pressure"), GasOptions: GasOptions(v)}
+		Losses:     v.Pick("losses").(resonator.Losses),
+	}, Gas: v.Gas("gas"), Temperature: v.SI("temperature"), Pressure: v.SI("pressure"), GasOptions: GasOptions(v),
+		RelativeHumidity: v.SI("humidity")}
 }
 
 func tubeCurve(res *Result) (Curve, bool) {

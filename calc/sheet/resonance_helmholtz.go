@@ -65,7 +65,6 @@ func runHelmholtz(v *Values) (*Result, error) {
 	if err := tubeRequirePositive(v, "volume", "neck-length", "neck-radius", "temperature", "pressure"); err != nil {
 		return nil, err
 	}
-	mix, opts := v.Gas("gas"), GasOptions(v)
 	outer := v.Pick("end-correction").(resonator.EndCorrection)
 	keys := []string{"volume", "neck-length", "neck-radius", "temperature", "pressure"}
 	x, u := make([]float64, len(keys)), make([]float64, len(keys))
@@ -73,9 +72,9 @@ func runHelmholtz(v *Values) (*Result, error) {
 		x[i], u[i] = v.SI(k), v.Q(k).Uncertainty
 	}
 	solve := func(x []float64) (resonator.HelmholtzResult, error) {
-		g, err := mix.Properties(units.Temperature(x[3]), units.Pressure(x[4]), opts)
+		g, err := tubeGas(v, x[3], x[4])
 		if err != nil {
-			return resonator.HelmholtzResult{}, v.BlameSubject(err, tubeGasSubjects)
+			return resonator.HelmholtzResult{}, err
 		}
 		h := resonator.Helmholtz{Volume: x[0], NeckLength: x[1], NeckRadius: x[2], Outer: outer}
 		res, err := resonator.HelmholtzFrequency(h, g)

@@ -104,6 +104,7 @@ func readTube(v *Values, withLength bool) (resonator.Tube, resonator.Uncertainty
 		Correction: v.Pick("end-correction").(resonator.EndCorrection),
 		Mode:       v.Count("mode"),
 		Radius:     v.SI("radius"),
+		Losses:     v.Pick("losses").(resonator.Losses),
 	}
 	u := resonator.Uncertainty{Radius: v.Q("radius").Uncertainty}
 	if withLength {

@@ -152,11 +152,15 @@ func zonesInputs() []Input {
 
 // ZoneMode is one mode of a zoned tube in the "modes" result: JSON
 // {"mode":1,"frequency_Hz":..,"travel_time_frequency_Hz":..,"difference_Hz":..}.
+// With wall losses it also has "loss_free_frequency_Hz" and "q" (the
+// side walls' quality factor).
 type ZoneMode struct {
 	Mode       int     `json:"mode"`
 	Frequency  float64 `json:"frequency_Hz"`
 	TravelTime float64 `json:"travel_time_frequency_Hz"`
 	Difference float64 `json:"difference_Hz"`
+	LossFree   float64 `json:"loss_free_frequency_Hz,omitempty"`
+	Q          float64 `json:"q,omitempty"`
 }
 
 // zoneModesText lists the modes for people: "1: 347.6 Hz (travel time
@@ -183,38 +187,76 @@ func runZones(v *Values) (*Result, error) {
 	if err := tubeRequirePositive(v, "pressure"); err != nil {
 		return nil, err
 	}
-	mix, p, opts := v.Gas("gas"), v.SI("pressure"), GasOptions(v)
+	if err := checkHumidity(v); err != nil {
+		return nil, err
+	}
+	p := v.Q("pressure")
 	// Evaluate each zone's gas here, so that a temperature outside the gas
 	// model's range marks its own zone.
 	hot := 0.0
 	for i, z := range zs {
-		if _, err := mix.Properties(units.Temperature(z.Temperature), units.Pressure(p), opts); err != nil {
-			if re, ok := asRangeError(err); ok && re.Subject == units.SubjectPressure {
-				return nil, v.Blame(err, "pressure")
+		if _, err := tubeGas(v, z.Temperature, p.Value); err != nil {
+			if fe, ok := AsFieldError(err); ok && (fe.Key == "pressure" || fe.Key == "humidity") {
+				return nil, err
+			}
+			// the zone's temperature is the one input of this evaluation
+			// that is the zone's own
+			if fe, ok := AsFieldError(err); ok {
+				err = fe.Err
 			}
 			return nil, v.Blame(&ZoneError{Zone: i, Part: ZoneTemperature, Err: err}, "zones")
 		}
 		hot = max(hot, z.Temperature)
 	}
 	zt := resonator.ZonedTube{Ends: v.Pick("ends").(resonator.Ends), Correction: v.Pick("end-correction").(resonator.EndCorrection),
-		Zones: zs, Gas: mix, Pressure: p, GasOptions: opts}
-	res, err := zt.Modes(v.Count("modes"))
+		Losses: v.Pick("losses").(resonator.Losses), Zones: zs, Gas: v.Gas("gas"), Pressure: p.Value, GasOptions: GasOptions(v),
+		RelativeHumidity: v.SI("humidity")}
+	n := v.Count("modes")
+	res, err := zt.Modes(n)
 	if err != nil {
 		return nil, v.Blame(err, "zones")
 	}
+	// a typed ± on the pressure is carried to the lowest mode (through
+	// the real-gas correction and the wall losses; nothing without them)
+	sig, ok := Spread(func(x, out []float64) error {
+		zz := zt
+		zz.Pressure = x[0]
+		rr, err := zz.Modes(1)
+		if err != nil {
+			return err
+		}
+		m := rr.Modes[0]
+		out[0], out[1], out[2] = m.Frequency, m.TravelTime, m.Difference
+		return nil
+	}, []float64{p.Value}, []float64{p.Uncertainty}, 3)
 	r := &Result{}
+	for k, name := range []string{"lowest mode", "travel-time estimate", "difference"} {
+		if !ok[k] {
+			r.Warn(noSpreadWarning(name))
+		}
+	}
 	m := res.Modes[0]
-	r.Add("frequency", "Lowest mode", m.Frequency, units.DimFrequency).Note = "exact plane-wave mode of the zoned tube"
-	r.Add("travel_time_frequency", "Travel-time estimate of the lowest mode", m.TravelTime, units.DimFrequency).Note =
+	note := "exact plane-wave mode of the zoned tube"
+	if zt.Losses == resonator.WallLosses {
+		note += ", with the wall losses (Rott's complex wave number)"
+	}
+	r.AddPM("frequency", "Lowest mode", m.Frequency, sig[0], units.DimFrequency).Note = note
+	r.AddPM("travel_time_frequency", "Travel-time estimate of the lowest mode", m.TravelTime, sig[1], units.DimFrequency).Note =
 		"adds up the time sound takes through each zone, ignoring reflections at the joints"
-	r.Add("difference", "Estimate minus exact", m.Difference, units.DimFrequency).Note = zoneDifferenceNote(m)
+	r.AddPM("difference", "Estimate minus exact", m.Difference, sig[2], units.DimFrequency).Note = zoneDifferenceNote(m)
 	list := make([]ZoneMode, len(res.Modes))
 	for i, m := range res.Modes {
-		list[i] = ZoneMode{m.Number, m.Frequency, m.TravelTime, m.Difference}
+		list[i] = ZoneMode{Mode: m.Number, Frequency: m.Frequency, TravelTime: m.TravelTime, Difference: m.Difference}
+		if zt.Losses == resonator.WallLosses {
+			list[i].LossFree = m.LossFree
+			if finite(m.Q) {
+				list[i].Q = m.Q
+			}
+		}
 	}
 	r.AddObject("modes", fmt.Sprintf("First %d modes", len(list)), list, zoneModesText(list))
 	r.Warn(res.Warnings...)
-	tubeCautions(r, hot, p)
+	tubeCautions(r, hot, p.Value)
 	return r, nil
 }
 
