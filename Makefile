@@ -24,7 +24,7 @@ BROWSER_PKGS := chromium fonts-dejavu-core
 SERVE_ADDR ?= 127.0.0.1:8080
 
 .PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
-	web serve-web web-size browser-deps browser-test shots bench fuzz clean
+	web serve-web web-size browser-deps browser-test apk shots bench fuzz clean
 
 all: test
 
@@ -120,6 +120,12 @@ browser-deps:
 browser-test: web browser-deps
 	$(GO) run ./assets/web/pack -check $(WEB_DIR)
 	NODE_PATH=$(CURDIR)/$(NPM_DIR)/node_modules node assets/web/browsertest/run.js test $(WEB_DIR)
+
+## apk: the Android package in build/tubewright.apk with Gio's gogio (pinned),
+## where an Android SDK, NDK and JDK are installed; otherwise says what to install
+apk: check-go
+	$(GO) run ./assets/android -count "$$(git rev-list --count HEAD 2>/dev/null || echo 1)" \
+		-stamp "$(VERSION)" -o build/tubewright.apk
 
 ## shots: screenshots of every screen at phone, tablet and desktop sizes, in build/shots
 shots: deps
