@@ -41,17 +41,20 @@ func (g scipyGas) law() linear.PowerLawGas {
 	return linear.PowerLawGas{Label: g.Label, MolarMass: g.MolarMass, Gamma: g.Gamma, T0: g.T0, Mu0: g.Mu0, K0: g.K0, Exponent: g.Exponent}
 }
 
+// designEntry is one designed device of testdata/design_devices.json.
+type designEntry struct {
+	Name            string            `json:"name"`
+	TargetFrequency float64           `json:"target_frequency"`
+	HotTemperature  float64           `json:"available_hot_temperature"`
+	Gas             scipyGas          `json:"gas"`
+	Device          linear.DeviceFile `json:"device"`
+	DesignOnset     float64           `json:"design_onset"`
+	DesignFrequency float64           `json:"design_frequency"`
+}
+
 type designDevices struct {
-	Generator string `json:"generator"`
-	Designs   []struct {
-		Name            string            `json:"name"`
-		TargetFrequency float64           `json:"target_frequency"`
-		HotTemperature  float64           `json:"available_hot_temperature"`
-		Gas             scipyGas          `json:"gas"`
-		Device          linear.DeviceFile `json:"device"`
-		DesignOnset     float64           `json:"design_onset"`
-		DesignFrequency float64           `json:"design_frequency"`
-	} `json:"designs"`
+	Generator string        `json:"generator"`
+	Designs   []designEntry `json:"designs"`
 }
 
 type designRef struct {
@@ -85,15 +88,7 @@ func TestWriteDesignDevices(t *testing.T) {
 			t.Fatalf("%s: %v", c.name, err)
 		}
 		g := c.gas
-		out.Designs = append(out.Designs, struct {
-			Name            string            `json:"name"`
-			TargetFrequency float64           `json:"target_frequency"`
-			HotTemperature  float64           `json:"available_hot_temperature"`
-			Gas             scipyGas          `json:"gas"`
-			Device          linear.DeviceFile `json:"device"`
-			DesignOnset     float64           `json:"design_onset"`
-			DesignFrequency float64           `json:"design_frequency"`
-		}{c.name, c.t.Frequency, c.t.HotTemperature, scipyGas{g.Label, g.MolarMass, g.Gamma, g.T0, g.Mu0, g.K0, g.Exponent}, r.File, r.Onset.HotTemperature, r.Onset.Frequency})
+		out.Designs = append(out.Designs, designEntry{c.name, c.t.Frequency, c.t.HotTemperature, scipyGas{g.Label, g.MolarMass, g.Gamma, g.T0, g.Mu0, g.K0, g.Exponent}, r.File, r.Onset.HotTemperature, r.Onset.Frequency})
 	}
 	b, err := json.MarshalIndent(out, "", " ")
 	if err != nil {
