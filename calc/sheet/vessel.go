@@ -107,7 +107,8 @@ var vesselRows = []struct {
 }
 
 // vesselNumbers computes the rows of vesselRows from x = (P gauge, ri, t,
-// S); E and c are fixed. thinOK and asme say which were computed.
+// S); E and c are fixed. The thin-wall rows are zero when thinErr is set,
+// the minimum wall when asme is false or no wall can hold P (shell.NoWall).
 func vesselNumbers(x []float64, E, c float64, asme bool) (out []float64, lame, thin safety.WallStress, shell safety.Shell, thinErr, err error) {
 	P := safety.GaugePressure(x[0])
 	out = make([]float64, len(vesselRows))
