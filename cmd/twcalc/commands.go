@@ -21,24 +21,9 @@ var commands = terminalCommands()
 func terminalCommands() []command {
 	var out []command
 	for _, e := range sheet.Catalog() {
-		if e.Place&sheet.InTerminal == 0 {
-			continue
-		}
-		if e.Sheet != nil {
+		if e.Place&sheet.InTerminal != 0 {
 			out = append(out, sheetCommand(e.Sheet))
-			continue
 		}
-		run, ok := legacyCommands[e.ID]
-		if !ok {
-			panic("twcalc: no command for catalog entry " + string(e.ID))
-		}
-		out = append(out, command{name: string(e.ID), summary: legacySummaries[e.ID], run: run})
 	}
 	return append(out, libraryCommands...)
 }
-
-// legacyCommands are the commands not yet built from a description.
-var legacyCommands = map[sheet.ID]func(args []string) (*report, error){}
-
-// legacySummaries are the help lines of the legacy commands.
-var legacySummaries = map[sheet.ID]string{}

@@ -5,75 +5,75 @@ import (
 	"encoding/json"
 	"errors"
 	"math"
+	"strconv"
 	"strings"
 	"testing"
 
+	"tubewright/calc/sheet"
 	"tubewright/calc/units"
 )
 
-// probeCommands is a command table for testing the framework on its own,
-// independent of any physics: "probe" declares one flag of each kind and
-// echoes what it read; "fails" returns a computation error; "nan" adds a
+// probeSheets are calculators for testing the terminal front end on its
+// own, independent of any physics: "probe" has one input of each kind and
+// repeats what it read; "fails" returns a computation error; "nan" adds a
 // non-finite result; "sweep" attaches a table.
-func probeCommands() []command {
-	return []command{
-		{"probe", "reads one flag of each kind", runProbe},
-		{"fails", "always fails to compute", func([]string) (*report, error) {
-			return nil, errors.New("no resonance found between 10 Hz and 10 kHz")
-		}},
-		{"nan", "adds a result that is not finite", func(args []string) (*report, error) {
-			fl := newFlags("nan")
-			if err := fl.parse(args); err != nil {
-				return nil, err
-			}
-			r := newReport()
-			r.add("length", math.NaN(), units.DimLength)
-			return r, nil
-		}},
-		{"sweep", "attaches a table", func(args []string) (*report, error) {
-			fl := newFlags("sweep")
-			if err := fl.parse(args); err != nil {
-				return nil, err
-			}
-			r := newReport()
-			r.table([]string{"length_m", "frequency_Hz"}, [][]float64{{0.147, 578.2}, {0.2, 425}})
-			r.caution("test caution")
-			return r, nil
-		}},
-	}
+var probeSheets = []*sheet.Sheet{
+	{ID: "probe", Summary: "reads one input of each kind", Inputs: []sheet.Input{
+		{Key: "frequency", Label: "Frequency", Kind: sheet.Quantity, Dim: units.DimFrequency, PM: true, Min: 0, MinOpen: true, Max: 1e9, Hint: "a frequency"},
+		{Key: "pressure", Label: "Pressure", Kind: sheet.Quantity, Dim: units.DimPressure, Default: "1bar", Hint: "a pressure"},
+		{Key: "mode", Label: "Mode", Kind: sheet.Pick, Default: "engine", Choices: []sheet.Choice{{Key: "engine", Words: "Engine"}, {Key: "heat-pump", Words: "Heat pump"}}},
+		{Key: "points", Label: "Points", Kind: sheet.Count, Default: "11", Min: 2, Max: 1000},
+		{Key: "fraction", Label: "Fraction", Kind: sheet.Number, Default: "0.5", Min: 0, Max: 1},
+		{Key: "verbose", Label: "Verbose", Kind: sheet.Switch},
+		{Key: "label", Label: "Label", Kind: sheet.Text, Optional: true},
+		{Key: "file", Label: "File", Kind: sheet.Text, Optional: true, Positional: true},
+	}, Run: runProbe},
+	{ID: "plain", Summary: "one frequency, no positional argument", Inputs: []sheet.Input{
+		{Key: "frequency", Label: "Frequency", Kind: sheet.Quantity, Dim: units.DimFrequency, Default: "1 Hz"},
+	}, Run: func(*sheet.Values) (*sheet.Result, error) { return &sheet.Result{}, nil }},
+	{ID: "fails", Summary: "always fails to compute", Run: func(*sheet.Values) (*sheet.Result, error) {
+		return nil, errors.New("no resonance found between 10 Hz and 10 kHz")
+	}},
+	{ID: "nan", Summary: "adds a result that is not finite", Run: func(*sheet.Values) (*sheet.Result, error) {
+		r := &sheet.Result{}
+		r.Add("length", "Length", math.NaN(), units.DimLength)
+		return r, nil
+	}},
+	{ID: "sweep", Summary: "attaches a table", Run: func(*sheet.Values) (*sheet.Result, error) {
+		r := &sheet.Result{Table: &sheet.Table{Header: []string{"length_m", "frequency_Hz"}, Rows: [][]float64{{0.147, 578.2}, {0.2, 425}}}}
+		r.Caution("test caution")
+		return r, nil
+	}},
 }
 
-// runProbe is a test command: a quantity with an uncertainty, a pressure, a
-// choice, an integer, a float, a bool and a string; its results repeat the
-// inputs so the tests can see what the parser produced.
-func runProbe(args []string) (*report, error) {
-	fl := newFlags("probe")
-	f := fl.quantity("frequency", units.DimFrequency, "", "a frequency")
-	p := fl.quantity("pressure", units.DimPressure, "1bar", "a pressure")
-	mode := fl.choice("mode", []string{"engine", "heat-pump"}, "engine", "kind of device")
-	n := fl.integer("points", 11, 2, 1000, "number of points")
-	x := fl.float("fraction", 0.5, 0, 1, "a fraction")
-	b := fl.boolean("verbose", "say more")
-	s := fl.str("label", "", "a label")
-	if err := fl.parse(args); err != nil {
-		return nil, err
+func probeCommands() []command {
+	var cmds []command
+	for _, s := range probeSheets {
+		cmds = append(cmds, sheetCommand(s))
 	}
-	r := newReport()
-	fl.echo(r)
-	r.addPM("frequency", f.Value, f.Uncertainty, units.DimFrequency)
-	r.add("pressure", p.Value, units.DimPressure)
-	r.addValue("mode", *mode)
-	r.addValue("points", *n)
-	r.add("fraction", *x, units.DimNone)
-	r.addValue("verbose", *b)
-	r.addValue("label", *s)
-	r.addComplex("f_kappa", complex(0.25, -0.5))
-	if *b {
-		r.warn("a warning\nover two lines")
+	return cmds
+}
+
+// runProbe repeats the inputs as results so the tests can see what the
+// parser produced.
+func runProbe(v *sheet.Values) (*sheet.Result, error) {
+	r := &sheet.Result{}
+	f, p := v.Q("frequency"), v.Q("pressure")
+	r.AddPM("frequency", "Frequency", f.Value, f.Uncertainty, units.DimFrequency)
+	r.Add("pressure", "Pressure", p.Value, units.DimPressure)
+	r.AddWords("mode", "Mode", v.PickKey("mode"))
+	r.AddWords("points", "Points", strconv.Itoa(v.Count("points")))
+	r.Add("fraction", "Fraction", v.Number("fraction"), units.DimNone)
+	r.AddWords("verbose", "Verbose", strconv.FormatBool(v.On("verbose")))
+	r.AddWords("label", "Label", v.Text("label"))
+	r.AddWords("file", "File", v.Text("file"))
+	r.AddComplex("f_kappa", "f_κ", complex(0.25, -0.5))
+	if v.On("verbose") {
+		r.Warn("a warning\nover two lines")
 	}
-	r.caution("probe caution: defer to local codes")
+	r.Caution("probe caution: defer to local codes")
 	if p.Value > 100e5 {
-		return nil, fl.blame(units.NewRangeError("pressure", p.Value, 0, 100e5, "Pa"))
+		return nil, v.Blame(units.NewRangeError("pressure", p.Value, 0, 100e5, "Pa"), "pressure")
 	}
 	return r, nil
 }
@@ -97,10 +97,13 @@ func TestExitCodes(t *testing.T) {
 		// each string must appear in stderr (code != 0) or stdout (code 0)
 		want []string
 	}{
-		{"no args lists commands", nil, exitUsage, []string{"probe", "reads one flag"}},
+		{"no args lists commands", nil, exitUsage, []string{"probe", "reads one input"}},
 		{"help lists commands", []string{"help"}, exitOK, []string{"probe", "fails"}},
 		{"help of a command", []string{"help", "probe"}, exitOK, []string{"--frequency", "(required)", "--json"}},
-		{"-h of a command", []string{"probe", "-h"}, exitOK, []string{"--points N", "2 to 1000"}},
+		{"-h of a command", []string{"probe", "-h"}, exitOK, []string{"--points N", "2 to 1000", "FILE"}},
+		{"flags after the positional argument", []string{"probe", "dev.json", "--frequency", "1kHz"}, exitOK, []string{"dev.json"}},
+		{"two positional arguments", []string{"probe", "a.json", "b.json", "--frequency", "1kHz"}, exitUsage, []string{`unexpected argument "b.json"`}},
+		{"-- ends the flags", []string{"probe", "--frequency", "1kHz", "--", "-odd.json"}, exitOK, []string{"-odd.json"}},
 		{"unknown command", []string{"frobnicate"}, exitUsage, []string{`unknown command "frobnicate"`}},
 		{"unknown flag", []string{"probe", "--frequency", "1kHz", "--colour", "red"}, exitUsage, []string{"unknown flag --colour"}},
 		{"missing required flag", []string{"probe"}, exitUsage, []string{"--frequency is required"}},
@@ -117,7 +120,7 @@ func TestExitCodes(t *testing.T) {
 		{"bad choice", []string{"probe", "--frequency", "1Hz", "--mode", "fridge"}, exitUsage, []string{`--mode "fridge"`, "engine, heat-pump"}},
 		{"bad bool", []string{"probe", "--frequency", "1Hz", "--verbose=maybe"}, exitUsage, []string{`--verbose "maybe"`}},
 		{"flag given twice", []string{"probe", "--frequency", "1Hz", "--frequency", "2Hz"}, exitUsage, []string{"--frequency given 2 times"}},
-		{"space inside a value", []string{"probe", "--frequency", "578", "Hz"}, exitUsage, []string{`unexpected argument "Hz"`, "quote"}},
+		{"space inside a value", []string{"plain", "--frequency", "578", "Hz"}, exitUsage, []string{`unexpected argument "Hz"`, "quote"}},
 		{"range error from the computation names the flag", []string{"probe", "--frequency", "1Hz", "--pressure", "200bar"}, exitUsage, []string{`--pressure "200bar"`}},
 		{"computation failure", []string{"fails"}, exitFail, []string{"twcalc: no resonance found"}},
 		{"non-finite result", []string{"nan"}, exitFail, []string{"internal: result length is not finite"}},
@@ -216,7 +219,7 @@ func TestJSONShape(t *testing.T) {
 	if !ok || fin["typed"] != "567Hz+-8Hz" || fin["value"] != 567.0 || fin["unit"] != "Hz" {
 		t.Errorf("input frequency = %v, want typed text with SI value and unit", in["frequency"])
 	}
-	if in["mode"] != "engine" || in["points"] != 11.0 || in["verbose"] != false {
+	if in["mode"] != "engine" || in["points"] != 11.0 || in["verbose"] != false || in["fraction"] != 0.5 {
 		t.Errorf("defaults not echoed: %v", in)
 	}
 	if c := obj["cautions"].([]any); len(c) != 1 {

@@ -82,7 +82,7 @@ func runSheet(s *sheet.Sheet, args []string) (*report, error) {
 				text = "true"
 			}
 			if strings.TrimSpace(text) == "" {
-				return nil, &usageError{msg: fmt.Sprintf("--%s needs a value", key)}
+				return nil, &usageError{msg: fmt.Sprintf("--%s %q: empty; type a value", key, text)}
 			}
 			texts[key] = text
 		}
@@ -189,11 +189,18 @@ func sheetHelp(s *sheet.Sheet) string {
 		if in.Hint != "" {
 			b.WriteString(": " + in.Hint)
 		}
+		var notes []string
+		if (in.Kind == sheet.Count || in.Kind == sheet.Number) && (in.Min != 0 || in.Max != 0) {
+			notes = append(notes, fmt.Sprintf("%g to %g", in.Min, in.Max))
+		}
 		switch {
 		case in.Required():
-			b.WriteString(" (required)")
+			notes = append(notes, "required")
 		case in.Default != "":
-			fmt.Fprintf(&b, " (default %s)", in.Default)
+			notes = append(notes, "default "+in.Default)
+		}
+		if len(notes) > 0 {
+			b.WriteString(" (" + strings.Join(notes, ", ") + ")")
 		}
 		b.WriteString("\n")
 	}
