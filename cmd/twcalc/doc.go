@@ -37,7 +37,8 @@
 //	{"inputs":   {"temperature": {"value": 300, "unit": "K", "typed": "300K"}, ...},
 //	 "results":  {"sound_speed": {"value": 1019.3, "unit": "m/s"}, ...},
 //	 "warnings": ["..."],
-//	 "cautions": ["..."]}
+//	 "cautions": ["..."],
+//	 "verdicts": [{"check": "relief", "outcome": "fail", "why": "..."}]}
 //
 // A result may also carry "uncertainty" (same unit as value); a result that
 // is not a number has "unit": "", and a complex one has a value
@@ -59,15 +60,10 @@
 // Inf is never printed: a non-finite result is reported as an internal error
 // with exit status 1.
 //
-// # Adding a command
+// # Commands come from the calculators' descriptions
 //
-// A calculator adds its file cmd/twcalc/NAME.go with
-// func runNAME(args []string) (*report, error), and one line in the table
-// in commands.go. The function declares its flags with newFlags (quantity,
-// gas, choice, integer, float, boolean, str; positional for a file name),
-// calls parse, computes with the calc packages, and fills a report with
-// input, add, addPM, addValue, addComplex, warn, caution, or table for a
-// sweep. It never prints. fl.echo(r) copies every flag into the inputs;
-// fl.blame(err) turns a units.RangeError from a computation into a usage
-// error naming the flag.
+// Every calculator command is built from its description in calc/sheet
+// (flags, help, table, JSON, CSV); cmd/twcalc holds no per-calculator code.
+// Adding a calculator is described in DEVELOPERS.md. The commands setups,
+// log and run read the app's export file; --log-to FILE adds a result to it.
 package main

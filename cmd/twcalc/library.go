@@ -1,14 +1,10 @@
 package main
 
 import (
-	"errors"
 	"fmt"
-	"io/fs"
-	"os"
 	"sort"
 	"strconv"
 	"strings"
-	"time"
 
 	"tubewright/calc/sheet"
 	"tubewright/ui/store"
@@ -29,39 +25,14 @@ var libraryCommands = []command{
 	{"run", "run a named setup from an export file of the app", runSavedSetup},
 }
 
-// readLibrary reads an export file; a missing one is an empty library when
-// missingOK.
+// readLibrary reads an export file; every problem is a usage error naming
+// the file.
 func readLibrary(path string, missingOK bool) (*store.Library, error) {
-	data, err := os.ReadFile(path)
-	if missingOK && errors.Is(err, fs.ErrNotExist) {
-		return store.NewLibrary(), nil
-	}
+	lib, err := store.ReadLibraryFile(path, missingOK)
 	if err != nil {
 		return nil, &usageError{msg: fmt.Sprintf("%s: %v", quoteValue(path), err)}
 	}
-	lib, err := store.ParseLibrary(data)
-	if err != nil {
-		return nil, &usageError{msg: fmt.Sprintf("%s: %v; the file was left as it is", quoteValue(path), err)}
-	}
 	return lib, nil
-}
-
-// appendLog adds a result to the log of the export file at path, written
-// atomically; a damaged file is refused and kept.
-func appendLog(path string, e store.Entry) error {
-	lib, err := readLibrary(path, true)
-	if err != nil {
-		return err
-	}
-	if e.Time.IsZero() {
-		e.Time = time.Now()
-	}
-	lib.Log = append(lib.Log, e)
-	data, err := lib.Marshal()
-	if err != nil {
-		return err
-	}
-	return store.WriteFileAtomic(path, data, 0o644)
 }
 
 func runSetups(all []string) (*report, error) {

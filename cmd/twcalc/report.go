@@ -174,13 +174,7 @@ func shownSI(v, u float64, dim units.Dimension) string {
 }
 
 // add records result name with SI value v of dimension dim.
-func (r *report) add(name string, v float64, dim units.Dimension) {
-	if !finite(v) {
-		r.fail("internal: result %s is not finite", name)
-		return
-	}
-	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, shownSI(v, 0, dim))
-}
+func (r *report) add(name string, v float64, dim units.Dimension) { r.addPM(name, v, 0, dim) }
 
 // addGauge records result name, a pressure in Pa above the atmosphere:
 // JSON {"value":V,"unit":"Pa","basis":"gauge"}; the table says "gauge" and
@@ -204,33 +198,16 @@ func (r *report) addPM(name string, v, u float64, dim units.Dimension) {
 		r.fail("internal: result %s is not finite", name)
 		return
 	}
-	if u == 0 {
-		r.add(name, v, dim)
-		return
+	res := resultJSON{Value: v, Unit: units.SIUnit(dim)}
+	if u > 0 {
+		res.Uncertainty = &u
 	}
-	r.put(&r.results, "result", name, resultJSON{Value: v, Unit: units.SIUnit(dim), Uncertainty: &u}, shownSI(v, u, dim))
+	r.put(&r.results, "result", name, res, shownSI(v, u, dim))
 }
 
-// addValue records a result that is not a number with a unit (a verdict, a
-// list, an object): JSON {"value":v,"unit":""}. v must encode as JSON
-// without NaN or Inf.
-func (r *report) addValue(name string, v any) {
-	shown := fmt.Sprint(v)
-	switch v.(type) {
-	case string, bool, int, int64, float64, fmt.Stringer:
-	default:
-		if b, err := json.Marshal(v); err == nil {
-			shown = string(b)
-		}
-	}
-	r.put(&r.results, "result", name, struct {
-		Value any    `json:"value"`
-		Unit  string `json:"unit"`
-	}{v, ""}, shown)
-}
-
-// addObjectShown records a result that is a JSON object v, shown in the
-// table as text: JSON {"value":v,"unit":""}.
+// addObjectShown records a result that is not a number with a unit (words,
+// a list, an object), shown in the table as text: JSON {"value":v,"unit":""}.
+// v must encode as JSON without NaN or Inf.
 func (r *report) addObjectShown(name string, v any, shown string) {
 	r.put(&r.results, "result", name, struct {
 		Value any    `json:"value"`

@@ -24,7 +24,7 @@ func TestReportErrors(t *testing.T) {
 		{"NaN uncertainty", func(r *report) { r.addPM("x", 1, math.NaN(), units.DimLength) }, "result x is not finite"},
 		{"negative uncertainty", func(r *report) { r.addPM("x", 1, -1, units.DimLength) }, "result x is not finite"},
 		{"NaN complex", func(r *report) { r.addComplex("f", complex(0, math.Inf(-1))) }, "result f is not finite"},
-		{"NaN inside a value", func(r *report) { r.addValue("v", []float64{1, math.NaN()}) }, "result v cannot be written"},
+		{"NaN inside a value", func(r *report) { r.addObjectShown("v", []float64{1, math.NaN()}, "") }, "result v cannot be written"},
 		{"NaN input", func(r *report) { r.input("v", math.NaN()) }, "input v cannot be written"},
 		{"duplicate", func(r *report) { r.add("x", 1, units.DimLength); r.add("x", 2, units.DimLength) }, "result x added twice"},
 		{"bad table", func(r *report) { r.table([]string{"a"}, [][]float64{{math.NaN()}}) }, "column a"},
@@ -135,7 +135,8 @@ func (l stringerModes) String() string {
 func TestReportStringerValue(t *testing.T) {
 	t.Parallel()
 	r := newReport()
-	r.addValue("modes", stringerModes{{Mode: 1, Frequency: 347.6}})
+	m := stringerModes{{Mode: 1, Frequency: 347.6}}
+	r.addObjectShown("modes", m, m.String())
 	var text, js bytes.Buffer
 	if err := r.writeText(&text); err != nil {
 		t.Fatal(err)

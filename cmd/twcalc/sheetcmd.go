@@ -95,8 +95,8 @@ func runSheet(s *sheet.Sheet, args []string) (*report, error) {
 		return nil, flagError(s, err)
 	}
 	if logTo != "" {
-		if err := appendLog(logTo, store.EntryOf(s, texts, res, note)); err != nil {
-			return nil, err
+		if err := store.AppendLogFile(logTo, store.EntryOf(s, texts, res, note)); err != nil {
+			return nil, &usageError{msg: fmt.Sprintf("--log-to %s: %v", quoteValue(logTo), err)}
 		}
 	}
 	return sheetReport(res), nil
@@ -281,7 +281,7 @@ func sheetReport(res *sheet.Result) *report {
 				r.addPM(row.Key, row.Value, row.PM, row.Dim)
 			}
 		case sheet.Words:
-			r.addValue(row.Key, row.Text)
+			r.addObjectShown(row.Key, row.Text, row.Text)
 		case sheet.Complex:
 			r.addComplex(row.Key, row.Z)
 		case sheet.Object:
