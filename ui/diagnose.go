@@ -17,11 +17,14 @@ type diagnoseScreen struct {
 	side *Page
 	form *Form
 	plot *Plot
+	// stash holds the texts of hidden inputs by key (see hideInputs).
+	stash map[string]string
 }
 
 func newDiagnoseScreen(env *Env) Screen {
 	d, _ := sheet.Lookup(sheet.IDDiagnose)
-	s := &diagnoseScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env)}
+	s := &diagnoseScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
+		stash: map[string]string{}}
 	s.plot.Height = 240
 	return s
 }
@@ -36,7 +39,11 @@ func (s *diagnoseScreen) Title() string { return s.form.Sheet.Title }
 func (s *diagnoseScreen) Enter() { s.form.Enter() }
 
 func (s *diagnoseScreen) update(gtx layout.Context) {
-	if !s.form.Update(gtx) {
+	changed := s.form.Update(gtx)
+	if hideInputs(s.form, s.inputKeys(), s.stash) {
+		changed = s.form.Update(gtx) || changed
+	}
+	if !changed {
 		return
 	}
 	res := s.form.Result()

@@ -24,11 +24,14 @@ type resonanceScreen struct {
 	plot    *Plot
 	carry   widget.Clickable
 	carried string
+	// stash holds the texts of hidden inputs by key (see hideInputs).
+	stash map[string]string
 }
 
 func newResonanceScreen(env *Env) Screen {
 	d, _ := sheet.Lookup(sheet.IDResonance)
-	s := &resonanceScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env)}
+	s := &resonanceScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
+		stash: map[string]string{}}
 	s.zones = newZoneEditor(env, s.form)
 	s.plot.Height = 240
 	return s
@@ -49,7 +52,11 @@ func (s *resonanceScreen) kind() string { return s.form.Text("resonator") }
 
 func (s *resonanceScreen) update(gtx layout.Context) {
 	s.zones.update(gtx)
-	if s.form.Update(gtx) {
+	changed := s.form.Update(gtx)
+	if hideInputs(s.form, s.inputKeys(), s.stash) {
+		changed = s.form.Update(gtx) || changed
+	}
+	if changed {
 		s.carried = ""
 		if res := s.form.Result(); res != nil && s.kind() == sheet.ResonatorZones {
 			showModes(s.form.Results, res)

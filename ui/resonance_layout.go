@@ -89,3 +89,35 @@ func linePlot(xy XYs, x0, y0 float64, xLabel, xUnit, title string) *Chart {
 	}
 	return p
 }
+
+// hideInputs empties the typed inputs of f that are not in shown, keeping
+// their texts in stash, and gives back the texts of those shown again, so
+// that a value left in a hidden field can neither be sent nor stop the
+// result with an error about a field nobody sees. Choices, switches and
+// gases are left alone (they always hold a valid value). It reports
+// whether anything changed.
+func hideInputs(f *Form, shown []string, stash map[string]string) bool {
+	visible := map[string]bool{}
+	for _, k := range shown {
+		visible[k] = true
+	}
+	changed := false
+	for i := range f.Sheet.Inputs {
+		in := &f.Sheet.Inputs[i]
+		if in.Kind == sheet.Pick || in.Kind == sheet.Switch || in.Kind == sheet.Gas {
+			continue
+		}
+		text := f.Text(in.Key)
+		switch {
+		case !visible[in.Key] && text != in.Default:
+			stash[in.Key] = text
+			f.SetText(in.Key, in.Default)
+			changed = true
+		case visible[in.Key] && text == in.Default && stash[in.Key] != "":
+			f.SetText(in.Key, stash[in.Key])
+			delete(stash, in.Key)
+			changed = true
+		}
+	}
+	return changed
+}

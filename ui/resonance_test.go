@@ -210,3 +210,27 @@ func TestScreenshotResonanceKinds(t *testing.T) {
 		shoot(t, "resonance-"+kind, env, s)
 	}
 }
+
+// TestResonanceScreenHiddenInputs: a bad value left in a field that the
+// choice of what to solve for hides does not stop the result, and comes
+// back when the field is shown again.
+func TestResonanceScreenHiddenInputs(t *testing.T) {
+	env := NewEnv(nil)
+	s := newResonanceScreen(env).(*resonanceScreen)
+	h := newHarness(t, image.Pt(412, 3600), s.Layout)
+	h.tap("Length from frequency")
+	h.retype("Target frequency", "400 Hz", "40O Hz")
+	if _, ok := h.shown("Tube length to cut"); ok {
+		t.Fatal("a bad target frequency still shows a length")
+	}
+	h.tap("Frequency from length")
+	h.frames(2)
+	if got, _ := h.shown("Resonance frequency"); got != wantTube(t, 0.5, 0.012, 0) {
+		t.Fatalf("with the bad frequency hidden: shown %q, failure %q", got, s.form.Results.Failure())
+	}
+	h.tap("Length from frequency")
+	h.frames(2)
+	if got := s.form.Text("frequency"); got != "40O Hz" {
+		t.Errorf("the hidden text came back as %q", got)
+	}
+}
