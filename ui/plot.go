@@ -7,6 +7,7 @@ import (
 	"gioui.org/io/event"
 	"gioui.org/io/pointer"
 	"gioui.org/layout"
+	"gioui.org/op"
 	"gioui.org/op/clip"
 	"gioui.org/unit"
 	"gioui.org/widget"
@@ -100,12 +101,27 @@ type Plot struct {
 	tableBtn     widget.Clickable
 	copyBtn      widget.Clickable
 	copied       bool
-	sel          pick // the point read by touch or hover
-	headerHeight int  // of the last frame: the drawing starts this far down
+	sel          pick        // the point read by touch or hover
+	headerHeight int         // of the last frame: the drawing starts this far down
+	size         image.Point // of the drawing, this frame
 	hovering     bool
 	geom         plotGeom // mapping of the last frame, for pointer events
 	cacheSize    image.Point
 	cache        plotCache
+
+	// Per-frame buffers of tick-label macros and sizes, and widgets made
+	// once: a steady frame allocates nothing of its own.
+	yCalls, xCalls []op.CallOp
+	ySz, xSz       []image.Point
+	drawing        layout.Widget
+	readout        layout.Widget
+	headerW        layout.Widget
+	titleW         layout.Widget
+	toggleW        layout.Widget
+	copyW          layout.Widget
+	readoutW       layout.Widget
+	readoutStr     string // readoutText for readoutFor
+	readoutFor     pick
 }
 
 // pick names a point of the chart: line l, index i (l = -1: mark i).
@@ -115,13 +131,20 @@ type pick struct {
 }
 
 // NewPlot returns an empty plot widget; Set gives it a chart.
-func NewPlot(env *Env) *Plot { return &Plot{env: env} }
+func NewPlot(env *Env) *Plot {
+	w := &Plot{env: env}
+	w.drawing = Described("Plot drawing", w.layoutDrawing)
+	w.readout = w.layoutReadout
+	w.headerWidgets()
+	return w
+}
 
 // Set replaces the chart; nil shows nothing. Call it when the data change,
 // not every frame.
 func (w *Plot) Set(c *Chart) {
 	w.chart = c
 	w.sel = pick{}
+	w.readoutStr = ""
 	w.copied = false
 	w.cacheSize = image.Point{}
 }
@@ -143,19 +166,25 @@ func (w *Plot) Layout(gtx layout.Context) layout.Dimensions {
 		w.copyTable(gtx)
 		w.copied = true
 	}
-	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			d := w.layoutHeader(gtx)
-			w.headerHeight = d.Size.Y
-			return d
-		}),
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			if w.table {
-				return w.layoutTable(gtx)
-			}
-			return w.layoutPlot(gtx)
-		}),
-	)
+	gtx.Constraints.Min = image.Point{}
+	hdr := w.layoutHeader(gtx)
+	w.headerHeight = hdr.Size.Y
+	var body layout.Dimensions
+	below(gtx, hdr.Size.Y, func() {
+		if w.table {
+			body = w.layoutTable(gtx)
+		} else {
+			body = w.layoutPlot(gtx)
+		}
+	})
+	return layout.Dimensions{Size: image.Pt(max(hdr.Size.X, body.Size.X), hdr.Size.Y+body.Size.Y)}
+}
+
+// below runs f with the drawing moved down by y pixels.
+func below(gtx layout.Context, y int, f func()) {
+	t := op.Offset(image.Pt(0, y)).Push(gtx.Ops)
+	f()
+	t.Pop()
 }
 
 // hasData reports whether the chart has at least one finite point.
@@ -187,17 +216,21 @@ func (w *Plot) layoutPlot(gtx layout.Context) layout.Dimensions {
 		return layout.Dimensions{}
 	}
 	w.pointer(gtx)
-	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-		layout.Rigid(Described("Plot drawing", func(gtx layout.Context) layout.Dimensions {
-			w.draw(gtx, size)
-			area := clip.Rect{Max: size}.Push(gtx.Ops)
-			pointer.CursorCrosshair.Add(gtx.Ops)
-			event.Op(gtx.Ops, w)
-			area.Pop()
-			return layout.Dimensions{Size: size}
-		})),
-		layout.Rigid(w.layoutReadout),
-	)
+	w.size = size
+	d := w.drawing(gtx)
+	var r layout.Dimensions
+	below(gtx, d.Size.Y, func() { r = w.readout(gtx) })
+	return layout.Dimensions{Size: image.Pt(d.Size.X, d.Size.Y+r.Size.Y)}
+}
+
+// layoutDrawing draws the plot at w.size and takes pointer input over it.
+func (w *Plot) layoutDrawing(gtx layout.Context) layout.Dimensions {
+	w.draw(gtx, w.size)
+	area := clip.Rect{Max: w.size}.Push(gtx.Ops)
+	pointer.CursorCrosshair.Add(gtx.Ops)
+	event.Op(gtx.Ops, w)
+	area.Pop()
+	return layout.Dimensions{Size: w.size}
 }
 
 // pointer handles touches and hovering: the nearest point to the pointer

@@ -195,6 +195,14 @@ func (w *Plot) text(gtx layout.Context, s string, sp unit.Sp, col color.NRGBA, w
 	return m.Stop(), d.Size
 }
 
+// grow returns b with length n, reusing its storage when large enough.
+func grow[T any](b []T, n int) []T {
+	if cap(b) < n {
+		return make([]T, n)
+	}
+	return b[:n]
+}
+
 // place adds a macro at pixel (x, y).
 func place(gtx layout.Context, c op.CallOp, x, y int) {
 	t := op.Offset(image.Pt(x, y)).Push(gtx.Ops)
@@ -235,14 +243,14 @@ func (w *Plot) draw(gtx layout.Context, size image.Point) {
 	yTitle, yTitleSz := w.text(gtx, yt.title, tickSp, col.Muted, font.Normal)
 	xTitle, xTitleSz := w.text(gtx, xt.title, tickSp, col.Muted, font.Normal)
 	left := 0
-	yCalls := make([]op.CallOp, len(yt.texts))
-	ySz := make([]image.Point, len(yt.texts))
+	// Buffers kept from frame to frame: no allocation once drawn.
+	w.yCalls, w.ySz = grow(w.yCalls, len(yt.texts)), grow(w.ySz, len(yt.texts))
+	w.xCalls, w.xSz = grow(w.xCalls, len(xt.texts)), grow(w.xSz, len(xt.texts))
+	yCalls, ySz, xCalls, xSz := w.yCalls, w.ySz, w.xCalls, w.xSz
 	for i, s := range yt.texts {
 		yCalls[i], ySz[i] = w.text(gtx, s, tickSp, col.Text, font.Normal)
 		left = max(left, ySz[i].X)
 	}
-	xCalls := make([]op.CallOp, len(xt.texts))
-	xSz := make([]image.Point, len(xt.texts))
 	lineH := yTitleSz.Y
 	for i, s := range xt.texts {
 		xCalls[i], xSz[i] = w.text(gtx, s, tickSp, col.Text, font.Normal)

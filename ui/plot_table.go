@@ -17,45 +17,67 @@ import (
 // readout of the point being read, and the table view of every sweep with
 // its copy button.
 
-// layoutHeader draws the chart's title and the Table / Plot switch (and
-// Copy in the table view).
-func (w *Plot) layoutHeader(gtx layout.Context) layout.Dimensions {
+// headerWidgets makes the header's widgets once (see NewPlot).
+func (w *Plot) headerWidgets() {
 	th := w.env.Theme
-	btn := func(c *widget.Clickable, label string) layout.FlexChild {
-		return layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+	btn := func(c *widget.Clickable, label func() string) layout.Widget {
+		return func(gtx layout.Context) layout.Dimensions {
 			return layout.Inset{Left: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				b := material.Button(th, c, label)
+				b := material.Button(th, c, label())
 				b.Background = w.env.Colors.Selected
 				b.Color = w.env.Colors.Text
 				b.TextSize = unit.Sp(14)
 				b.Inset = layout.Inset{Top: 10, Bottom: 10, Left: 12, Right: 12}
 				return b.Layout(gtx)
 			})
-		})
-	}
-	toggle := "Table"
-	if w.table {
-		toggle = "Plot"
-	}
-	children := []layout.FlexChild{
-		layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
-			l := material.Label(th, unit.Sp(16), w.chart.Title)
-			l.Font.Weight = font.SemiBold
-			l.Color = w.env.Colors.Text
-			return l.Layout(gtx)
-		}),
-	}
-	if w.table {
-		label := "Copy"
-		if w.copied {
-			label = "Copied"
 		}
-		children = append(children, btn(&w.copyBtn, label))
 	}
-	children = append(children, btn(&w.tableBtn, toggle))
-	return layout.Inset{Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-		return layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)
+	w.toggleW = btn(&w.tableBtn, func() string {
+		if w.table {
+			return "Plot"
+		}
+		return "Table"
 	})
+	w.copyW = btn(&w.copyBtn, func() string {
+		if w.copied {
+			return "Copied"
+		}
+		return "Copy"
+	})
+	w.titleW = func(gtx layout.Context) layout.Dimensions {
+		l := material.Label(th, unit.Sp(16), w.chart.Title)
+		l.Font.Weight = font.SemiBold
+		l.Color = w.env.Colors.Text
+		return l.Layout(gtx)
+	}
+	w.headerW = func(gtx layout.Context) layout.Dimensions {
+		ch := [3]layout.FlexChild{layout.Flexed(1, w.titleW)}
+		n := 1
+		if w.table {
+			ch[n] = layout.Rigid(w.copyW)
+			n++
+		}
+		ch[n] = layout.Rigid(w.toggleW)
+		return layout.Flex{Alignment: layout.Middle}.Layout(gtx, ch[:n+1]...)
+	}
+	w.readoutW = Described("Plot readout", func(gtx layout.Context) layout.Dimensions {
+		if w.readoutFor != w.sel || w.readoutStr == "" {
+			// Written when the point changes, not every frame.
+			w.readoutStr, w.readoutFor = w.readoutText(), w.sel
+		}
+		l := material.Body2(w.env.Theme, w.readoutStr)
+		l.Color = w.env.Colors.Text
+		if !w.sel.ok {
+			l.Color = w.env.Colors.Muted
+		}
+		return l.Layout(gtx)
+	})
+}
+
+// layoutHeader draws the chart's title and the Table / Plot switch (and
+// Copy in the table view).
+func (w *Plot) layoutHeader(gtx layout.Context) layout.Dimensions {
+	return layout.Inset{Bottom: 6}.Layout(gtx, w.headerW)
 }
 
 // readoutText is the line under the plot: the point being read with its
@@ -79,14 +101,7 @@ func (w *Plot) readoutText() string {
 
 // layoutReadout writes readoutText under the plot.
 func (w *Plot) layoutReadout(gtx layout.Context) layout.Dimensions {
-	return layout.Inset{Top: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-		l := material.Body2(w.env.Theme, w.readoutText())
-		l.Color = w.env.Colors.Text
-		if !w.sel.ok {
-			l.Color = w.env.Colors.Muted
-		}
-		return Described("Plot readout", l.Layout)(gtx)
-	})
+	return layout.Inset{Top: 4}.Layout(gtx, w.readoutW)
 }
 
 // tableRows returns the table as rows of cells: a header with the axis
