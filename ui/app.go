@@ -177,7 +177,7 @@ func (a *App) Layout(gtx layout.Context) layout.Dimensions {
 			gtx.Constraints.Min = gtx.Constraints.Max
 			if !wide {
 				if s := a.Screen(a.Current()); s != nil {
-					return s.Layout(gtx)
+					return a.layoutScreen(gtx, s)
 				}
 				return a.layoutCatalog(gtx, true)
 			}
@@ -199,7 +199,7 @@ func (a *App) Layout(gtx layout.Context) layout.Dimensions {
 						w := min(gtx.Constraints.Max.X, gtx.Dp(readable))
 						gtx.Constraints = layout.Exact(image.Pt(w, gtx.Constraints.Max.Y))
 						if s := a.Screen(a.Current()); s != nil {
-							return s.Layout(gtx)
+							return a.layoutScreen(gtx, s)
 						}
 						return a.layoutWelcome(gtx)
 					})

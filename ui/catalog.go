@@ -25,6 +25,7 @@ var extras = map[sheet.ID]func(env *Env) Screen{
 	sheet.IDSafety:    newSafetyScreen,
 	sheet.IDBenchLog:  newBenchLogScreen,
 }
+	sheet.IDSaved:     newSavedScreen,
 
 // catalog lists the app's screens in the order of the one catalog in
 // calc/sheet.

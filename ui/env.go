@@ -31,6 +31,7 @@ type Env struct {
 	open   func(id sheet.ID)
 	notify atomic.Pointer[func()]
 	book   *benchBook // the bench log of the safety screens; see bookFor
+	keep   *keepSide  // saved inputs, setups and the log; see keepFor
 
 }
 

@@ -28,6 +28,7 @@ type Form struct {
 	result  *sheet.Result
 	err     error
 	dirty   bool
+	kept    formKeep // last inputs restored and remembered; see keep_form.go
 }
 
 // formItem is the widget of one input; exactly one of the pointers is set.
@@ -74,6 +75,7 @@ func NewForm(env *Env, s *sheet.Sheet) *Form {
 		}
 		f.items = append(f.items, it)
 	}
+	f.kept.start(f)
 	return f
 }
 
@@ -170,13 +172,18 @@ func (f *Form) Update(gtx layout.Context) bool {
 		}
 		if changed {
 			f.dirty = true
+			f.kept.touch()
 		}
+	}
+	if f.kept.restore(f) {
+		f.dirty = true
 	}
 	if !f.dirty {
 		return false
 	}
 	f.dirty = false
 	f.Compute()
+	f.kept.remember(f)
 	return true
 }
 

@@ -20,6 +20,7 @@ const (
 	IDSPL       ID = "spl"
 	IDSafety    ID = "safety"
 	IDBenchLog  ID = "benchlog"
+	IDSaved     ID = "saved"
 )
 
 // Place says where a catalog entry appears.
@@ -61,6 +62,7 @@ var catalog = []Entry{
 	{ID: IDSPL, Sheet: splSheet, Place: InTerminal},
 	{ID: IDListen, Sheet: listenSheet, Place: InTerminal},
 	{ID: IDBenchLog, Title: "Bench log", Summary: "Saved safety passes with date and time, exported as text", Place: InApp},
+	{ID: IDSaved, Title: "Saved work", Summary: "Your named setups and logged results; export everything to a file, import one", Place: InApp},
 }
 
 // Catalog returns the entries in order; an entry with a Sheet takes its

@@ -154,7 +154,9 @@ func runTube(v *Values) (*Result, error) {
 	}
 	T, p := v.Q("temperature"), v.Q("pressure")
 	u.Temperature, u.Pressure = T.Uncertainty, p.Uncertainty
-	if err := checkHumidity(v); err != nil {
+	// the gas at the typed state first, so that its range errors name
+	// their input
+	if _, err := tubeGas(v, T.Value, p.Value); err != nil {
 		return nil, err
 	}
 	s := resonator.Setup{Tube: tube, Gas: v.Gas("gas"), Temperature: T.Value, Pressure: p.Value, GasOptions: GasOptions(v), U: u,

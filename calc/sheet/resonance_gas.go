@@ -49,14 +49,30 @@ func tubeGas(v *Values, T, p float64) (gasprops.Properties, error) {
 	if err := checkHumidity(v); err != nil {
 		return gasprops.Properties{}, err
 	}
-	var g gasprops.Properties
-	var err error
-	if rh := v.SI("humidity"); rh > 0 {
-		g, err = gasprops.HumidAir(units.Temperature(T), units.Pressure(p), rh, GasOptions(v))
-	} else {
-		g, err = v.Gas("gas").Properties(units.Temperature(T), units.Pressure(p), GasOptions(v))
+	rh := v.SI("humidity")
+	if rh == 0 {
+		g, err := v.Gas("gas").Properties(units.Temperature(T), units.Pressure(p), GasOptions(v))
+		return g, v.BlameSubject(err, tubeGasSubjects)
 	}
-	return g, v.BlameSubject(err, tubeGasSubjects)
+	g, err := gasprops.HumidAir(units.Temperature(T), units.Pressure(p), rh, GasOptions(v))
+	if err == nil {
+		return g, nil
+	}
+	if err = v.BlameSubject(err, tubeGasSubjects); !tubeIsRangeError(err) {
+		return g, err
+	}
+	// The humid-air model's range errors say no subject: tell them apart
+	// by its documented bounds (gasprops.WaterMoleFraction). Inside them,
+	// the water vapour alone reaches the total pressure: the humidity is
+	// too high for this pressure and temperature.
+	key := "humidity"
+	switch {
+	case !(T >= gasprops.HumidMinTemperature && T <= gasprops.HumidMaxTemperature):
+		key = "temperature"
+	case !(p >= gasprops.MinPressure):
+		key = "pressure"
+	}
+	return g, v.Blame(err, key)
 }
 
 // noResonanceKey is the input blamed when the wall losses leave a tube
