@@ -24,8 +24,8 @@ var extras = map[sheet.ID]func(env *Env) Screen{
 	sheet.IDHeatPump:  newHeatPumpScreen,
 	sheet.IDSafety:    newSafetyScreen,
 	sheet.IDBenchLog:  newBenchLogScreen,
-}
 	sheet.IDSaved:     newSavedScreen,
+}
 
 // catalog lists the app's screens in the order of the one catalog in
 // calc/sheet.
