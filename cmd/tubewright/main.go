@@ -44,10 +44,13 @@ func main() {
 // run is the window's event loop: one ui.App, laid out on every frame.
 func run(w *app.Window) error {
 	a := ui.NewApp(w.Invalidate)
+	keeper, porter := openStorage()
+	a.UseKeeper(keeper, porter)
 	var ops op.Ops
 	for {
 		switch e := w.Event().(type) {
 		case app.DestroyEvent:
+			closeStorage(keeper)
 			return e.Err
 		case app.FrameEvent:
 			gtx := app.NewContext(&ops, e)
