@@ -17,8 +17,22 @@ type safetyOut struct {
 		Value json.RawMessage `json:"value"`
 		Unit  string          `json:"unit"`
 	} `json:"results"`
-	Warnings []string `json:"warnings"`
-	Cautions []string `json:"cautions"`
+	Warnings []string                   `json:"warnings"`
+	Cautions []string                   `json:"cautions"`
+	Inputs   map[string]json.RawMessage `json:"inputs"`
+	Verdicts []struct {
+		Check, Outcome, Why string
+	} `json:"verdicts"`
+}
+
+// outcome returns the outcome of check in o's verdicts, or "".
+func (o safetyOut) outcome(check string) string {
+	for _, v := range o.Verdicts {
+		if v.Check == check && v.Why != "" {
+			return v.Outcome
+		}
+	}
+	return ""
 }
 
 func (o safetyOut) num(t *testing.T, name string) float64 {
@@ -120,6 +134,35 @@ func TestVesselCommand(t *testing.T) {
 	}
 	// PED 7.4 with PS = 30 bar: max(1.25 × 30, 1.43 × 30) = 42.9 bar.
 	approx(t, "eu_test_pressure", eu.num(t, "eu_test_pressure"), 42.9e5, 1e-12)
+}
+
+// TestVesselIssueVessel: the vessel of issues 9 and 12 (30 bar, 100 mm
+// inside, 3 mm wall, 138 MPa, relief at 30 barg) gets the verdicts of the
+// one MAWP rule in the JSON, and the echo says the bare 30 bar was read as
+// gauge. UG-27(c)(1): MAWP = 138 MPa × 3 mm/(50 mm + 1.8 mm) = 79.92 bar;
+// UG-99(b) 1.3 × that = 103.9 bar (hand calculation).
+func TestVesselIssueVessel(t *testing.T) {
+	t.Parallel()
+	o := runSafetyJSON(t, "vessel", "--pressure", "30 bar", "--inner-radius", "50mm", "--wall-thickness", "3mm", "--allowable-stress", "138MPa", "--relief-set", "30barg")
+	const mawp = 138e6 * 0.003 / (0.05 + 0.6*0.003)
+	approx(t, "mawp_used", o.num(t, "mawp_used"), mawp, 1e-9)
+	approx(t, "hydrostatic_test_pressure", o.num(t, "hydrostatic_test_pressure"), 1.3*mawp, 1e-9)
+	for check, want := range map[string]string{"relief_check": "pass", "mawp_check": "pass", "wall_adequate": "pass", "stress_check": "pass", "test_pressure_check": "warn"} {
+		if got := o.outcome(check); got != want {
+			t.Errorf("verdict %s = %q, want %q (verdicts %+v)", check, got, want, o.Verdicts)
+		}
+	}
+	if got := string(o.Inputs["pressure_read"]); got != `"30 bar read as 30 barg = 31.01 bar absolute"` {
+		t.Errorf("pressure echo %s", got)
+	}
+	if countOf(o.Cautions, safety.CautionReliefSizing) != 1 {
+		t.Errorf("relief-sizing caution missing: %q", o.Cautions)
+	}
+	// A nameplate of 25 barg: the same relief fails.
+	f := runSafetyJSON(t, "vessel", "--pressure", "20 bar", "--inner-radius", "50mm", "--wall-thickness", "3mm", "--allowable-stress", "138MPa", "--relief-set", "30barg", "--mawp", "25barg")
+	if got := f.outcome("relief_check"); got != "fail" {
+		t.Errorf("relief over the nameplate MAWP: %q", got)
+	}
 }
 
 func TestEnergyCommand(t *testing.T) {
