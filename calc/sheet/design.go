@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"context"
 	"errors"
 	"fmt"
 	"os"
@@ -116,9 +117,30 @@ var designSubjects = map[units.Subject]string{
 	units.SubjectPressure:  "pressure",
 }
 
-func runDesign(v *Values) (*Result, error) {
+// EvaluateDesign is the design calculator's Evaluate for a front end that
+// runs it off its UI goroutine: the same parse and Run as the terminal's,
+// with ctx to cancel the search (the error is then ctx.Err()) and
+// progress, when not nil, called after each solve with the solves so far
+// and the most the search will make, on the goroutine that runs it.
+func EvaluateDesign(ctx context.Context, progress func(solves, limit int), texts map[string]string) (*Result, error) {
+	s := *designSheet
+	s.Run = func(v *Values) (*Result, error) {
+		return runDesignWith(v, &design.Settings{Context: ctx, Progress: progress})
+	}
+	r, err := s.Evaluate(texts)
+	if ctx.Err() != nil {
+		return nil, ctx.Err()
+	}
+	return r, err
+}
+
+func runDesign(v *Values) (*Result, error) { return runDesignWith(v, nil) }
+
+// runDesignWith runs the engine or heat-pump design with set (nil: the
+// defaults).
+func runDesignWith(v *Values, set *design.Settings) (*Result, error) {
 	if v.Pick("for") == "heat-pump" {
-		return runDesignHeatPump(v)
+		return runDesignHeatPump(v, set)
 	}
 	if !v.Has("hot") {
 		return nil, v.Blame(fmt.Errorf("%w: the hottest temperature the heater reaches, e.g. 650 K", ErrRequired), "hot")
@@ -139,7 +161,7 @@ func runDesign(v *Values) (*Result, error) {
 	if t.HotTemperature <= t.Ambient {
 		return nil, v.Blame(fmt.Errorf("the heater's %s must be above the ambient %s", units.Format(t.HotTemperature, units.DimTemperature), units.Format(t.Ambient, units.DimTemperature)), "hot")
 	}
-	res, err := design.Design(t, nil)
+	res, err := design.Design(t, set)
 	var ue *design.UnreachableError
 	switch {
 	case errors.As(err, &ue):
@@ -165,7 +187,7 @@ func runDesign(v *Values) (*Result, error) {
 }
 
 // runDesignHeatPump is the heat-pump variant: calc/design's DesignHeatPump.
-func runDesignHeatPump(v *Values) (*Result, error) {
+func runDesignHeatPump(v *Values, set *design.Settings) (*Result, error) {
 	if !v.Has("drive") {
 		return nil, v.Blame(fmt.Errorf("%w for a heat pump: the driver's pressure amplitude, e.g. 3 kPa", ErrRequired), "drive")
 	}
@@ -178,7 +200,7 @@ func runDesignHeatPump(v *Values) (*Result, error) {
 		WireDiameter: v.SI("wire"), DriverAmplitude: v.SI("drive"), ColdTemperature: v.SI("cold"), Span: v.SI("span"),
 		MaxLength: v.SI("max-length"), MinGap: v.SI("min-gap"),
 	}
-	res, err := design.DesignHeatPump(t, nil)
+	res, err := design.DesignHeatPump(t, set)
 	var ue *design.UnreachableError
 	if err != nil && !errors.As(err, &ue) {
 		return nil, v.BlameSubject(err, heatPumpSubjects)
@@ -288,8 +310,9 @@ func designRows(r *Result, res *design.Result) {
 		if err != nil {
 			step = units.Format(s.Step, units.DimLength)
 		}
-		r.Add("onset_change_"+s.Key, "Onset change for "+step+" more "+s.Quantity, s.OnsetChange, units.DimTemperatureDifference)
-		r.Add("frequency_change_"+s.Key, "Frequency change for "+step+" more "+s.Quantity, s.FrequencyChange, units.DimFrequency)
+		change := step + " more " + s.Quantity
+		r.Add(onsetChangeKey+s.Key, onsetChangeLabel+change, s.OnsetChange, units.DimTemperatureDifference)
+		r.Add(frequencyChangeKey+s.Key, frequencyChangeLabel+change, s.FrequencyChange, units.DimFrequency)
 	}
 	text := ""
 	if b, err := res.File.Marshal(); err == nil {
@@ -299,6 +322,44 @@ func designRows(r *Result, res *design.Result) {
 	r.Warn(res.Warnings...)
 	r.Caution(res.Cautions...)
 	r.Note(res.Rules...)
+}
+
+// The keys and labels of the sensitivity rows start with these, followed
+// by calc/design's key and the change in words.
+const (
+	onsetChangeKey       = "onset_change_"
+	frequencyChangeKey   = "frequency_change_"
+	onsetChangeLabel     = "Onset change for "
+	frequencyChangeLabel = "Frequency change for "
+)
+
+// SensitivityLine is one line of a design's sensitivity table, for a
+// front end that draws the table rather than rows: the change made in
+// words ("1 mm more stack length (other parts kept, so the tube grows)")
+// and the result rows of the onset temperature change (K) and the
+// frequency change (Hz) it brings.
+type SensitivityLine struct {
+	Change           string
+	Onset, Frequency Row
+}
+
+// DesignSensitivity returns the sensitivity table of a design calculator's
+// result, in the order of its rows; none for a heat pump or a result
+// without the table.
+func DesignSensitivity(r *Result) []SensitivityLine {
+	var out []SensitivityLine
+	for _, row := range r.Rows {
+		key, ok := strings.CutPrefix(row.Key, onsetChangeKey)
+		if !ok {
+			continue
+		}
+		f, ok := r.Row(frequencyChangeKey + key)
+		if !ok {
+			continue
+		}
+		out = append(out, SensitivityLine{Change: strings.TrimPrefix(row.Label, onsetChangeLabel), Onset: row, Frequency: f})
+	}
+	return out
 }
 
 // gapNote says what the gap of a stack kind is.
