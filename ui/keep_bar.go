@@ -32,22 +32,22 @@ type keepBar struct {
 	panel             bool // the setups panel shows instead of the screen
 	page              *Page
 
-	name                               widget.Editor
-	saveAs, openIt, rename, dup, del   widget.Clickable
-	action, all                        widget.Clickable
-	rows                               []widget.Clickable
-	listed                             []string // the setup names of the rows, as last laid out
-	selected                           string
-	note                               widget.Editor
-	keepNote, dropNote                 widget.Clickable
-	logged                             time.Time // the entry a note may be added to
-	local                              string    // the bar's own message (Copy, a missing name)
-	localBad                           bool
-	since                              uint64 // keeper statuses up to this one are not the bar's
-	status                             keepStatus
-	statusLive                         bool
-	noteShown                          bool
-	lastCopied                         string // the text last put on the clipboard
+	name                             widget.Editor
+	saveAs, openIt, rename, dup, del widget.Clickable
+	action, all                      widget.Clickable
+	rows                             []widget.Clickable
+	listed                           []string // the setup names of the rows, as last laid out
+	selected                         string
+	note                             widget.Editor
+	keepNote, dropNote               widget.Clickable
+	logged                           time.Time // the entry a note may be added to
+	local                            string    // the bar's own message (Copy, a missing name)
+	localBad                         bool
+	since                            uint64 // keeper statuses up to this one are not the bar's
+	status                           keepStatus
+	statusLive                       bool
+	noteShown                        bool
+	lastCopied                       string // the text last put on the clipboard
 }
 
 // bar returns the bar of calculator id.
