@@ -142,37 +142,11 @@ func (b *Bench) Summary() string {
 	return strings.Join(parts, ", ")
 }
 
-// takeBench sets the gas picker and the temperature and pressure fields
-// (each may be nil) from the Bench where it holds other values, and reports
-// whether anything changed.
-func takeBench(b *Bench, picker *GasPicker, temp, press *Field) bool {
-	changed := false
-	if picker != nil && b.Gas != "" && b.Gas != picker.Text() && picker.SetText(b.Gas) == nil {
-		changed = true
-	}
-	if temp != nil {
-		if v, ok := temp.Value(); b.Temperature > 0 && (!ok || !near(v, b.Temperature)) {
-			temp.SetText(units.Format(b.Temperature, units.DimTemperature))
-			changed = true
-		}
-	}
-	if press != nil {
-		if v, ok := press.Value(); b.Pressure > 0 && (!ok || !near(v, b.Pressure)) {
-			press.SetText(formatPressure(b.Pressure))
-			changed = true
-		}
-	}
-	return changed
-}
-
 // near reports whether a and b agree to 1e-9 relative (other screens use
 // it too, to see whether a Bench value differs from a field's).
 func near(a, b float64) bool {
 	return math.Abs(a-b) <= 1e-9*max(math.Abs(a), math.Abs(b))
 }
-
-// abs is math.Abs (kept: other screens call it).
-func abs(v float64) float64 { return math.Abs(v) }
 
 // formatPressure writes a pressure in bar for a field's text.
 func formatPressure(pa float64) string {
