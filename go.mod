@@ -4,6 +4,7 @@ go 1.26.0
 
 require (
 	gioui.org v0.10.3
+	golang.org/x/image v0.30.0
 	gonum.org/v1/gonum v0.17.0
 )
 
@@ -14,7 +15,6 @@ require (
 	github.com/godbus/dbus/v5 v5.2.2 // indirect
 	golang.org/x/exp/shiny v0.0.0-20250408133849-7e4ce0ab07d0 // indirect
 	golang.org/x/exp/typeparams v0.0.0-20231108232855-2478ac86f678 // indirect
-	golang.org/x/image v0.30.0 // indirect
 	golang.org/x/mod v0.41.0 // indirect
 	golang.org/x/net v0.59.0 // indirect
 	golang.org/x/sync v0.23.0 // indirect
