@@ -36,7 +36,6 @@ type savedScreen struct {
 	setupsShown                                   []store.Setup
 	entry                                         *store.Entry // the entry shown whole
 	setup                                         string       // the setup selected
-	text                                          widget.Selectable
 
 	since      uint64
 	status     keepStatus
@@ -346,7 +345,6 @@ func (s *savedScreen) logWidgets(lib *store.Library) []layout.Widget {
 						return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 							l := material.Body2(env.Theme, text)
 							l.Color = env.Colors.Text
-							l.State = &s.text
 							return Described("Logged result text", l.Layout)(gtx)
 						})
 					})
