@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strings"
 
+	"tubewright/calc/sheet"
 	"tubewright/ui/store"
 )
 
@@ -48,12 +49,19 @@ func entryText(e store.Entry) string {
 	}
 	if len(e.Inputs) > 0 {
 		b.WriteString("Inputs:\n")
-		for _, k := range keepKeys(e.Inputs) {
+		s, _ := sheet.Lookup(sheet.ID(e.Calculator))
+		for _, k := range inputOrder(s, e.Inputs) {
+			label := k
+			if s != nil {
+				if in := s.Input(k); in != nil && in.Label != "" {
+					label = in.Label
+				}
+			}
 			if v := e.Inputs[k]; strings.Contains(v, "\n") {
-				fmt.Fprintf(&b, "  %s: (%d lines, kept in the export file)\n", k, strings.Count(v, "\n")+1)
+				fmt.Fprintf(&b, "  %s: (%d lines, kept in the export file)\n", keepLine(label), strings.Count(v, "\n")+1)
 				continue
 			}
-			fmt.Fprintf(&b, "  %s: %s\n", k, keepLine(e.Inputs[k]))
+			fmt.Fprintf(&b, "  %s: %s\n", keepLine(label), keepLine(e.Inputs[k]))
 		}
 	}
 	if len(e.Rows) > 0 {
@@ -84,11 +92,24 @@ func keepLine(s string) string {
 	}, s)
 }
 
-func keepKeys(m map[string]string) []string {
-	out := make([]string, 0, len(m))
-	for k := range m {
-		out = append(out, k)
+// inputOrder lists the keys of texts in the order of s's inputs (s may be
+// nil), then any others sorted.
+func inputOrder(s *sheet.Sheet, texts map[string]string) []string {
+	var out, rest []string
+	seen := map[string]bool{}
+	if s != nil {
+		for _, in := range s.Inputs {
+			if _, ok := texts[in.Key]; ok {
+				out = append(out, in.Key)
+				seen[in.Key] = true
+			}
+		}
 	}
-	sort.Strings(out)
-	return out
+	for k := range texts {
+		if !seen[k] {
+			rest = append(rest, k)
+		}
+	}
+	sort.Strings(rest)
+	return append(out, rest...)
 }

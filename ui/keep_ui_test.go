@@ -97,7 +97,7 @@ func TestLogResultWithNote(t *testing.T) {
 		t.Errorf("log row %q lacks the note", txt)
 	}
 	h.click(h.mustDesc(desc).Desc.Bounds)
-	if txt, _ := h.shown("Logged result text"); !strings.Contains(txt, "Inputs:") || !strings.Contains(txt, "temperature: 293 K") {
+	if txt, _ := h.shown("Logged result text"); !strings.Contains(txt, "Inputs:") || !strings.Contains(txt, "Temperature: 293 K") {
 		t.Errorf("entry text %q", txt)
 	}
 }
