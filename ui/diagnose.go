@@ -35,7 +35,8 @@ func (s *diagnoseScreen) Form() *Form { return s.form }
 // Title implements Screen.
 func (s *diagnoseScreen) Title() string { return s.form.Sheet.Title }
 
-// Enter takes the gas and pressure last used elsewhere.
+// Enter takes the gas, pressure and frequency last used elsewhere (a
+// frequency found by listening to the tube arrives as the measurement).
 func (s *diagnoseScreen) Enter() { s.form.Enter() }
 
 func (s *diagnoseScreen) update(gtx layout.Context) {
@@ -46,12 +47,7 @@ func (s *diagnoseScreen) update(gtx layout.Context) {
 	if !changed {
 		return
 	}
-	res := s.form.Result()
-	s.plot.Set(curveChart(sheet.ResonanceCurve(res)))
-	if res != nil {
-		// the measurement is offered to the other screens
-		s.env.Bench.SetFrequency(res.Values.SI("measured-frequency"), s.Title())
-	}
+	s.plot.Set(curveChart(sheet.ResonanceCurve(s.form.Result())))
 }
 
 // inputKeys lists the inputs of what is found, in order.

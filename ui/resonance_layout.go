@@ -94,8 +94,10 @@ func linePlot(xy XYs, x0, y0 float64, xLabel, xUnit, title string) *Chart {
 // their texts in stash, and gives back the texts of those shown again, so
 // that a value left in a hidden field can neither be sent nor stop the
 // result with an error about a field nobody sees. Choices, switches and
-// gases are left alone (they always hold a valid value). It reports
-// whether anything changed.
+// gases are left alone (they always hold a valid value), and so are the
+// values carried between screens (a hidden temperature keeps the one
+// last used, rather than sending its default back to the Bench). It
+// reports whether anything changed.
 func hideInputs(f *Form, shown []string, stash map[string]string) bool {
 	visible := map[string]bool{}
 	for _, k := range shown {
@@ -104,7 +106,7 @@ func hideInputs(f *Form, shown []string, stash map[string]string) bool {
 	changed := false
 	for i := range f.Sheet.Inputs {
 		in := &f.Sheet.Inputs[i]
-		if in.Kind == sheet.Pick || in.Kind == sheet.Switch || in.Kind == sheet.Gas {
+		if in.Kind == sheet.Pick || in.Kind == sheet.Switch || in.Kind == sheet.Gas || in.Share != sheet.ShareNone {
 			continue
 		}
 		text := f.Text(in.Key)

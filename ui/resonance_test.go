@@ -234,3 +234,22 @@ func TestResonanceScreenHiddenInputs(t *testing.T) {
 		t.Errorf("the hidden text came back as %q", got)
 	}
 }
+
+// TestResonanceScreenKeepsBenchTemperature: the zoned tube hides the mean
+// temperature; working there must not send a default temperature back to
+// the other screens.
+func TestResonanceScreenKeepsBenchTemperature(t *testing.T) {
+	env := NewEnv(nil)
+	env.Bench.SetTemperature(300)
+	s := newResonanceScreen(env).(*resonanceScreen)
+	s.Enter()
+	h := newHarness(t, image.Pt(412, 3600), s.Layout)
+	h.tap("Hot and cold zones")
+	h.frames(2)
+	if _, ok := h.shown("Lowest mode"); !ok {
+		t.Fatalf("no zoned result: %q", s.form.Results.Failure())
+	}
+	if env.Bench.Temperature != 300 {
+		t.Errorf("Bench temperature %v K after the zoned tube, want 300 K", env.Bench.Temperature)
+	}
+}

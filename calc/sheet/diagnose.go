@@ -31,7 +31,7 @@ var diagnoseSheet = &Sheet{
 				{Key: FindFraction, Words: "Fraction of a second gas", Value: FindFraction},
 			}},
 		{Key: "measured-frequency", Label: "Measured resonance frequency", Kind: Quantity, Dim: units.DimFrequency,
-			Example: "140 Hz ± 2 Hz", PM: true, Hint: "as read from the analyser, with its ±: 140 Hz ± 2 Hz, 140Hz+-2Hz"},
+			Example: "140 Hz ± 2 Hz", PM: true, Hint: "as read from the analyser, with its ±: 140 Hz ± 2 Hz, 140Hz+-2Hz", Share: ShareFrequency},
 		endsInput(),
 		tubeLengthInput("600 mm", "physical tube length: 600 mm, 1.2 m, 20 in; ± or +- for an uncertainty: 600 mm ± 1 mm", false),
 		tubeRadiusInput(false),
