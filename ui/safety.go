@@ -200,6 +200,9 @@ func (s *safetyScreen) buildPass() store.Pass {
 	for i, it := range s.pass.Items {
 		item := store.Item{ID: it.ID, Title: it.Title, Done: s.pass.Done[i], Note: strings.TrimSpace(s.pass.Notes[i])}
 		if c := s.calcs[i]; c != nil {
+			if st, ok := c.(*sheetStep); ok {
+				st.settle()
+			}
 			item.Inputs = c.Typed()
 			item.Verdicts = c.Checks()
 			if nums := c.Numbers(); len(nums) > 0 {

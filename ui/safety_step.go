@@ -109,6 +109,25 @@ func (s *sheetStep) Update(gtx layout.Context) {
 	s.refresh()
 }
 
+// settle brings a step that has been shown up to date with its forms,
+// which other steps may have changed since (the vessel's inputs are shared
+// by three steps); a step never shown stays empty.
+func (s *sheetStep) settle() {
+	if s.shownOnce() {
+		s.refresh()
+	}
+}
+
+// shownOnce reports whether the step has been shown.
+func (s *sheetStep) shownOnce() bool {
+	for _, p := range s.parts {
+		if p.fresh {
+			return true
+		}
+	}
+	return false
+}
+
 // refresh fills the cards from the forms' results where they changed.
 func (s *sheetStep) refresh() {
 	changed := false
@@ -331,8 +350,11 @@ func (s *sheetStep) Numbers() []store.Number {
 	return out
 }
 
-// Typed implements inlineCalc.
+// Typed implements inlineCalc: nothing for a step never shown.
 func (s *sheetStep) Typed() []store.ItemInput {
+	if !s.shownOnce() {
+		return nil
+	}
 	var out []store.ItemInput
 	for _, p := range s.parts {
 		for _, k := range p.keys {

@@ -514,3 +514,33 @@ func TestSafetyGasCautions(t *testing.T) {
 		t.Error("nitrogen released, carbon dioxide caution still shown")
 	}
 }
+
+// TestSafetyLogFollowsSharedInputs: the relief item's checks in the saved
+// pass follow a design pressure changed on the wall item after the relief
+// item was shown (the two share the vessel calculator), and an item never
+// shown logs no inputs. UG-27(c)(1) MAWP of 6 mm at 50 mm and 138 MPa:
+// 154.5 barg (see calc/sheet/vessel_test.go), so 160 barg is above it.
+func TestSafetyLogFollowsSharedInputs(t *testing.T) {
+	a, h := safetyApp(t, filepath.Join(t.TempDir(), "benchlog.json"), "safety", tallPhone)
+	s := a.Screen("safety").(*safetyScreen)
+	h.tap("Next ›")
+	h.retype("Allowable stress at the hot-end temperature", "", "138 MPa")
+	h.tap("Next ›")
+	h.retype("Relief set pressure", "", "30 barg")
+	if v, _ := h.shown("Step verdict"); !strings.HasPrefix(v, "PASS") {
+		t.Fatalf("relief verdict %q", v)
+	}
+	h.tap("‹ Previous")
+	h.retype("Design pressure", "30 barg", "160 barg")
+	p := s.buildPass()
+	got := map[string]string{}
+	for _, v := range p.Items[2].Verdicts {
+		got[v.Check] = v.Outcome
+	}
+	if got["mawp_check"] != "fail" || got["relief_check"] != "warn" {
+		t.Errorf("relief item verdicts after the design pressure changed: %v", got)
+	}
+	if len(p.Items[8].Inputs) != 0 || len(p.Items[8].Verdicts) != 0 {
+		t.Errorf("hearing item never shown, logged %+v", p.Items[8])
+	}
+}
