@@ -55,6 +55,9 @@ var oxygenSheet = &Sheet{
 func oxygenGas() Input {
 	in := GasInput("gas", "helium")
 	in.Label = "Which gas is released"
+	// the gas of a cylinder or a release, not necessarily the rig's
+	// working gas: not carried between screens
+	in.Share = ShareNone
 	in.Hint = "the gas in the cylinder and the vessel: helium, argon, nitrogen, a mixture such as helium:0.7,argon:0.3"
 	return in
 }
