@@ -58,6 +58,14 @@ async function firstFrame(page) {
   return page.evaluate(() => performance.getEntriesByName("tw-first-frame")[0].startTime);
 }
 
+// focuses taps at p and reports whether Gio's text input took the focus
+// (a text field is there).
+async function focuses(page, p) {
+  await page.touchscreen.tap(p.x, p.y);
+  await page.waitForTimeout(400);
+  return page.evaluate(() => document.activeElement && document.activeElement.tagName === "TEXTAREA");
+}
+
 function check(ok, what) {
   if (!ok) throw new Error("FAIL: " + what);
   console.log("ok: " + what);
@@ -81,20 +89,20 @@ async function test(dir) {
     const home = await page.screenshot();
     check(home.length > 20000, `the home screen has content (${home.length} bytes of PNG)`);
 
-    // Tap the first calculator in the list (Working gas), then retype its
-    // first field (Temperature). The places are those of the phone layout
-    // at 412x915; TAP and FIELD ({"x":..,"y":..}) override them.
+    // Tap the first calculator in the list (Working gas), then its first
+    // text field (Temperature): places of the phone layout at 412x915, which
+    // TAP, FIELD and LOW_FIELD ({"x":..,"y":..}) override.
     const tap = JSON.parse(process.env.TAP || "null") || { x: 200, y: 100 };
     await page.touchscreen.tap(tap.x, tap.y);
     await page.waitForTimeout(1500);
     const screen = await page.screenshot();
     check(!screen.equals(home), "tapping a calculator opened it");
     const field = JSON.parse(process.env.FIELD || "null") || { x: 200, y: 284 };
-    await page.touchscreen.tap(field.x, field.y);
-    await page.waitForTimeout(500);
+    check(await focuses(page, field), `a text field took the tap at (${field.x}, ${field.y}) (if the layout moved, set FIELD)`);
     const before = await page.screenshot({ clip: { x: 0, y: field.y + 60, width: 412, height: 915 - field.y - 60 } });
-    await page.keyboard.press("Control+A");
-    await page.keyboard.type("350 K");
+    // A digit in front of the number: 300 K becomes 1300 K, a new valid value.
+    await page.keyboard.press("Home");
+    await page.keyboard.type("1");
     await page.waitForTimeout(1500);
     const after = await page.screenshot({ clip: { x: 0, y: field.y + 60, width: 412, height: 915 - field.y - 60 } });
     if (process.env.SHOTS) { // for people: SHOTS=folder keeps the pictures
@@ -112,12 +120,12 @@ async function test(dir) {
       `the quantity field types without autocorrect, capitals or spell checking (inputmode, autocomplete, autocorrect, autocapitalize, spellcheck: ${attrs})`);
 
     // A soft keyboard shrinks the page: the focused field must stay in view.
-    const low = JSON.parse(process.env.LOW_FIELD || "null") || { x: 200, y: 377 };
-    await page.touchscreen.tap(low.x, low.y);
-    await page.waitForTimeout(500);
     const keyboardTop = 300;
+    const low = JSON.parse(process.env.LOW_FIELD || "null") || { x: 200, y: 377 };
+    check(low.y > keyboardTop && await focuses(page, low),
+      `a text field below ${keyboardTop} px took the tap at (${low.x}, ${low.y}) (if the layout moved, set LOW_FIELD)`);
     await page.setViewportSize({ width: 412, height: keyboardTop });
-    await page.waitForTimeout(1000);
+    await page.waitForTimeout(3000);
     const caret = await page.evaluate(() => document.querySelector("#giowindow textarea").getBoundingClientRect().top);
     // Below the app's 56 px top bar and above the keyboard.
     check(caret > 60 && caret < keyboardTop - 24,
