@@ -80,6 +80,9 @@ type Bench struct {
 	// FrequencyFrom names the screen that set Frequency, e.g. "Tube
 	// resonance", for a "from ..." note beside the value.
 	FrequencyFrom string
+	// FrequencyPM is the standard uncertainty of a measured Frequency in
+	// Hz (set with SetMeasuredFrequency); 0 when none was given.
+	FrequencyPM float64
 }
 
 // usable reports whether v is a finite, positive number.
@@ -114,6 +117,20 @@ func (b *Bench) SetFrequency(hz float64, from string) {
 	if usable(hz) {
 		b.Frequency = hz
 		b.FrequencyFrom = from
+		b.FrequencyPM = 0
+	}
+}
+
+// SetMeasuredFrequency records a measured frequency in Hz with its
+// standard uncertainty pm (Hz; non-finite or negative is taken as none) and
+// the title of the screen that measured it.
+func (b *Bench) SetMeasuredFrequency(hz, pm float64, from string) {
+	if !usable(hz) {
+		return
+	}
+	b.SetFrequency(hz, from)
+	if usable(pm) {
+		b.FrequencyPM = pm
 	}
 }
 

@@ -60,7 +60,7 @@ var catalog = []Entry{
 	{ID: IDEnergy, Sheet: energySheet, Place: InTerminal},
 	{ID: IDOxygen, Sheet: oxygenSheet, Place: InTerminal},
 	{ID: IDSPL, Sheet: splSheet, Place: InTerminal},
-	{ID: IDListen, Sheet: listenSheet, Place: InTerminal},
+	{ID: IDListen, Sheet: listenSheet, Place: Everywhere},
 	{ID: IDBenchLog, Title: "Bench log", Summary: "Saved safety passes with date and time, exported as text", Place: InApp},
 	{ID: IDSaved, Title: "Saved work", Summary: "Your named setups and logged results; export everything to a file, import one", Place: InApp},
 }
