@@ -116,6 +116,9 @@ func runDiagnose(v *Values) (*Result, error) {
 	if err != nil {
 		return nil, diagnoseBlame(v, err, map[units.Subject]string{units.SubjectPressure: "pressure"})
 	}
+	if v.Q("temperature").Uncertainty > 0 {
+		r.Warn(unusedPMWarning(v, "temperature", "it is used only when finding a fraction"))
+	}
 	row := r.AddPM("temperature", "Mean gas temperature", e.Value, e.Sigma, units.DimTemperature)
 	if c, err := units.FormatPMIn(e.Value, e.Sigma, units.DimTemperature, "degC"); err == nil {
 		row.Note = "in degrees Celsius: " + c

@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"errors"
+	"strings"
 
 	"tubewright/calc/resonator"
 	"tubewright/calc/units"
@@ -83,4 +84,10 @@ func noResonanceBlame(v *Values, err error, key string) error {
 		return v.Blame(err, key)
 	}
 	return err
+}
+
+// unusedPMWarning says that the ± typed on input key is not carried
+// because the input is not used here (why).
+func unusedPMWarning(v *Values, key, why string) string {
+	return "the ± typed on the " + strings.ToLower(v.Get(key).In.Label) + " is not carried: " + why
 }

@@ -396,3 +396,29 @@ func TestResonanceHumidZoneError(t *testing.T) {
 		t.Errorf("error %v, want one about zone 2's temperature", err)
 	}
 }
+
+// TestUnusedPMWarned: a ± typed on an input the chosen calculation does
+// not use is said to be dropped, never dropped silently.
+func TestUnusedPMWarned(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct {
+		sheet *Sheet
+		texts map[string]string
+	}{
+		{resonanceSheet, map[string]string{"zones": "0.1 m, 10 mm, 300 K", "temperature": "300 K ± 2 K"}},
+		{diagnoseSheet, map[string]string{"gas": "air", "length": "0.6 m", "radius": "12 mm", "measured-frequency": "140 Hz",
+			"temperature": "300 K ± 2 K"}},
+	} {
+		r, err := c.sheet.Evaluate(c.texts)
+		if err != nil {
+			t.Fatal(err)
+		}
+		found := false
+		for _, w := range r.Warnings {
+			found = found || strings.Contains(w, "is not carried")
+		}
+		if !found {
+			t.Errorf("%s %v: warnings %q do not say the ± is dropped", c.sheet.ID, c.texts, r.Warnings)
+		}
+	}
+}

@@ -256,6 +256,9 @@ func runZones(v *Values) (*Result, error) {
 	}
 	r.AddObject("modes", fmt.Sprintf("First %d modes", len(list)), list, zoneModesText(list))
 	r.Warn(res.Warnings...)
+	if v.Q("temperature").Uncertainty > 0 {
+		r.Warn(unusedPMWarning(v, "temperature", "the zoned tube takes the temperature of each zone"))
+	}
 	tubeCautions(r, hot, p.Value)
 	return r, nil
 }
