@@ -95,7 +95,8 @@ func TestPlotReadsNearestPoint(t *testing.T) {
 }
 
 // TestPlotTable switches to the table and checks it lists every point
-// in the axes' units, and that the copied text reads back to the data.
+// in the axes' units, that the text reads back to the data, and that Copy
+// puts it on the clipboard.
 func TestPlotTable(t *testing.T) {
 	t.Parallel()
 	c := NewXYPlot("Mean pressure", "Pa", "|U1|", "m³/s")
@@ -137,6 +138,13 @@ func TestPlotTable(t *testing.T) {
 		if !scalar.EqualWithinRel(x*1e6, xy[i].X, 5e-4) || !scalar.EqualWithinRel(y*1e-6, xy[i].Y, 5e-4) {
 			t.Errorf("row %d = %g MPa, %g mL/s; want %g Pa, %g m³/s", i, x, y, xy[i].X, xy[i].Y)
 		}
+	}
+	h.tap("Copy")
+	if mime, data, ok := h.r.WriteClipboard(); !ok || mime != "application/text" || string(data) != w.TableText() {
+		t.Errorf("Copy put %q (%s, %v) on the clipboard, want the table", data, mime, ok)
+	}
+	if _, ok := h.control("Copied"); !ok {
+		t.Errorf("the Copy button does not say Copied:\n%s", h.dump())
 	}
 	h.tap("Plot")
 	if w.table {
