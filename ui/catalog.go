@@ -22,6 +22,7 @@ var extras = map[sheet.ID]func(env *Env) Screen{
 	sheet.IDPores:     newPoresScreen,
 	sheet.IDOnset:     newOnsetScreen,
 	sheet.IDHeatPump:  newHeatPumpScreen,
+	sheet.IDDesign:    newDesignScreen,
 	sheet.IDListen:    newListenScreen,
 	sheet.IDSafety:    newSafetyScreen,
 	sheet.IDBenchLog:  newBenchLogScreen,

@@ -32,6 +32,7 @@ type Env struct {
 	notify atomic.Pointer[func()]
 	book   *benchBook // the bench log of the safety screens; see bookFor
 	keep   *keepSide  // saved inputs, setups and the log; see keepFor
+	handed string     // a device document for the onset editor; see handDevice
 
 }
 

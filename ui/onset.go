@@ -6,6 +6,7 @@ import (
 
 	"gioui.org/layout"
 
+	"tubewright/calc/linear"
 	"tubewright/calc/sheet"
 )
 
@@ -26,6 +27,22 @@ func newOnsetScreen(env *Env) Screen {
 
 // Title implements Screen.
 func (s *onsetScreen) Title() string { return s.form.Sheet.Title }
+
+// Enter takes a device another screen handed over (the design screen's
+// "Open in Engine onset") into the editor; the next frame solves it. The
+// document is the device file our own screens write, so one that does not
+// read is a programming error.
+func (s *onsetScreen) Enter() {
+	doc, ok := s.env.takeHandedDevice()
+	if !ok {
+		return
+	}
+	var f linear.DeviceFile
+	if err := jsonDecode([]byte(doc), &f); err != nil {
+		panic("ui: handed device does not read: " + err.Error())
+	}
+	s.editor.set(&f)
+}
 
 // onsetTables is the plots' run: the profile of the result shown, then the
 // onset at mean pressures from an eighth to four times the device's, 16

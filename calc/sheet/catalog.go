@@ -54,7 +54,7 @@ var catalog = []Entry{
 	{ID: IDPlacement, Sheet: placementSheet, Place: Everywhere},
 	{ID: IDOnset, Sheet: onsetSheet, Place: Everywhere},
 	{ID: IDHeatPump, Sheet: heatPumpSheet, Place: Everywhere},
-	{ID: IDDesign, Sheet: designSheet, Place: InTerminal},
+	{ID: IDDesign, Sheet: designSheet, Place: Everywhere},
 	{ID: IDSafety, Title: "Safety pass", Summary: "Walk the checks before pressurising: wall stress, relief, test pressure, stored energy, room oxygen, hearing; save the pass in the bench log", Place: InApp},
 	{ID: IDVessel, Sheet: vesselSheet, Place: InTerminal},
 	{ID: IDEnergy, Sheet: energySheet, Place: InTerminal},

@@ -37,7 +37,7 @@ var designSheet = &Sheet{
 		bounded(noPM(MeanPressureInput("pressure", "Mean pressure", ""), "10 bar"), 1e3, 50e6),
 		{Key: "frequency", Label: "Target frequency", Kind: Quantity, Dim: units.DimFrequency, Example: "300 Hz",
 			Min: 1, Max: 20000, Hint: "engine: the frequency it should sing at; heat pump: the tube's resonance at room temperature; e.g. 300 Hz", Share: ShareFrequency},
-		bounded(askedFor(noPM(TemperatureInput("hot", "Hottest the heater reaches (engine)", "", "650 K"), "")), 150, 2000),
+		unshared(bounded(askedFor(noPM(TemperatureInput("hot", "Hottest the heater reaches (engine)", "", "650 K"), "")), 150, 2000)),
 		bounded(noPM(TemperatureInput("ambient", "Ambient (cooler) temperature", "295 K", ""), ""), 150, 500),
 		{Key: "diameter", Label: "Tube inside diameter", Kind: Quantity, Dim: units.DimLength, Example: "50 mm",
 			Min: 1e-3, Max: 2, Hint: "inside diameter of the tube, e.g. 50 mm or 2 in"},
@@ -65,7 +65,7 @@ var designSheet = &Sheet{
 			Hint: "plate gap, pore diameter, screen opening or the wool's hydraulic diameter, e.g. 0.3 mm (empty: no limit)"},
 		{Key: "drive", Label: "Driver pressure amplitude (heat pump)", Kind: Quantity, Dim: units.DimPressure, Optional: true,
 			Min: 0, MinOpen: true, Max: 10e6, Example: "3 kPa", Hint: "pressure amplitude at the driver face, e.g. 3 kPa"},
-		bounded(askedFor(noPM(TemperatureInput("cold", "Cold temperature wanted (heat pump)", "", "273 K"), "")), 20, 500),
+		unshared(bounded(askedFor(noPM(TemperatureInput("cold", "Cold temperature wanted (heat pump)", "", "273 K"), "")), 20, 500)),
 		{Key: "span", Label: "Or the span wanted below ambient (heat pump)", Kind: Quantity, Dim: units.DimTemperatureDifference, Optional: true,
 			Min: 0, MinOpen: true, Max: 1000, Hint: "e.g. 20 K, when no cold temperature is given"},
 		{Key: "device-out", Label: "Write the device file to", Kind: Text, Optional: true, Advanced: true,
@@ -89,6 +89,14 @@ var designSheet = &Sheet{
 // needed).
 func askedFor(in Input) Input {
 	in.Optional = true
+	return in
+}
+
+// unshared returns in without the temperature the app carries between
+// screens: the heater's and the cold end's temperatures are not the gas
+// temperature other screens use, and must not become it.
+func unshared(in Input) Input {
+	in.Share = ShareNone
 	return in
 }
 

@@ -84,3 +84,16 @@ func TestDesignSensitivityLines(t *testing.T) {
 		t.Errorf("heat pump: %d sensitivity lines, want none", len(l))
 	}
 }
+
+// TestDesignSharesOnlyGasTemperatures: the heater's and the cold end's
+// temperatures are not carried between screens as the gas temperature
+// (a heater at 650 K must not become the next screen's gas temperature);
+// the ambient is.
+func TestDesignSharesOnlyGasTemperatures(t *testing.T) {
+	t.Parallel()
+	for key, want := range map[string]Share{"hot": ShareNone, "cold": ShareNone, "ambient": ShareTemperature, "gas": ShareGas, "pressure": SharePressure} {
+		if got := designSheet.Input(key).Share; got != want {
+			t.Errorf("input %s shares %v, want %v", key, got, want)
+		}
+	}
+}
