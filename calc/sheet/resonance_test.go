@@ -422,3 +422,19 @@ func TestUnusedPMWarned(t *testing.T) {
 		}
 	}
 }
+
+// TestZonesPressurePM: an ideal gas's zoned modes do not depend on the
+// pressure (c = √(γRT/M); the impedance ratios at the joints scale alike),
+// so a ± on the pressure gives none on the modes; with humid air the water
+// fraction moves with the pressure and the ± is carried.
+func TestZonesPressurePM(t *testing.T) {
+	t.Parallel()
+	texts := map[string]string{"zones": "0.1 m, 10 mm, 350 K; 0.4 m, 10 mm, 300 K", "pressure": "1 atm ± 0.1 bar"}
+	if f := mustRow(t, resonanceSheet, texts, "frequency"); f.PM != 0 {
+		t.Errorf("dry air: ± %v Hz from the pressure, want none", f.PM)
+	}
+	texts["humidity"] = "80 %"
+	if f := mustRow(t, resonanceSheet, texts, "frequency"); !(f.PM > 1e-6*f.Value) {
+		t.Errorf("humid air: ± %v Hz from the pressure, want one", f.PM)
+	}
+}
