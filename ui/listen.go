@@ -68,6 +68,21 @@ type listenDone struct {
 // shows its progress line instead of the results card.
 var errAnalysing = errors.New("analysing the recording")
 
+// errNothingOpened is the Form's error before a recording is opened (or,
+// with a microphone, when the file input names no recording held, as a
+// setup restored from an earlier session does).
+var errNothingOpened = errors.New("no recording yet")
+
+// opened reports whether the file input names something to analyse: a
+// path on the desktop, the recording held where there is a microphone.
+func (s *listenScreen) opened() bool {
+	name := strings.TrimSpace(s.form.Text("file"))
+	if s.micView != nil {
+		return s.held != nil && name == s.heldName
+	}
+	return name != ""
+}
+
 // listenInlineWait is the inlineWait of new screens (see listenScreen).
 var listenInlineWait time.Duration
 
@@ -126,6 +141,9 @@ func listenKey(v *sheet.Values) string {
 // it returns the finished analysis of these inputs, or starts it off the
 // UI goroutine and returns errAnalysing until it is done.
 func (s *listenScreen) run(v *sheet.Values) (*sheet.Result, error) {
+	if !s.opened() {
+		return nil, v.Blame(errNothingOpened, "file")
+	}
 	key := listenKey(v)
 	if s.done != nil && s.done.key == key {
 		return s.done.res, s.done.err
@@ -202,7 +220,7 @@ func (s *listenScreen) update(gtx layout.Context) {
 		s.showPlots()
 		s.copied = false
 	}
-	if strings.TrimSpace(s.form.Text("file")) == "" {
+	if !s.opened() {
 		// Nothing opened yet: no red field.
 		if fd := s.form.Field("file"); fd != nil {
 			fd.SetError(nil)
@@ -264,10 +282,15 @@ func (s *listenScreen) Layout(gtx layout.Context) layout.Dimensions {
 
 	out := s.form.Outputs()
 	outputs := []layout.Widget{s.status}
-	if s.showResults() {
+	switch {
+	case s.showResults() && s.micView != nil && s.form.Result() == nil:
+		// The file field is not on screen: say what is wrong with the
+		// recording here rather than "check the fields marked in red".
+		outputs = append(outputs, s.failure, out[1], Note(s.env, s.real.About))
+	case s.showResults():
 		outputs = append(outputs, out[0], out[1], s.sendButton, s.freq.Layout, s.level.Layout, s.csvButton)
 		outputs = append(outputs, out[2:]...)
-	} else {
+	default:
 		outputs = append(outputs, out[1], Note(s.env, s.real.About))
 	}
 	head := formHeadline(s.env, s.form)
@@ -293,10 +316,24 @@ func (s *listenScreen) showResults() bool {
 	if s.form.Result() != nil {
 		return true
 	}
-	if s.analysing() || errors.Is(s.form.Err(), errAnalysing) || strings.TrimSpace(s.form.Text("file")) == "" {
+	if s.analysing() || errors.Is(s.form.Err(), errAnalysing) || !s.opened() {
 		return false
 	}
 	return s.form.Err() != nil
+}
+
+// failure says why the recording gave no result, in red.
+func (s *listenScreen) failure(gtx layout.Context) layout.Dimensions {
+	msg := "no result"
+	if err := s.form.Err(); err != nil {
+		msg = err.Error()
+		if fes := sheet.FieldErrors(err); len(fes) > 0 && fes[0].Err != nil {
+			msg = fes[0].Err.Error()
+		}
+	}
+	l := material.Body1(s.env.Theme, "No result: "+msg)
+	l.Color = s.env.Colors.Error
+	return Described("No result", l.Layout)(gtx)
 }
 
 // status is the progress line while the analysis runs, the first step
@@ -314,7 +351,9 @@ func (s *listenScreen) status(gtx layout.Context) layout.Dimensions {
 			layout.Rigid(layout.Spacer{Width: 10}.Layout),
 			layout.Flexed(1, Described("Progress", Para(s.env, "Analysing the recording…"))),
 		)
-	case strings.TrimSpace(s.form.Text("file")) == "" && s.form.Result() == nil:
+	case s.micView != nil && s.mic.State() == micRecording:
+		return Described("Progress", Note(s.env, "Recording: tap Stop and analyse once the tube has rung out."))(gtx)
+	case !s.opened() && s.form.Result() == nil:
 		what := "No recording yet: type its path to see its frequency."
 		if s.micView != nil {
 			what = "No recording yet: record the tube to see its frequency."
@@ -326,7 +365,7 @@ func (s *listenScreen) status(gtx layout.Context) layout.Dimensions {
 
 // againButton reads the file anew (after recording over it).
 func (s *listenScreen) againButton(gtx layout.Context) layout.Dimensions {
-	if strings.TrimSpace(s.form.Text("file")) == "" {
+	if !s.opened() {
 		return layout.Dimensions{}
 	}
 	return smallButton(s.env, gtx, &s.again, "Read the file again")

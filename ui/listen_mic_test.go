@@ -80,3 +80,33 @@ func TestListenMicrophone(t *testing.T) {
 		t.Error("the meter stays after Stop")
 	}
 }
+
+// TestListenMicrophoneSilent: a silent recording from the microphone says
+// why it gives no result on screen (the path field is not shown there),
+// and a recording's name restored from an earlier session, with no
+// recording held, is the starting state rather than an error.
+func TestListenMicrophoneSilent(t *testing.T) {
+	env := NewEnv(nil)
+	s := newListenScreen(env).(*listenScreen)
+	mic := &fakeMic{x: make([]float64, tapRate)}
+	s.setMic(mic)
+	s.inlineWait = 0
+	s.form.SetText("file", "Microphone recording 3 (2.0 s)")
+	h := newHarness(t, image.Pt(412, 4000), s.Layout)
+	if got, _ := h.shown("Progress"); !strings.HasPrefix(got, "No recording yet") {
+		t.Errorf("a stale recording name: progress %q", got)
+	}
+	if _, ok := h.byDesc("No result"); ok {
+		t.Error("a stale recording name shows a failure")
+	}
+	h.tap("Record from the microphone")
+	if got, _ := h.shown("Progress"); !strings.HasPrefix(got, "Recording:") {
+		t.Errorf("while recording: progress %q", got)
+	}
+	h.tap("Stop and analyse")
+	waitAnalysis(t, h, s)
+	got, ok := h.shown("No result")
+	if !ok || !strings.Contains(got, "silent recording") || strings.Contains(got, "marked in red") {
+		t.Errorf("silent recording: %q (shown %v)", got, ok)
+	}
+}
