@@ -224,14 +224,15 @@ func submitted(gtx layout.Context, ed *widget.Editor) bool {
 	}
 }
 
-// layoutStrip draws the bar: a hairline, the three buttons, the note row
-// after a log, and the last message.
+// layoutStrip draws the bar: a hairline, the last message, the note row
+// after a log, and the three buttons, which stay at the very foot so a
+// thumb finds them in the same place whatever is shown above.
 func (b *keepBar) layoutStrip(gtx layout.Context, f *Form) layout.Dimensions {
 	c := b.env.Colors
 	m := op.Record(gtx.Ops)
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
 	dims := layout.Inset{Left: 8, Right: 8, Top: 6, Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-		rows := []layout.FlexChild{layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		buttons := layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			label := "Setups"
 			if b.panel {
 				label = "Close setups"
@@ -249,10 +250,19 @@ func (b *keepBar) layoutStrip(gtx layout.Context, f *Form) layout.Dimensions {
 					return keepButton(b.env, gtx, &b.copy, "Copy result", false)
 				}),
 			)
-		})}
+		})
+		var rows []layout.FlexChild
+		if !b.panel {
+			rows = append(rows, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+				if dims := b.layoutStatus(gtx); dims.Size.Y > 0 {
+					return layout.Dimensions{Size: dims.Size.Add(image.Pt(0, gtx.Dp(6)))}
+				}
+				return layout.Dimensions{}
+			}))
+		}
 		if b.noteShown {
 			rows = append(rows, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				return layout.Inset{Top: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				return layout.Inset{Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 					return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
 						layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
 							return keepEditor(b.env, gtx, &b.note, "Note for this result (optional)", "Log note")
@@ -269,10 +279,7 @@ func (b *keepBar) layoutStrip(gtx layout.Context, f *Form) layout.Dimensions {
 				})
 			}))
 		}
-		if !b.panel {
-			rows = append(rows, layout.Rigid(b.layoutStatus))
-		}
-		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, rows...)
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, append(rows, buttons)...)
 	})
 	call := m.Stop()
 	fill(gtx, c.Surface, dims.Size)
@@ -295,7 +302,7 @@ func (b *keepBar) layoutStatus(gtx layout.Context) layout.Dimensions {
 	if text == "" {
 		return layout.Dimensions{}
 	}
-	return layout.Inset{Top: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+	return layout.Inset{}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 		return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
 			layout.Flexed(1, keepMessage(b.env, "Saved work status", text, bad)),
 			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
