@@ -109,7 +109,7 @@ browser-deps:
 	@command -v npm >/dev/null || { \
 		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
 			echo "installing system packages: nodejs npm"; \
-			DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends nodejs npm >/dev/null; \
+			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends nodejs npm >/dev/null; \
 		else \
 			echo "npm is missing; run:"; echo "  sudo apt-get install -y --no-install-recommends nodejs npm"; exit 1; \
 		fi; }
