@@ -253,3 +253,19 @@ func TestResonanceScreenKeepsBenchTemperature(t *testing.T) {
 		t.Errorf("Bench temperature %v K after the zoned tube, want 300 K", env.Bench.Temperature)
 	}
 }
+
+// TestResonanceScreenSweep: a sweep typed on screen (once only a terminal
+// option) is drawn: the plot holds its points, the gas temperatures typed.
+func TestResonanceScreenSweep(t *testing.T) {
+	env := NewEnv(nil)
+	s := newResonanceScreen(env).(*resonanceScreen)
+	h := newHarness(t, image.Pt(412, 4000), s.Layout)
+	h.retype(s.form.Sheet.Input("sweep").Label, "", "temperature:250 K:450 K:5")
+	c := s.plot.Chart()
+	if c == nil || len(c.Lines) != 1 || len(c.Lines[0]) != 5 {
+		t.Fatalf("chart %+v after a sweep of 5 points; failure %q", c, s.form.Results.Failure())
+	}
+	if x := c.Lines[0]; x[0].X != 250 || x[4].X != 450 {
+		t.Errorf("sweep from %v K to %v K, want 250 K to 450 K", x[0].X, x[4].X)
+	}
+}
