@@ -21,8 +21,11 @@ import (
 // safetyScreen walks the safety pass before pressurising: one checklist
 // item at a time with its why, the inline calculator where a number
 // decides it, a tick and a note; then a review page that saves the pass in
-// the bench log. The general caution is at the top of every step, and
-// every calculator carries its own caution box beside its numbers.
+// the bench log. The general caution is at the top of every step, then the
+// step's worst outcome; every calculator carries its own caution box
+// beside its numbers. The calculators are the descriptions of calc/sheet
+// (vessel, energy, oxygen, spl), one Form each, shared by the steps that
+// show parts of them.
 type safetyScreen struct {
 	env     *Env
 	page    *Page
@@ -39,7 +42,7 @@ type safetyScreen struct {
 	openLog, restart   widget.Clickable
 	rig                widget.Editor
 
-	forms *safetyForms
+	forms *safetyForms // the calculators the steps show
 
 	status    string // after a save attempt
 	statusBad bool
