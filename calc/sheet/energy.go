@@ -18,14 +18,14 @@ var energySheet = &Sheet{
 	Summary: "Stored energy of a gas charge, its TNT equivalent and hazard tier, and the energy of a gas test (safety)",
 	Inputs: []Input{
 		GasInput("gas", ""),
-		energyPressure("pressure", "Charge pressure", "", "30 barg", "the pressure the vessel is filled to, e.g. its MAWP"),
+		withPM(SafetyPressureInput("pressure", "Charge pressure", "", "30 barg", "the pressure the vessel is filled to, e.g. its MAWP")),
 		{Key: "volume", Label: "Gas volume of the rig", Kind: Quantity, Dim: units.DimVolume, Example: "5 L",
 			Hint: "e.g. 5 L, 0.005 m³, 300 in³; ± or +- for an uncertainty", Min: 0, Max: 1e6, MinOpen: true, PM: true},
 		{Key: "temperature", Label: "Gas temperature", Kind: Quantity, Dim: units.DimTemperature, Default: "20 degC",
 			Units: units.Options{DefaultUnit: "K"}, Hint: "e.g. 20 degC, 293 K", Advanced: true},
 		{Key: "ambient", Label: "Ambient pressure (absolute)", Kind: Quantity, Dim: units.DimPressure, Default: "1 atm",
 			Hint: "absolute pressure the gas would expand to, e.g. 1 atm, 1013 mbar", Min: 0, Max: 1e7, MinOpen: true, Advanced: true},
-		energyPressure("test-pressure", "Gas test pressure", "", "", "optional: a pneumatic test pressure, to see what a gas test would store"),
+		optional(SafetyPressureInput("test-pressure", "Gas test pressure", "", "", "a pneumatic test pressure, to see what a gas test would store")),
 	},
 	About: "The isentropic value is the work of reversible adiabatic expansion to the ambient pressure, " +
 		"p V/(γ − 1) (1 − (pa/p)^((γ−1)/γ)); the Brode value (p − pa) V/(γ − 1) is larger. " +
@@ -35,17 +35,6 @@ var energySheet = &Sheet{
 		"twcalc energy --gas argon --pressure 10bara --volume 2L --temperature 400degC --json",
 	},
 	Run: runEnergy,
-}
-
-// energyPressure is a gauge-first pressure that takes a ±.
-func energyPressure(key, label, def, example, hint string) Input {
-	in := SafetyPressureInput(key, label, def, example, hint)
-	in.Optional = key == "test-pressure"
-	in.PM = key == "pressure"
-	if in.PM {
-		in.Hint += "; ± or +- for an uncertainty"
-	}
-	return in
 }
 
 // energyRows are the number rows of the energy sheet, in the order of
