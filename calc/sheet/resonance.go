@@ -28,14 +28,14 @@ var resonanceSheet = &Sheet{
 	Title:   "Tube resonance",
 	Summary: "Frequency from length or length from frequency of a quarter- or half-wave tube, with end corrections, Q and bandwidth; tubes of hot and cold zones; Helmholtz resonators",
 	Inputs: append(append(append([]Input{
-		{Key: "resonator", Label: "Resonator", Kind: Pick, Default: ResonatorTube,
+		{Key: "resonator", Label: "Resonator", Kind: Pick, Optional: true, Example: ResonatorTube,
 			Hint: "tube, zones or helmholtz; the terminal picks zones when --zones is given and helmholtz when --volume is given",
 			Choices: []Choice{
 				{Key: ResonatorTube, Words: "Uniform tube", Value: ResonatorTube},
 				{Key: ResonatorZones, Words: "Hot and cold zones", Value: ResonatorZones},
 				{Key: ResonatorHelmholtz, Words: "Helmholtz resonator", Value: ResonatorHelmholtz},
 			}},
-		{Key: "solve", Label: "Solve for", Kind: Pick, Default: "frequency",
+		{Key: "solve", Label: "Solve for", Kind: Pick, Optional: true, Example: "frequency",
 			Hint: "frequency (from the length) or length (from the target frequency); the terminal picks it from which of --length and --frequency is given",
 			Choices: []Choice{
 				{Key: "frequency", Words: "Frequency from length", Value: "frequency"},
@@ -98,9 +98,11 @@ func secondGasInput(label, hint string) Input {
 }
 
 // resonatorKind is the resonator chosen: as picked, or on the terminal,
-// where the choice is usually not typed, from the inputs given.
+// where the choice is usually not typed, from the inputs given (a volume
+// makes a Helmholtz resonator, zones a zoned tube, anything else a
+// uniform tube).
 func resonatorKind(v *Values) string {
-	if v.Given("resonator") {
+	if v.Has("resonator") {
 		return v.PickKey("resonator")
 	}
 	switch {
@@ -109,24 +111,33 @@ func resonatorKind(v *Values) string {
 	case v.Given("zones"):
 		return ResonatorZones
 	}
-	return v.PickKey("resonator")
+	return ResonatorTube
 }
 
 func runResonance(v *Values) (*Result, error) {
-	switch resonatorKind(v) {
+	kind := resonatorKind(v)
+	var r *Result
+	var err error
+	switch kind {
 	case ResonatorZones:
-		return runZones(v)
+		r, err = runZones(v)
 	case ResonatorHelmholtz:
-		return runHelmholtz(v)
+		r, err = runHelmholtz(v)
+	default:
+		r, err = runTube(v)
 	}
-	return runTube(v)
+	if err == nil && !v.Has("resonator") {
+		// echo the choice worked out, in front of any other
+		r.Derived = append([]Row{{Key: "resonator", Label: "Resonator", Kind: Words, Text: kind}}, r.Derived...)
+	}
+	return r, err
 }
 
 // solveForLength reports whether the uniform tube is solved for its
 // length (from the target frequency): as picked, or on the terminal from
 // which of length and frequency is given.
 func solveForLength(v *Values) (bool, error) {
-	if v.Given("solve") {
+	if v.Has("solve") {
 		return v.PickKey("solve") == "length", nil
 	}
 	byLength, byFreq := v.Given("length"), v.Given("frequency")
@@ -181,6 +192,13 @@ func runTube(v *Values) (*Result, error) {
 		return nil, err
 	}
 	r := &Result{}
+	if !v.Has("solve") {
+		solve := "frequency"
+		if byFreq {
+			solve = "length"
+		}
+		r.DeriveWords("solve", "Solve for", solve)
+	}
 	if byFreq {
 		r.AddPM("length", "Tube length to cut", res.Length, res.LengthSigma, units.DimLength)
 	} else {
