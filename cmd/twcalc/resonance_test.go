@@ -217,3 +217,37 @@ func TestResonanceBadInput(t *testing.T) {
 		}
 	}
 }
+
+// The zoned tube takes up to 5 zones and 20 modes, as the app does; more is
+// refused naming the flag. The resonator worked out from the flags is
+// echoed.
+func TestResonanceZoneLimits(t *testing.T) {
+	t.Parallel()
+	five := "0.1m,10mm,700K;0.1m,10mm,500K;0.1m,10mm,400K;0.2m,10mm,300K;0.2m,10mm,295K"
+	type out struct {
+		Inputs  map[string]json.RawMessage `json:"inputs"`
+		Results map[string]json.RawMessage `json:"results"`
+	}
+	rep := decodeRun[out](t, "resonance", "--zones", five, "--modes", "20")
+	var modes struct {
+		Value []map[string]float64 `json:"value"`
+	}
+	if err := json.Unmarshal(rep.Results["modes"], &modes); err != nil || len(modes.Value) != 20 {
+		t.Fatalf("modes %s: %v", rep.Results["modes"], err)
+	}
+	if got := string(rep.Inputs["resonator"]); got != `"zones"` {
+		t.Errorf("resonator echoed as %s, want \"zones\"", got)
+	}
+	for _, c := range []struct {
+		args []string
+		flag string
+	}{
+		{[]string{"resonance", "--zones", five, "--modes", "21"}, "--modes"},
+		{[]string{"resonance", "--zones", five + ";0.1m,10mm,300K"}, "--zones"},
+	} {
+		var o, e bytes.Buffer
+		if code := run(c.args, &o, &e); code != exitUsage || !strings.HasPrefix(e.String(), "twcalc: "+c.flag+" ") {
+			t.Errorf("%q: exit %d, %q; want a usage error naming %s", c.args, code, e.String(), c.flag)
+		}
+	}
+}
