@@ -76,9 +76,10 @@ func tubeGas(v *Values, T, p float64) (gasprops.Properties, error) {
 	return g, v.Blame(err, key)
 }
 
-// noResonanceKey is the input blamed when the wall losses leave a tube
-// without a resonance (Q below resonator.MinQ): the radius, since a wider
-// tube is the cure the calculator names.
+// noResonanceBlame puts an error saying that the wall losses leave a tube
+// without a resonance (Q below resonator.MinQ) on input key: the radius,
+// or the zones that hold the radii, since a wider tube is the cure the
+// calculator names. Other errors come back unchanged.
 func noResonanceBlame(v *Values, err error, key string) error {
 	if errors.Is(err, resonator.ErrNoResonance) {
 		return v.Blame(err, key)
