@@ -47,7 +47,7 @@ const (
 // order; every other row but the device and the sensitivity goes to the
 // parts card.
 var designHeadRows = map[string]bool{
-	designRowReachable: true, "onset_temperature": true, "frequency": true, "margin": true, "tube_length": true,
+	"onset_temperature": true, "frequency": true, "margin": true, "tube_length": true,
 	"cold_temperature": true, "span": true, "drive_frequency": true, "acoustic_power": true,
 }
 
@@ -140,11 +140,12 @@ func (s *designScreen) show(r *sheet.Result) {
 		case row.Key == designRowDevice:
 			s.takeDevice(row)
 		case inTable[row.Key]:
+		case row.Key == designRowReachable:
+			// The verdict first: a miss must be the first thing read.
+			head.Rows = append([]sheet.Row{row}, head.Rows...)
+			s.fail = row.Outcome == sheet.Fail
 		case designHeadRows[row.Key]:
 			head.Rows = append(head.Rows, row)
-			if row.Key == designRowReachable && row.Outcome == sheet.Fail {
-				s.fail = true
-			}
 		default:
 			parts.Rows = append(parts.Rows, row)
 		}
@@ -196,15 +197,24 @@ func (s *designScreen) state() designState {
 	return designIdle
 }
 
-// Layout implements Screen.
+// Layout implements Screen: the outcome first (progress, the check and
+// the margin, the device and the button to open it), then the inputs, then
+// the parts, the sensitivity table and the method.
 func (s *designScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
 	ws := []layout.Widget{
-		Para(s.env, "Say what you want and what you have: the design runs after every change, in the background. "+
-			"It places and sizes the stack for the lowest onset and tunes the tube to your frequency. Open it in the Engine onset editor to check or change it part by part."),
+		Para(s.env, "Say what you want and what you have; the design runs in the background after every change. "+
+			"It places and sizes the stack for the lowest onset and tunes the tube to your frequency."),
 	}
+	top, details := s.outcome()
+	heading := "The design"
+	if s.fail {
+		heading = "Nearest design"
+	}
+	ws = append(ws, Heading(s.env, heading))
+	ws = append(ws, top...)
+	ws = append(ws, Heading(s.env, "What you want"))
 	ws = append(ws, s.inputs()...)
-	ws = append(ws, Heading(s.env, "Design"))
-	ws = append(ws, s.outcome()...)
+	ws = append(ws, details...)
 	return s.page.Layout(gtx, ws...)
 }

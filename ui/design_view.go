@@ -36,48 +36,51 @@ func (s *designScreen) inputs() []layout.Widget {
 	return main
 }
 
-// outcome returns what the screen shows under the inputs: the progress,
-// the cancelled note, the Form's failure, or the design.
-func (s *designScreen) outcome() []layout.Widget {
+// outcome returns what the screen shows above the inputs (the progress,
+// the cancelled note, the Form's failure, or the design's summary, its
+// cautions, the device and the button that opens it) and below them (the
+// parts, the sensitivity table and the method).
+func (s *designScreen) outcome() (top, details []layout.Widget) {
 	switch s.state() {
 	case designBusy:
-		return []layout.Widget{s.progressCard}
+		return []layout.Widget{s.progressCard}, nil
 	case designCancelled:
 		return []layout.Widget{
 			Described("design status", Note(s.env, capitalize(errCancelled.Error())+".")),
 			func(gtx layout.Context) layout.Dimensions { return smallButton(s.env, gtx, &s.again, "Design again") },
-		}
+		}, nil
 	case designIdle:
-		return []layout.Widget{s.form.Results.Layout}
+		return []layout.Widget{s.form.Results.Layout}, nil
 	}
-	ws := []layout.Widget{}
 	if s.fail {
-		ws = append(ws, Para(s.env, "The target is out of reach. Below is the nearest design found, with what it misses by."))
+		top = append(top, Para(s.env, "The target is out of reach. Below is the nearest design found, with what it misses by."))
 	}
-	ws = append(ws, s.head.Layout, s.form.CautionWidget, s.strip.Layout)
+	top = append(top, s.head.Layout, s.strip.Layout)
 	if s.pump {
-		ws = append(ws, Note(s.env, "Build it in the Heat pump editor part by part from the sizes below (driver first)."))
+		top = append(top, Note(s.env, "Build it in the Heat pump editor part by part from the sizes below, driver first."))
 	} else {
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+		top = append(top, func(gtx layout.Context) layout.Dimensions {
 			return material.Button(s.env.Theme, &s.open, "Open in Engine onset").Layout(gtx)
 		})
 	}
+	top = append(top, s.form.CautionWidget)
 	from := "closed end"
 	if s.pump {
 		from = "driver"
 	}
-	ws = append(ws, Heading(s.env, "Parts, from the "+from), s.parts.Layout)
+	details = append(details, Heading(s.env, "Parts, from the "+from), s.parts.Layout)
 	if len(s.sens) > 0 {
-		ws = append(ws, Heading(s.env, "What moves the onset"),
+		details = append(details, Heading(s.env, "What moves the onset"),
 			Note(s.env, "How the built engine's onset temperature and frequency change for one step of each quantity, the others held as stated."),
 			s.sensitivityTable)
 	}
+	details = append(details, Heading(s.env, "How it was designed"))
 	if r := s.form.Result(); r != nil {
 		for _, n := range r.Notes {
-			ws = append(ws, Described("Method", Note(s.env, n)))
+			details = append(details, Described("Method", Note(s.env, n)))
 		}
 	}
-	return append(ws, Note(s.env, s.form.Sheet.About))
+	return top, append(details, Note(s.env, s.form.Sheet.About))
 }
 
 // progressCard shows the running design's solves with a bar and Cancel.
@@ -103,6 +106,7 @@ func (s *designScreen) progressCard(gtx layout.Context) layout.Dimensions {
 				}),
 				layout.Rigid(layout.Spacer{Height: 12}.Layout),
 				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+					gtx.Constraints.Min.X = 0
 					return smallButton(s.env, gtx, &s.cancel, "Cancel")
 				}),
 			)

@@ -183,7 +183,7 @@ func runDesignWith(v *Values, set *design.Settings) (*Result, error) {
 	r := &Result{}
 	designRows(r, &res)
 	if ue != nil {
-		r.Check("reachable", "Target reached", "no: the nearest design is shown", Fail, ue.Problem)
+		r.Check("reachable", "Target reached", "no", Fail, "the nearest design is shown: "+ue.Problem)
 	} else {
 		r.Check("reachable", "Target reached", "yes", Pass, fmt.Sprintf("onset within 1 %% of %s and %s below the heater's %s",
 			units.Format(t.Frequency, units.DimFrequency), units.Format(res.Margin, units.DimTemperatureDifference), units.Format(t.HotTemperature, units.DimTemperature)))
@@ -240,7 +240,7 @@ func runDesignHeatPump(v *Values, set *design.Settings) (*Result, error) {
 	}
 	r.AddObject("device", "Device file", res.File, text)
 	if ue != nil {
-		r.Check("reachable", "Target reached", "no: the nearest design is shown", Fail, ue.Problem)
+		r.Check("reachable", "Target reached", "no", Fail, "the nearest design is shown: "+ue.Problem)
 	} else {
 		r.Check("reachable", "Target reached", "yes", Pass, fmt.Sprintf("a span of %s at zero load, %s more than wanted",
 			units.Format(res.Span, units.DimTemperatureDifference), units.Format(res.Margin, units.DimTemperatureDifference)))
@@ -311,10 +311,14 @@ func designRows(r *Result, res *design.Result) {
 	}
 	mm("thermal_depth", "Thermal penetration depth δκ", res.ThermalDepth, "at ambient temperature and the target frequency")
 	for _, s := range res.Sensitivity {
-		step, err := units.FormatIn(s.Step, "mm")
-		if s.Unit == "Pa" {
-			step, err = units.FormatIn(s.Step, "bar")
+		in := "mm"
+		switch {
+		case s.Unit == "Pa":
+			in = "bar"
+		case s.Step < 0.1e-3:
+			in = "um" // a pore's 2 % step reads better in µm
 		}
+		step, err := units.FormatIn(s.Step, in)
 		if err != nil {
 			step = units.Format(s.Step, units.DimLength)
 		}
