@@ -27,9 +27,9 @@ var vesselSheet = &Sheet{
 	Inputs: []Input{
 		withPM(SafetyPressureInput("pressure", "Design pressure", "", "30 barg", "internal design pressure")),
 		{Key: "inner-radius", Label: "Inner radius", Kind: Quantity, Dim: units.DimLength, Example: "50 mm",
-			Hint: "inside radius of the shell, e.g. 50 mm, 2 in; ± or +- for an uncertainty", Min: 0, Max: 1e3, MinOpen: true, PM: true},
+			Hint: "inside radius of the shell, e.g. 50 mm, 2 in; ± or +- for an uncertainty", Min: 1e-4, Max: 1e3, PM: true},
 		{Key: "wall-thickness", Label: "Wall thickness", Kind: Quantity, Dim: units.DimLength, Example: "6 mm",
-			Hint: "the thinnest wall, e.g. 6 mm, 0.25 in; ± or +- for an uncertainty", Min: 0, Max: 1e3, MinOpen: true, PM: true},
+			Hint: "the thinnest wall, e.g. 6 mm, 0.25 in; ± or +- for an uncertainty", Min: 1e-5, Max: 1e3, PM: true},
 		{Key: "allowable-stress", Label: "Allowable stress at the hot-end temperature", Kind: Quantity, Dim: units.DimStress,
 			Hint: "your material's allowable stress at the hottest wall temperature, e.g. 138 MPa, 20 ksi", Min: 0, Max: 1e10, MinOpen: true, PM: true},
 		{Key: "joint-efficiency", Label: "Joint efficiency", Kind: Number, Default: "1",
