@@ -13,10 +13,12 @@ import (
 )
 
 // jsMic records from the browser's microphone: getUserMedia (asked only
-// when the user taps Record), a Web Audio graph from the stream to a
-// ScriptProcessorNode whose blocks are copied into Go, and nothing else.
-// The samples stay in this page's memory; the processor's output is left
-// silent, so nothing is played back either. Echo cancellation, noise
+// when the user taps Record), a Web Audio graph from the stream to an
+// AudioWorklet that posts blocks of samples to the page (they queue while
+// the page is busy drawing, so none are lost), copied into Go; where the
+// browser has no AudioWorklet, a ScriptProcessorNode instead. The samples
+// stay in this page's memory; the processor's output is left silent, so
+// nothing is played back either. Echo cancellation, noise
 // suppression and automatic gain are asked off: they would change the
 // ring-down and the level.
 type jsMic struct {
@@ -33,13 +35,41 @@ type jsMic struct {
 	// The Web Audio objects of the recording running (undefined when
 	// none) and the block callback.
 	ctx, stream, source, node js.Value
-	onAudio                   js.Func
+	onAudio, onBlock          js.Func
 }
+
+// tapWorklet is the AudioWorklet module: it collects the first input
+// channel into blocks of 4096 samples and posts each to the page.
+const tapWorklet = `class TwTap extends AudioWorkletProcessor {
+  constructor() { super(); this.buf = new Float32Array(4096); this.n = 0; }
+  process(inputs) {
+    const ch = inputs[0] && inputs[0][0];
+    if (ch) {
+      for (let i = 0; i < ch.length; i++) {
+        this.buf[this.n++] = ch[i];
+        if (this.n === this.buf.length) {
+          this.port.postMessage(this.buf, [this.buf.buffer]);
+          this.buf = new Float32Array(4096);
+          this.n = 0;
+        }
+      }
+    }
+    return true;
+  }
+}
+registerProcessor("tw-tap", TwTap);`
 
 // newRecorder returns the browser's microphone.
 func newRecorder(invalidate func()) recorder {
 	m := &jsMic{invalidate: invalidate, level: math.Inf(-1)}
-	m.onAudio = js.FuncOf(m.block)
+	m.onAudio = js.FuncOf(func(this js.Value, args []js.Value) any {
+		m.block(args[0].Get("inputBuffer").Call("getChannelData", 0))
+		return nil
+	})
+	m.onBlock = js.FuncOf(func(this js.Value, args []js.Value) any {
+		m.block(args[0].Get("data"))
+		return nil
+	})
 	return m
 }
 
@@ -98,13 +128,55 @@ func (m *jsMic) begin(stream js.Value) {
 		m.fail(errors.New("this browser has no Web Audio"))
 		return
 	}
-	ctx := ac.New()
+	// The context runs at the microphone's own rate where the browser says
+	// it, so the samples are not resampled on their way in (Firefox also
+	// refuses a stream at another rate than its context).
+	var ctx js.Value
+	if rate := trackRate(stream); rate > 0 {
+		ctx = ac.New(map[string]any{"sampleRate": rate})
+	} else {
+		ctx = ac.New()
+	}
 	ctx.Call("resume")
 	source := ctx.Call("createMediaStreamSource", stream)
+	wl := ctx.Get("audioWorklet")
+	if wl.IsUndefined() || js.Global().Get("AudioWorkletNode").IsUndefined() {
+		m.connect(ctx, stream, source, m.scriptNode(ctx))
+		return
+	}
+	blob := js.Global().Get("Blob").New([]any{tapWorklet}, map[string]any{"type": "text/javascript"})
+	url := js.Global().Get("URL").Call("createObjectURL", blob)
+	var ok, bad js.Func
+	ok = js.FuncOf(func(this js.Value, args []js.Value) any {
+		ok.Release()
+		bad.Release()
+		js.Global().Get("URL").Call("revokeObjectURL", url)
+		node := js.Global().Get("AudioWorkletNode").New(ctx, "tw-tap")
+		node.Get("port").Set("onmessage", m.onBlock)
+		m.connect(ctx, stream, source, node)
+		return nil
+	})
+	bad = js.FuncOf(func(this js.Value, args []js.Value) any {
+		ok.Release()
+		bad.Release()
+		js.Global().Get("URL").Call("revokeObjectURL", url)
+		m.connect(ctx, stream, source, m.scriptNode(ctx))
+		return nil
+	})
+	wl.Call("addModule", url).Call("then", ok).Call("catch", bad)
+}
+
+// scriptNode returns a ScriptProcessorNode that hands its blocks to Go.
+func (m *jsMic) scriptNode(ctx js.Value) js.Value {
 	node := ctx.Call("createScriptProcessor", 4096, 1, 1)
 	node.Set("onaudioprocess", m.onAudio)
+	return node
+}
+
+// connect joins source → node → destination and starts recording. A
+// processor runs only when connected onwards; its output stays zero.
+func (m *jsMic) connect(ctx, stream, source, node js.Value) {
 	source.Call("connect", node)
-	// A processor runs only when connected onwards; its output stays zero.
 	node.Call("connect", ctx.Get("destination"))
 	m.mu.Lock()
 	m.ctx, m.stream, m.source, m.node = ctx, stream, source, node
@@ -116,13 +188,12 @@ func (m *jsMic) begin(stream js.Value) {
 
 // block copies one block of samples (a Float32Array) into Go and updates
 // the level.
-func (m *jsMic) block(this js.Value, args []js.Value) any {
-	data := args[0].Get("inputBuffer").Call("getChannelData", 0)
+func (m *jsMic) block(data js.Value) {
 	n := data.Get("byteLength").Int()
 	m.mu.Lock()
 	defer m.mu.Unlock()
 	if m.state != micRecording {
-		return nil
+		return
 	}
 	if cap(m.buf) < n {
 		m.buf = make([]byte, n)
@@ -137,7 +208,6 @@ func (m *jsMic) block(this js.Value, args []js.Value) any {
 	}
 	m.level = 20 * math.Log10(peak)
 	go m.invalidate()
-	return nil
 }
 
 // fail records why there is no recording.
@@ -192,6 +262,9 @@ func (m *jsMic) Stop() (*listen.Recording, error) {
 	m.mu.Unlock()
 	if !node.IsUndefined() {
 		node.Set("onaudioprocess", js.Null())
+		if port := node.Get("port"); !port.IsUndefined() {
+			port.Set("onmessage", js.Null())
+		}
 		source.Call("disconnect")
 		node.Call("disconnect")
 		stopTracks(stream)
@@ -202,6 +275,20 @@ func (m *jsMic) Stop() (*listen.Recording, error) {
 		x[i] = float64(v)
 	}
 	return listen.NewRecording(x, rate)
+}
+
+// trackRate returns the sample rate of the stream's first audio track, Hz,
+// or 0 when the browser does not say.
+func trackRate(stream js.Value) float64 {
+	tracks := stream.Call("getAudioTracks")
+	if tracks.Length() == 0 {
+		return 0
+	}
+	st := tracks.Index(0).Call("getSettings")
+	if r := st.Get("sampleRate"); r.Type() == js.TypeNumber && r.Float() >= listen.MinSampleRate && r.Float() <= listen.MaxSampleRate {
+		return r.Float()
+	}
+	return 0
 }
 
 // stopTracks stops every track of a media stream.
