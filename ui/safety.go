@@ -104,6 +104,29 @@ func (s *safetyScreen) goTo(i int) {
 	s.env.Invalidate()
 }
 
+// outcomeOf returns the worst outcome of item i's checks as they stand
+// now, None for an item without a calculator or never shown.
+func (s *safetyScreen) outcomeOf(i int) sheet.Outcome {
+	st, ok := s.calcs[i].(*sheetStep)
+	if !ok || !st.shownOnce() {
+		return sheet.None
+	}
+	st.settle()
+	w, _ := st.worst()
+	return w
+}
+
+// failing lists the numbers of the items whose checks fail.
+func (s *safetyScreen) failing() []string {
+	var out []string
+	for i := range s.calcs {
+		if s.outcomeOf(i) == sheet.Fail {
+			out = append(out, fmt.Sprintf("item %d", i+1))
+		}
+	}
+	return out
+}
+
 // stepShowing returns the first step that shows input key of form f, or
 // -1.
 func (s *safetyScreen) stepShowing(f *Form, key string) int {
@@ -355,6 +378,13 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 	} else {
 		ws = append(ws, Para(s.env, "Every item is ticked. Save the pass to keep a dated record in the bench log."))
 	}
+	if failing := s.failing(); len(failing) > 0 {
+		what, it := fmt.Sprintf("%d items have", len(failing)), "them"
+		if len(failing) == 1 {
+			what, it = "1 item has", "it"
+		}
+		ws = append(ws, statusLine(s.env, "Failing checks", what+" a failing check ("+strings.Join(failing, ", ")+"): put "+it+" right before pressurising, whatever the ticks say.", true))
+	}
 	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 		return s.textBox(gtx, &s.rig, "Rig name (optional)", "e.g. helium engine, bench 2")
 	})
@@ -384,6 +414,10 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 		if s.pass.Done[i] {
 			state = "done"
 		}
+		o := s.outcomeOf(i)
+		if word, _ := outcomeLook(o); word != "" {
+			state += ", checks " + word
+		}
 		label := fmt.Sprintf("%d. %s · %s", i+1, it.Title, state)
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 			return s.jumps[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
@@ -391,7 +425,7 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 				return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 					l := material.Body1(s.env.Theme, label)
 					l.Color = s.env.Colors.Text
-					if !s.pass.Done[i] {
+					if !s.pass.Done[i] || o == sheet.Fail {
 						l.Color = s.env.Colors.Error
 					}
 					return l.Layout(gtx)

@@ -543,4 +543,12 @@ func TestSafetyLogFollowsSharedInputs(t *testing.T) {
 	if len(p.Items[8].Inputs) != 0 || len(p.Items[8].Verdicts) != 0 {
 		t.Errorf("hearing item never shown, logged %+v", p.Items[8])
 	}
+	// The review says which items fail, in words, and marks them.
+	h.tap("Review")
+	if v, _ := h.shown("Failing checks"); !strings.Contains(v, "2 items have a failing check (item 2, item 3)") {
+		t.Errorf("review: failing checks %q:\n%s", v, h.dump())
+	}
+	if !h.hasLabel("3. Relief device set at or below the MAWP · open, checks FAIL") {
+		t.Errorf("review: the relief item is not marked FAIL:\n%s", h.dump())
+	}
 }
