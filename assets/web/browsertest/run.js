@@ -4,7 +4,9 @@
 //   node run.js test DIR   phone size with touch: the page loads and draws,
 //                          a tap opens a calculator, typing into a field
 //                          changes the result, offline + reload still
-//                          starts, and no request leaves the origin
+//                          starts, and no request leaves the origin; then
+//                          saved work survives reloads and goes out and
+//                          back in by export and import (keep.js)
 //   node run.js size DIR   a table of raw and compressed sizes, the bytes a
 //                          cold visit downloads and the first-frame time
 //
@@ -16,6 +18,7 @@ const fs = require("fs");
 const path = require("path");
 const zlib = require("zlib");
 const { chromium } = require("playwright-core");
+const { keepScenario } = require("./keep.js");
 
 const TYPES = { ".html": "text/html; charset=utf-8", ".js": "text/javascript", ".wasm": "application/wasm",
   ".gz": "application/gzip", ".webmanifest": "application/manifest+json", ".svg": "image/svg+xml", ".png": "image/png" };
@@ -147,6 +150,7 @@ async function test(dir) {
     check(foreign.length === 0, "no request left the origin" + (foreign.length ? ": " + foreign.join(", ") : ""));
     check(errors.length === 0, "no page errors" + (errors.length ? ": " + errors.join("; ") : ""));
     await ctx.close();
+    await keepScenario({ browser, url, phone, check, shots: process.env.SHOTS });
   } catch (e) {
     console.error(e.message || e);
     failed = true;
