@@ -339,6 +339,8 @@ func TestScreenshotSafetyStates(t *testing.T) {
 	s.goTo(2)
 	shoot(t, "safety-relief-fail", env, s)
 	shootTall(t, "safety-relief-fail", env, s)
+	s.goTo(s.items())
+	shoot(t, "safety-review-fail", env, s)
 	f.vessel.SetText("mawp", "")
 	// Hydrogen in the rig, carbon dioxide in the cylinder: the gas
 	// cautions beside the numbers.
