@@ -22,7 +22,7 @@ var oxygenSheet = &Sheet{
 		{Key: "room", Label: "Room volume", Kind: Quantity, Dim: units.DimVolume, Example: "30 m3",
 			Hint: "free air volume of the room, e.g. 30 m³, 1000 ft³; ± or +- for an uncertainty", Min: 0, Max: 1e7, MinOpen: true, PM: true},
 		{Key: "release", Label: "Gas released", Kind: Quantity, Dim: units.DimVolume, Optional: true,
-			Hint: "volume released at room conditions, e.g. 9 m³ (added to a cylinder's and the vessel's); ± or +- for an uncertainty", Min: 0, Max: 1e7, PM: true},
+			Hint: "volume released at room conditions, e.g. 9 m³; or give a cylinder or the rig's vessel emptied into the room (they add up); ± or +- for an uncertainty", Min: 0, Max: 1e7, PM: true},
 		{Key: "release-from-cylinder", Label: "Cylinder water capacity", Kind: Quantity, Dim: units.DimVolume, Optional: true,
 			Hint: "the internal volume stamped on a cylinder emptied into the room, e.g. 50 L", Min: 0, Max: 1e3, MinOpen: true},
 		optional(SafetyPressureInput("fill-pressure", "Cylinder fill pressure", "", "", "as on the label or gauge, e.g. 200 bar")),
