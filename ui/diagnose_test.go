@@ -16,7 +16,7 @@ func TestDiagnoseScreen(t *testing.T) {
 	s := newDiagnoseScreen(env)
 	h := newHarness(t, image.Pt(412, 3600), s.Layout)
 	air, _ := gasprops.ParseMixture("air")
-	setup := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: 0.6, Radius: 0.012},
+	setup := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: 0.6, Radius: 0.012, Losses: resonator.WallLosses},
 		Gas: air, Pressure: units.StandardAtmosphere, U: resonator.Uncertainty{Frequency: 2}}
 	e, err := setup.DiagnoseTemperature(140)
 	if err != nil {

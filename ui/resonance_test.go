@@ -35,7 +35,7 @@ func wantTube(t *testing.T, length, radius float64, uLength float64) string {
 	if err != nil {
 		t.Fatal(err)
 	}
-	s := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: length, Radius: radius},
+	s := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: length, Radius: radius, Losses: resonator.WallLosses},
 		Gas: air, Temperature: 293.15, Pressure: units.StandardAtmosphere, U: resonator.Uncertainty{Length: uLength}}
 	r, err := s.SolveFrequency()
 	if err != nil {
@@ -110,7 +110,7 @@ func TestResonanceScreenRealGas(t *testing.T) {
 	s.form.Invalidate()
 	h.retype("Mean pressure", "1 atm", "30 bar")
 	he, _ := gasprops.ParseMixture("helium")
-	setup := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: 0.5, Radius: 0.012},
+	setup := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: 0.5, Radius: 0.012, Losses: resonator.WallLosses},
 		Gas: he, Temperature: 293.15, Pressure: 30e5}
 	ideal, _ := setup.SolveFrequency()
 	setup.GasOptions = &gasprops.Options{NonIdeal: true}
@@ -138,7 +138,7 @@ func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 	h := newHarness(t, image.Pt(412, 5000), s.Layout)
 	h.tap("Hot and cold zones")
 	air, _ := gasprops.ParseMixture("air")
-	zt := resonator.ZonedTube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Gas: air, Pressure: units.StandardAtmosphere,
+	zt := resonator.ZonedTube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Gas: air, Pressure: units.StandardAtmosphere, Losses: resonator.WallLosses,
 		Zones: []resonator.Zone{{Length: 0.1, Radius: 0.012, Temperature: 600}, {Length: 0.4, Radius: 0.012, Temperature: 293.15}}}
 	want, err := zt.Modes(3)
 	if err != nil {

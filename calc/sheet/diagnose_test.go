@@ -13,7 +13,7 @@ import (
 // x = (γ R T / c² - M_He) / (M_Ar - M_He).
 func TestDiagnoseSheetValues(t *testing.T) {
 	t.Parallel()
-	tube := map[string]string{"ends": "closed-closed", "end-correction": "none", "length": "1 m", "radius": "20 mm", "pressure": "1 bar"}
+	tube := map[string]string{"ends": "closed-closed", "end-correction": "none", "length": "1 m", "radius": "20 mm", "pressure": "1 bar", "losses": "none"}
 	with := func(extra map[string]string) map[string]string {
 		m := map[string]string{}
 		for k, v := range tube {

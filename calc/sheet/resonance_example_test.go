@@ -8,7 +8,8 @@ import (
 )
 
 // A quarter-wave tube of air at 20 °C, with a ± on its length: the
-// frequency and its ±, as both front ends show it.
+// frequency and its ±, as both front ends show it (the boundary layers at
+// the wall included, as by default).
 func Example_resonance() {
 	s, _ := sheet.Lookup(sheet.IDResonance)
 	r, err := s.Evaluate(map[string]string{"length": "500 mm ± 1 mm", "radius": "12 mm"})
@@ -18,7 +19,7 @@ func Example_resonance() {
 	}
 	f, _ := r.Row("frequency")
 	fmt.Println(f.Label+":", units.FormatPM(f.Value, f.PM, f.Dim))
-	// Output: Resonance frequency: 169.2 ± 0.3 Hz
+	// Output: Resonance frequency: 167.4 ± 0.3 Hz
 }
 
 // The gas temperature a measured pitch says, for a closed-closed helium
@@ -33,5 +34,5 @@ func Example_diagnose() {
 	}
 	T, _ := r.Row("temperature")
 	fmt.Println(T.Label+":", units.FormatPM(T.Value, T.PM, T.Dim))
-	// Output: Mean gas temperature: 300.5 ± 2.4 K
+	// Output: Mean gas temperature: 308.4 ± 2.5 K
 }

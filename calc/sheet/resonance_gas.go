@@ -10,9 +10,10 @@ import (
 )
 
 // lossesInput chooses how the walls enter a tube's frequency (calc/resonator
-// Losses): not at all, or through Rott's complex wave number.
+// Losses): through Rott's complex wave number, as the onset solver does, so
+// that the two agree on one tube (the default), or not at all.
 func lossesInput() Input {
-	return Input{Key: "losses", Label: "Wall losses in the frequency", Kind: Pick, Default: resonator.LossFree.String(),
+	return Input{Key: "losses", Label: "Wall losses in the frequency", Kind: Pick, Default: resonator.WallLosses.String(),
 		Hint: "none: the plane wave at the adiabatic sound speed, the walls enter only Q; wall: the viscous and thermal boundary layers slow the wave (Rott's complex wave number), noticeably in narrow tubes",
 		Choices: []Choice{
 			{Key: resonator.LossFree.String(), Words: "Loss-free (adiabatic sound speed)", Value: resonator.LossFree},

@@ -59,7 +59,7 @@ func mix(t *testing.T, s string) gasprops.Mixture {
 // (converted by hand to SI), with the documented names and units.
 func TestResonanceJSON(t *testing.T) {
 	t.Parallel()
-	rep := runJSON(t, "resonance", "--gas", "air", "--temperature", "300K", "--pressure", "1atm",
+	rep := runJSON(t, "resonance", "--losses", "none", "--gas", "air", "--temperature", "300K", "--pressure", "1atm",
 		"--ends", "closed-open", "--length", "1m", "--radius", "25mm", "--end-correction", "unflanged", "--mode", "1")
 	s := resonator.Setup{Tube: resonator.Tube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Mode: 1, Length: 1, Radius: 0.025},
 		Gas: mix(t, "air"), Temperature: 300, Pressure: 101325}
@@ -93,7 +93,7 @@ func TestResonanceJSON(t *testing.T) {
 	}
 
 	// --frequency instead of --length gives length, and the round trip holds
-	rep = runJSON(t, "resonance", "--gas", "air", "--temperature", "300K", "--ends", "closed-open",
+	rep = runJSON(t, "resonance", "--losses", "none", "--gas", "air", "--temperature", "300K", "--ends", "closed-open",
 		"--frequency", "85.50245Hz", "--radius", "25mm")
 	L, _ := num(t, rep, "length")
 	if !scalar.EqualWithinRel(L, 1, 1e-5) {
@@ -107,7 +107,7 @@ func TestResonanceJSON(t *testing.T) {
 // A ± typed on an input reaches the outputs as "uncertainty".
 func TestResonanceUncertainty(t *testing.T) {
 	t.Parallel()
-	rep := runJSON(t, "resonance", "--length", "0.25m+-1mm", "--radius", "8mm", "--temperature", "20degC+-2K")
+	rep := runJSON(t, "resonance", "--losses", "none", "--length", "0.25m+-1mm", "--radius", "8mm", "--temperature", "20degC+-2K")
 	_, u := num(t, rep, "frequency")
 	if u == nil || !(*u > 0) {
 		t.Fatalf("frequency without uncertainty")
@@ -123,7 +123,7 @@ func TestResonanceUncertainty(t *testing.T) {
 			t.Errorf("%s has no uncertainty", name)
 		}
 	}
-	rep = runJSON(t, "resonance", "--frequency", "400Hz+-2Hz", "--radius", "25mm", "--gas", "helium", "--ends", "closed-closed")
+	rep = runJSON(t, "resonance", "--losses", "none", "--frequency", "400Hz+-2Hz", "--radius", "25mm", "--gas", "helium", "--ends", "closed-closed")
 	if _, u := num(t, rep, "length"); u == nil || !(*u > 0) {
 		t.Error("length without uncertainty from a frequency ±")
 	}
@@ -132,14 +132,14 @@ func TestResonanceUncertainty(t *testing.T) {
 func TestResonanceSweep(t *testing.T) {
 	t.Parallel()
 	var o, e bytes.Buffer
-	if code := run([]string{"resonance", "--length", "1m", "--radius", "25mm", "--sweep", "temperature:250K:450K:5"}, &o, &e); code != exitOK {
+	if code := run([]string{"resonance", "--losses", "none", "--length", "1m", "--radius", "25mm", "--sweep", "temperature:250K:450K:5"}, &o, &e); code != exitOK {
 		t.Fatalf("exit %d: %s", code, e.String())
 	}
 	lines := strings.Split(strings.TrimSpace(o.String()), "\n")
 	if lines[0] != "temperature_K,frequency_Hz" || len(lines) != 6 {
 		t.Fatalf("CSV:\n%s", o.String())
 	}
-	rep := runJSON(t, "resonance", "--gas", "helium", "--length", "1m", "--radius", "25mm", "--sweep", "fraction:0:0.3:4", "--second-gas", "argon")
+	rep := runJSON(t, "resonance", "--losses", "none", "--gas", "helium", "--length", "1m", "--radius", "25mm", "--sweep", "fraction:0:0.3:4", "--second-gas", "argon")
 	if rep.Table == nil || len(rep.Table.Rows) != 4 || rep.Table.Columns[0] != "mole_fraction_argon" {
 		t.Fatalf("fraction sweep table %+v", rep.Table)
 	}
@@ -160,7 +160,7 @@ func TestResonanceSweep(t *testing.T) {
 
 func TestResonanceZonesAndHelmholtz(t *testing.T) {
 	t.Parallel()
-	rep := runJSON(t, "resonance", "--ends", "closed-open", "--zones", "0.1m,10mm,700K;0.4m,10mm,295K", "--modes", "2")
+	rep := runJSON(t, "resonance", "--losses", "none", "--ends", "closed-open", "--zones", "0.1m,10mm,700K;0.4m,10mm,295K", "--modes", "2")
 	f, _ := num(t, rep, "frequency")
 	zt := resonator.ZonedTube{Ends: resonator.ClosedOpen, Correction: resonator.Unflanged, Gas: mix(t, "air"), Pressure: 101325,
 		Zones: []resonator.Zone{{Length: 0.1, Radius: 0.01, Temperature: 700}, {Length: 0.4, Radius: 0.01, Temperature: 295}}}
@@ -175,7 +175,7 @@ func TestResonanceZonesAndHelmholtz(t *testing.T) {
 	if err := json.Unmarshal(rep.Results["modes"].Value, &modes); err != nil || len(modes) != 2 {
 		t.Fatalf("modes %s: %v", rep.Results["modes"].Value, err)
 	}
-	rep = runJSON(t, "resonance", "--volume", "1L", "--neck-length", "50mm", "--neck-radius", "10mm")
+	rep = runJSON(t, "resonance", "--losses", "none", "--volume", "1L", "--neck-length", "50mm", "--neck-radius", "10mm")
 	f, _ = num(t, rep, "frequency")
 	g, _ := mix(t, "air").Properties(293.15, 101325, nil)
 	h, _ := resonator.HelmholtzFrequency(resonator.Helmholtz{Volume: 1e-3, NeckLength: 0.05, NeckRadius: 0.01, Outer: resonator.Unflanged}, g)
