@@ -24,6 +24,17 @@ type Porter interface {
 	Import() ([]byte, error)
 }
 
+// PathPorter is a Porter without a file dialog (the desktop build): the
+// Saved work page shows a field for the path of the file to import,
+// starting at ImportPath, and reads it with ImportFrom.
+type PathPorter interface {
+	Porter
+	// ImportPath is the path offered at first.
+	ImportPath() string
+	// ImportFrom reads the file at path (at most store.MaxLibraryBytes).
+	ImportFrom(path string) ([]byte, error)
+}
+
 // ErrCancelled is returned by Porter.Import when the user chose no file.
 var ErrCancelled = errors.New("no file chosen")
 

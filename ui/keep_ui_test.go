@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"errors"
 	"strings"
 	"testing"
 	"time"
@@ -197,3 +198,42 @@ func TestExportImportMerge(t *testing.T) {
 
 // phone is the phone screen size of the UI tests.
 var phone = shotSizes[0].size
+
+// pathPorterFake is a Porter without a file dialog: it reads what the test
+// put at a path.
+type pathPorterFake struct {
+	porterFake
+	files map[string][]byte
+}
+
+func (p *pathPorterFake) ImportPath() string { return "/data/import.json" }
+
+func (p *pathPorterFake) ImportFrom(path string) ([]byte, error) {
+	if b, ok := p.files[path]; ok {
+		return b, nil
+	}
+	return nil, errors.New("there is no file " + path)
+}
+
+// TestImportFromTypedPath imports from the path typed on the Saved work
+// page where there is no file dialog.
+func TestImportFromTypedPath(t *testing.T) {
+	lib := store.NewLibrary()
+	lib.Setups = append(lib.Setups, store.Setup{Name: "from a stick", Calculator: string(sheet.IDGas), Inputs: map[string]string{"gas": "argon"}, Saved: time.Now()})
+	data, err := lib.Marshal()
+	if err != nil {
+		t.Fatal(err)
+	}
+	p := &pathPorterFake{files: map[string][]byte{"/media/usb/rig.json": data}}
+	k := NewMemoryKeeper()
+	k.WaitLoaded(5 * time.Second)
+	a := NewApp(nil)
+	a.UseKeeper(k, p)
+	a.Open(sheet.IDSaved)
+	h := newHarness(t, phone, a.Layout)
+	h.tap("Import a file")
+	waitFor(t, h, k, func() bool { msg, _ := h.shown("Saved work status"); return strings.Contains(msg, "/data/import.json") })
+	h.retype("File to import", "/data/import.json", "/media/usb/rig.json")
+	h.tap("Import a file")
+	waitFor(t, h, k, func() bool { _, ok := h.byDesc("Setup from a stick"); return ok })
+}

@@ -34,6 +34,8 @@ type savedScreen struct {
 	logRows, setupRows                            []widget.Clickable
 	logShown                                      []store.Entry
 	setupsShown                                   []store.Setup
+	path                                          widget.Editor // the file to import, where there is no file dialog
+	pathSet                                       bool
 	entry                                         *store.Entry // the entry shown whole
 	setup                                         string       // the setup selected
 
@@ -112,9 +114,15 @@ func (s *savedScreen) update(gtx layout.Context) {
 		s.exportAll(porter)
 	}
 	if s.importIt.Clicked(gtx) {
-		s.say("Choose the file to import…", false)
+		read := porter.Import
+		if pp, ok := porter.(PathPorter); ok {
+			p := strings.TrimSpace(s.path.Text())
+			read = func() ([]byte, error) { return pp.ImportFrom(p) }
+		} else {
+			s.say("Choose the file to import…", false)
+		}
 		s.background(func() func() {
-			data, err := porter.Import()
+			data, err := read()
 			return func() {
 				switch {
 				case errors.Is(err, ErrCancelled):
@@ -252,6 +260,15 @@ func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 						return keepButton(env, gtx, &s.setAside, "Set it aside, start afresh", false)
 					})
 			})
+	}
+	if pp, ok := keepFor(env).porter.(PathPorter); ok {
+		if !s.pathSet {
+			s.path.SingleLine, s.pathSet = true, true
+			s.path.SetText(pp.ImportPath())
+		}
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return keepEditor(env, gtx, &s.path, "Path of the file to import", "File to import")
+		})
 	}
 	ws = append(ws,
 		func(gtx layout.Context) layout.Dimensions {

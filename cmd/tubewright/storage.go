@@ -44,9 +44,11 @@ func closeStorage(k *ui.Keeper) {
 }
 
 // folderPorter writes export files into the data folder's "exports"
-// folder and reads an import file from the data folder ("import.json"):
-// the desktop build has no file dialog (the one Gio's extension module
-// offers for this Gio version was not taken; see the package notes).
+// folder and reads an import file from a path the user types (the data
+// folder's "import.json" at first). The desktop build has no file dialog:
+// the only version of Gio's extension module the module proxy serves,
+// gioui.org/x v0.2.0, was made for Gio v0.2.0, and its Linux dialog (the
+// desktop portal over D-Bus) could not be tried on our machines.
 type folderPorter struct{ dir string }
 
 // Export implements ui.Porter.
@@ -61,18 +63,30 @@ func (p folderPorter) Export(name string, data []byte) (string, error) {
 	return "saved as " + path, nil
 }
 
-// Import implements ui.Porter.
-func (p folderPorter) Import() ([]byte, error) {
-	path := filepath.Join(p.dir, "import.json")
-	data, err := os.ReadFile(path)
+// Import implements ui.Porter: the file at ImportPath.
+func (p folderPorter) Import() ([]byte, error) { return p.ImportFrom(p.ImportPath()) }
+
+// ImportPath implements ui.PathPorter.
+func (p folderPorter) ImportPath() string { return filepath.Join(p.dir, "import.json") }
+
+// ImportFrom implements ui.PathPorter.
+func (p folderPorter) ImportFrom(path string) ([]byte, error) {
+	if path == "" {
+		return nil, errors.New("type the path of the file to import")
+	}
+	st, err := os.Stat(path)
 	if errors.Is(err, fs.ErrNotExist) {
-		return nil, fmt.Errorf("put the file to import at %s and tap Import again", path)
+		return nil, fmt.Errorf("there is no file %s", path)
 	}
 	if err != nil {
 		return nil, err
 	}
-	if len(data) > store.MaxLibraryBytes {
-		return nil, fmt.Errorf("%s is %d bytes, more than the %d MB a library may have", path, len(data), store.MaxLibraryBytes>>20)
+	if st.Size() > store.MaxLibraryBytes {
+		return nil, fmt.Errorf("%s is %d bytes, more than the %d MB a library may have", path, st.Size(), store.MaxLibraryBytes>>20)
+	}
+	data, err := os.ReadFile(path)
+	if err != nil {
+		return nil, err
 	}
 	return data, nil
 }
