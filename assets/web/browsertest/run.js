@@ -24,9 +24,11 @@ const TYPES = { ".html": "text/html; charset=utf-8", ".js": "text/javascript", "
   ".gz": "application/gzip", ".webmanifest": "application/manifest+json", ".svg": "image/svg+xml", ".png": "image/png" };
 
 // serve starts a static server for dir; sent counts body bytes per path.
+// stats.dir may be changed to serve another folder (a new build).
 function serve(dir) {
-  const stats = { bytes: 0, requests: [] };
+  const stats = { bytes: 0, requests: [], dir };
   const server = http.createServer((req, res) => {
+    const dir = stats.dir;
     let p = decodeURIComponent(new URL(req.url, "http://x").pathname);
     if (p.endsWith("/")) p += "index.html";
     const file = path.join(dir, path.normalize(p));
@@ -149,6 +151,7 @@ async function test(dir) {
     await ctx.setOffline(false);
     check(foreign.length === 0, "no request left the origin" + (foreign.length ? ": " + foreign.join(", ") : ""));
     check(errors.length === 0, "no page errors" + (errors.length ? ": " + errors.join("; ") : ""));
+    await updates(browser, dir, stats, url);
     await ctx.close();
     await keepScenario({ browser, url, phone, check, shots: process.env.SHOTS });
   } catch (e) {
@@ -160,6 +163,61 @@ async function test(dir) {
   }
   if (failed) process.exit(1);
   console.log("browser test: passed");
+}
+
+// copyBuild copies a built folder under a new build name; drop lists files
+// to leave out (an incomplete upload).
+function copyBuild(dir, name, drop) {
+  const out = fs.mkdtempSync(path.join(require("os").tmpdir(), "tw-" + name + "-"));
+  const old = /const BUILD = "([0-9a-f]+)"/.exec(fs.readFileSync(path.join(dir, "sw.js"), "utf8"))[1];
+  for (const f of fs.readdirSync(dir)) {
+    if (drop.includes(f)) continue;
+    let b = fs.readFileSync(path.join(dir, f));
+    if (f === "sw.js" || f === "index.html") b = Buffer.from(b.toString("utf8").split(old).join(name));
+    fs.writeFileSync(path.join(out, f), b);
+  }
+  return out;
+}
+
+// updates publishes two new builds under a running app: one with a file
+// missing, which must not replace the working set, then a complete one,
+// which must replace it whole and offer a reload. Its own context, so the
+// page checked before is not disturbed.
+async function updates(browser, dir, stats, url) {
+  const sets = (page) => page.evaluate(async () => (await caches.keys()).sort().join(" "));
+  const build = (page) => page.evaluate(() => BUILD);
+  const update = (page) => page.evaluate(async () => (await navigator.serviceWorker.getRegistration()).update().catch(() => {}));
+  const ctx = await browser.newContext(phone);
+  const page = await ctx.newPage();
+  try {
+    await page.goto(url);
+    await firstFrame(page);
+    await page.waitForFunction(async () => !!navigator.serviceWorker.controller &&
+      (await caches.keys()).length === 1, null, { timeout: 60000 });
+    const a = await build(page);
+    check(await sets(page) === "tubewright-" + a, `a visit keeps one set of files, tubewright-${a}`);
+
+    stats.dir = copyBuild(dir, "00000000000b", ["tubewright.wasm.gz", "tubewright.wasm"]);
+    await update(page);
+    await page.waitForTimeout(3000);
+    check(await sets(page) === "tubewright-" + a, "a new build with files missing does not replace the set");
+    await page.reload();
+    await firstFrame(page);
+    check(await build(page) === a, "the app still starts from the complete old set");
+
+    stats.dir = copyBuild(dir, "00000000000c", []);
+    await update(page);
+    await page.waitForFunction(async () => (await caches.keys()).join(" ") === "tubewright-00000000000c", null, { timeout: 60000 });
+    check(true, "a complete new build replaced the set whole, the old set deleted");
+    await page.waitForFunction(() => document.getElementById("update").style.display === "flex", null, { timeout: 10000 });
+    check(true, "the running app offers to reload into the new build");
+    await page.reload();
+    await firstFrame(page);
+    check(await build(page) === "00000000000c", "after a reload the new build runs");
+  } finally {
+    stats.dir = dir;
+    await ctx.close();
+  }
 }
 
 function human(n) { return (n / 1e6).toFixed(2) + " MB"; }
