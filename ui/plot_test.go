@@ -92,6 +92,21 @@ func TestPlotReadsNearestPoint(t *testing.T) {
 	if want := "Marked point: Length 147 ± 2 mm · Frequency 578.2 ± 8 Hz"; s != want {
 		t.Errorf("readout %q, want %q", s, want)
 	}
+	// A mouse hovering reads the point under it and lets go when it
+	// leaves the plot.
+	origin := h.mustDesc("Plot drawing").Desc.Bounds.Min
+	sx, sy, _ := w.geom.toPx(0.2, 425)
+	p := f32.Pt(float32(sx)+float32(origin.X), float32(sy)+float32(origin.Y))
+	h.r.Queue(pointer.Event{Kind: pointer.Move, Source: pointer.Mouse, Position: p})
+	h.frames(2)
+	if s, _ = h.shown("Plot readout"); s != "Length 200 mm · Frequency 425 Hz" {
+		t.Errorf("hover readout %q", s)
+	}
+	h.r.Queue(pointer.Event{Kind: pointer.Move, Source: pointer.Mouse, Position: f32.Pt(5, 690)})
+	h.frames(2)
+	if s, _ = h.shown("Plot readout"); !strings.Contains(s, "Touch the plot") {
+		t.Errorf("after the mouse left: %q", s)
+	}
 }
 
 // TestPlotTable switches to the table and checks it lists every point
