@@ -147,9 +147,12 @@ func shortStackRows(r *Result, ss *linear.ShortStackResult, pump bool) {
 	if ss == nil {
 		return
 	}
+	r.Add("short_stack_mean_temperature", "Short-stack estimates made at", ss.MeanTemperature, units.DimTemperature).Note =
+		"the stack's mean gas temperature"
 	if pump {
 		row := r.Add("short_stack_zero_load_span", "Short-stack zero-load span (quick estimate)", ss.ZeroLoadSpan, units.DimTemperatureDifference)
-		row.Note = "with no load and no heat conducted back; compare with the solved span"
+		row.Note = "with no load and no heat conducted back, gas at the stack's mean temperature, " +
+			units.Format(ss.MeanTemperature, units.DimTemperature) + "; compare with the solved span"
 		if ss.ZeroLoadRatio <= 0 {
 			row.Note = "none: viscous losses outweigh the pumping in this estimate"
 		}
@@ -157,7 +160,7 @@ func shortStackRows(r *Result, ss *linear.ShortStackResult, pump bool) {
 			"below 1 the stack pumps heat; at 1, the critical gradient, pumping stops"
 	} else {
 		r.Add("short_stack_critical_difference", "Short-stack critical ΔT (quick estimate)", ss.CriticalDifference, units.DimTemperatureDifference).Note =
-			"gas at ambient temperature, stack centre from the closed end"
+			"gas at the stack's mean temperature, " + units.Format(ss.MeanTemperature, units.DimTemperature) + ", stack centre from the closed end"
 		r.Add("short_stack_gradient_ratio", "Short-stack Γ (onset ΔT / critical)", ss.GradientRatio, units.DimNone).Note =
 			"above 1 the stack can drive sound; losses elsewhere push onset higher"
 	}
