@@ -23,6 +23,25 @@ PLAYWRIGHT_VERSION := 1.65.2
 BROWSER_PKGS := chromium fonts-dejavu-core
 SERVE_ADDR ?= 127.0.0.1:8080
 
+# apt_install checks that the Debian packages $(1) are installed; as root it
+# installs the missing ones, otherwise it prints the command and fails.
+define apt_install
+	@missing=""; \
+	for p in $(1); do \
+		dpkg-query -W -f='$${Status}' $$p 2>/dev/null | grep -q 'install ok installed' || missing="$$missing $$p"; \
+	done; \
+	if [ -n "$$missing" ]; then \
+		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
+			echo "installing system packages:$$missing"; \
+			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends $$missing >/dev/null; \
+		else \
+			echo "missing system packages; run:"; \
+			echo "  sudo apt-get install -y --no-install-recommends$$missing"; \
+			exit 1; \
+		fi; \
+	fi
+endef
+
 .PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
 	web serve-web web-size browser-deps browser-test apk shots bench fuzz clean
 
@@ -40,20 +59,7 @@ check-go:
 	@command -v $(GO) >/dev/null || { echo "Go is missing: install Go 1.26 or newer (https://go.dev/doc/install) and put it on PATH"; exit 1; }
 
 deps: check-go
-	@missing=""; \
-	for p in $(DEB_PKGS); do \
-		dpkg-query -W -f='$${Status}' $$p 2>/dev/null | grep -q 'install ok installed' || missing="$$missing $$p"; \
-	done; \
-	if [ -n "$$missing" ]; then \
-		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
-			echo "installing system packages:$$missing"; \
-			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends $$missing >/dev/null; \
-		else \
-			echo "missing system packages; run:"; \
-			echo "  sudo apt-get install -y --no-install-recommends$$missing"; \
-			exit 1; \
-		fi; \
-	fi
+	$(call apt_install,$(DEB_PKGS))
 
 fmt-check:
 	@out=$$(gofmt -l $$(git ls-files '*.go' 2>/dev/null || find . -name '*.go')); \
@@ -92,20 +98,7 @@ web-size: web browser-deps
 	NODE_PATH=$(CURDIR)/$(NPM_DIR)/node_modules node assets/web/browsertest/run.js size $(WEB_DIR)
 
 browser-deps:
-	@missing=""; \
-	for p in $(BROWSER_PKGS); do \
-		dpkg-query -W -f='$${Status}' $$p 2>/dev/null | grep -q 'install ok installed' || missing="$$missing $$p"; \
-	done; \
-	if [ -n "$$missing" ]; then \
-		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
-			echo "installing system packages:$$missing"; \
-			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends $$missing >/dev/null; \
-		else \
-			echo "missing system packages; run:"; \
-			echo "  sudo apt-get install -y --no-install-recommends$$missing"; \
-			exit 1; \
-		fi; \
-	fi
+	$(call apt_install,$(BROWSER_PKGS))
 	@command -v npm >/dev/null || { \
 		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
 			echo "installing system packages: nodejs npm"; \
