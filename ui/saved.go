@@ -293,10 +293,14 @@ func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 
 // where says where the work is kept and whether it will stay.
 func (s *savedScreen) where(gtx layout.Context) layout.Dimensions {
-	kind, persist, ok := s.keeper().Where()
+	k := s.keeper()
+	kind, persist, ok := k.Where()
 	text := "Looking for your storage…"
-	if ok {
+	switch {
+	case ok:
 		text = "Kept in " + kind + "; " + persist.String() + "."
+	case k.Loaded():
+		text = "Nothing can be kept on this device: no storage could be opened (see below), so setups and results cannot be saved."
 	}
 	return Described("Where saved work is kept", Para(s.env, text))(gtx)
 }
