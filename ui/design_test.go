@@ -235,3 +235,30 @@ func TestScreenshotDesignRunning(t *testing.T) {
 		t.Errorf("state %v, want the progress shown", s.state())
 	}
 }
+
+// TestDesignLeaveCancels: covering the design screen cancels its running
+// design; uncovering it starts the design again and finishes it.
+func TestDesignLeaveCancels(t *testing.T) {
+	backgroundDesign(t)
+	a := NewApp(nil)
+	a.Open(sheet.IDDesign)
+	s := a.Screen(sheet.IDDesign).(*designScreen)
+	h := newHarness(t, image.Pt(1440, 4000), func(gtx layout.Context) layout.Dimensions { return a.Layout(gtx) })
+	if !s.run.running() {
+		t.Fatal("the design did not start")
+	}
+	a.Open(sheet.IDGas)
+	if s.run.running() {
+		t.Error("covered by another screen, the design still runs")
+	}
+	h.frames(2)
+	a.Back()
+	h.frame()
+	if a.Current() != sheet.IDDesign || !s.run.running() {
+		t.Fatalf("back on %q, running %v: want the design started again", a.Current(), s.run.running())
+	}
+	waitDesign(t, h, s)
+	if s.form.Result() == nil {
+		t.Errorf("no design after returning: %v", s.form.Err())
+	}
+}
