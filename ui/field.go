@@ -292,12 +292,22 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 				l.Color = c.Error
 				return Described(f.Label+" error", l.Layout)(gtx)
 			}
-			l := material.Caption(th, f.hint())
+			l := material.Caption(th, f.reading())
 			l.Color = c.Muted
 			l.TextSize = unit.Sp(13)
-			return l.Layout(gtx)
+			return Described(f.Label+" reading", l.Layout)(gtx)
 		}),
 	)
+}
+
+// reading is the line under a field that parsed: for a pressure it says
+// how the text was read, gauge or absolute ("30 bar read as 30 barg = 31.01
+// bar absolute"); otherwise the hint.
+func (f *Field) reading() string {
+	if q, err := f.Quantity(); err == nil && q.Dim == units.DimPressure && strings.TrimSpace(f.Text()) != "" {
+		return units.DescribePressure(f.Text(), q, f.Options.Atmosphere)
+	}
+	return f.hint()
 }
 
 // hint returns the accepted-units hint.

@@ -102,6 +102,9 @@ func (r *report) inputQuantity(name string, q units.Quantity, typed string) {
 	if strings.ReplaceAll(si, " ", "") != strings.ReplaceAll(typed, " ", "") {
 		shown += "  (= " + si + ")"
 	}
+	if q.Dim == units.DimPressure {
+		shown = units.DescribePressure(typed, q, 0) + "  (= " + si + ")"
+	}
 	r.put(&r.inputs, "input", name, v, shown)
 }
 

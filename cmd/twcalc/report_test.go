@@ -162,7 +162,7 @@ func TestReportInputEcho(t *testing.T) {
 		dim   units.Dimension
 		want  string
 	}{
-		{"1atm", units.DimPressure, "1atm  (= 101325 Pa)"},
+		{"1atm", units.DimPressure, "1atm absolute = 0 barg  (= 101325 Pa)"},
 		{"20degC", units.DimTemperature, "20degC  (= 293.15 K)"},
 		{"12mm", units.DimLength, "12mm  (= 0.012 m)"},
 		{"0.5m", units.DimLength, "0.5m\n"},
