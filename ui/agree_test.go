@@ -189,49 +189,56 @@ func TestAppAndTerminalAgree(t *testing.T) {
 		covered[c.id]++
 		t.Run(string(c.id)+"/"+c.name, func(t *testing.T) {
 			term, stderr := runTerminal(t, s, c)
-			f := runApp(t, s, c)
-			if c.errKey != "" {
-				if term != nil {
-					t.Fatalf("terminal gave a result, want an error about --%s", c.errKey)
-				}
-				if want := "twcalc: --" + c.errKey + " "; !strings.HasPrefix(stderr, want) {
-					t.Errorf("terminal error %q does not start with %q", stderr, want)
-				}
-				var keys []string
-				for _, fe := range sheet.FieldErrors(f.Err()) {
-					keys = append(keys, fe.Key)
-				}
-				if len(keys) == 0 || keys[0] != c.errKey {
-					t.Fatalf("app error %v names inputs %v, want %s first", f.Err(), keys, c.errKey)
-				}
-				if fd := f.Field(c.errKey); fd != nil && fd.ErrorText() == "" {
-					t.Errorf("app field %s shows no error", c.errKey)
-				}
-				return
-			}
-			if term == nil {
-				t.Fatalf("terminal failed: %s", stderr)
-			}
-			res := f.Result()
-			if res == nil {
-				t.Fatalf("app gave no result: %v", f.Err())
-			}
-			compareRows(t, res, term)
-			if !equalStrings(res.Warnings, term.Warnings) {
-				t.Errorf("warnings differ:\napp:      %q\nterminal: %q", res.Warnings, term.Warnings)
-			}
-			if !equalStrings(res.Cautions, term.Cautions) {
-				t.Errorf("cautions differ:\napp:      %q\nterminal: %q", res.Cautions, term.Cautions)
-			}
-			if v := res.Verdicts(); !equalVerdicts(v, term.Verdicts) {
-				t.Errorf("verdicts differ:\napp:      %+v\nterminal: %+v", v, term.Verdicts)
-			}
+			checkAgreement(t, runApp(t, s, c), c.errKey, term, stderr)
 		})
 	}
 	for _, e := range sheet.Catalog() {
 		if e.Sheet != nil && e.Place&sheet.InApp != 0 && covered[e.ID] < 3 {
 			t.Errorf("calculator %s has %d agreement cases; want at least 3 (one with ±, one bad input)", e.ID, covered[e.ID])
 		}
+	}
+}
+
+// checkAgreement asserts that the app's form and the terminal's output
+// agree: on an error, both name input errKey; otherwise the same rows,
+// values, ±, warnings, cautions and verdicts.
+func checkAgreement(t *testing.T, f *Form, errKey string, term *terminalOut, stderr string) {
+	t.Helper()
+	if errKey != "" {
+		if term != nil {
+			t.Fatalf("terminal gave a result, want an error about --%s", errKey)
+		}
+		if want := "twcalc: --" + errKey + " "; !strings.HasPrefix(stderr, want) {
+			t.Errorf("terminal error %q does not start with %q", stderr, want)
+		}
+		var keys []string
+		for _, fe := range sheet.FieldErrors(f.Err()) {
+			keys = append(keys, fe.Key)
+		}
+		if len(keys) == 0 || keys[0] != errKey {
+			t.Fatalf("app error %v names inputs %v, want %s first", f.Err(), keys, errKey)
+		}
+		if fd := f.Field(errKey); fd != nil && fd.ErrorText() == "" {
+			t.Errorf("app field %s shows no error", errKey)
+		}
+		return
+	}
+	if term == nil {
+		t.Fatalf("terminal failed: %s", stderr)
+	}
+	res := f.Result()
+	if res == nil {
+		t.Fatalf("app gave no result: %v", f.Err())
+	}
+	compareRows(t, res, term)
+	if !equalStrings(res.Warnings, term.Warnings) {
+		t.Errorf("warnings differ:\napp:      %q\nterminal: %q", res.Warnings, term.Warnings)
+	}
+	if !equalStrings(res.Cautions, term.Cautions) {
+		t.Errorf("cautions differ:\napp:      %q\nterminal: %q", res.Cautions, term.Cautions)
+	}
+	if v := res.Verdicts(); !equalVerdicts(v, term.Verdicts) {
+		t.Errorf("verdicts differ:\napp:      %+v\nterminal: %+v", v, term.Verdicts)
 	}
 }
 

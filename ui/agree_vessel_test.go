@@ -105,40 +105,7 @@ func TestSafetyPassAgreesWithTerminal(t *testing.T) {
 		covered[c.id]++
 		t.Run(string(c.id)+"/"+c.name, func(t *testing.T) {
 			term, stderr := runTerminal(t, s, c)
-			f := runSafetyApp(t, s, c)
-			if c.errKey != "" {
-				if term != nil {
-					t.Fatalf("terminal gave a result, want an error about --%s", c.errKey)
-				}
-				if want := "twcalc: --" + c.errKey + " "; !strings.HasPrefix(stderr, want) {
-					t.Errorf("terminal error %q does not start with %q", stderr, want)
-				}
-				fes := sheet.FieldErrors(f.Err())
-				if len(fes) == 0 || fes[0].Key != c.errKey {
-					t.Fatalf("app error %v, want one about %s first", f.Err(), c.errKey)
-				}
-				if fd := f.Field(c.errKey); fd != nil && fd.ErrorText() == "" {
-					t.Errorf("app field %s shows no error", c.errKey)
-				}
-				return
-			}
-			if term == nil {
-				t.Fatalf("terminal failed: %s", stderr)
-			}
-			res := f.Result()
-			if res == nil {
-				t.Fatalf("app gave no result: %v", f.Err())
-			}
-			compareRows(t, res, term)
-			if !equalStrings(res.Warnings, term.Warnings) {
-				t.Errorf("warnings differ:\napp:      %q\nterminal: %q", res.Warnings, term.Warnings)
-			}
-			if !equalStrings(res.Cautions, term.Cautions) {
-				t.Errorf("cautions differ:\napp:      %q\nterminal: %q", res.Cautions, term.Cautions)
-			}
-			if v := res.Verdicts(); !equalVerdicts(v, term.Verdicts) {
-				t.Errorf("verdicts differ:\napp:      %+v\nterminal: %+v", v, term.Verdicts)
-			}
+			checkAgreement(t, runSafetyApp(t, s, c), c.errKey, term, stderr)
 		})
 	}
 	for _, id := range []sheet.ID{sheet.IDVessel, sheet.IDEnergy, sheet.IDOxygen, sheet.IDSPL} {
