@@ -214,8 +214,10 @@ func TestListenClippedCaution(t *testing.T) {
 	}
 }
 
-// TestListenSendToDiagnose: one tap takes the frequency found to What the
-// pitch says, which opens with it as its measured frequency.
+// TestListenSendToDiagnose: one tap takes the frequency found, with its ±,
+// to the Bench and opens What the pitch says, which takes it as its
+// measured frequency (the value; Form.Enter writes a shared frequency
+// without its ± for now).
 func TestListenSendToDiagnose(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "tap.wav")
 	writeWAV16(t, path, tapSamples(tapRate, tapFreq, tapTau, 0.5, 1e-3), tapRate)
@@ -243,6 +245,12 @@ func TestListenSendToDiagnose(t *testing.T) {
 	b := a.Env().Bench
 	if b.Frequency != hz || b.FrequencyPM != pm || b.FrequencyFrom != "Listen to the tube" {
 		t.Errorf("Bench holds %v ± %v Hz from %q, want %v ± %v Hz from the listen screen", b.Frequency, b.FrequencyPM, b.FrequencyFrom, hz, pm)
+	}
+	h.frames(2)
+	d := a.Screen(sheet.IDDiagnose).(formScreen).Form()
+	// Within 0.05 %: Form.Enter writes the value rounded for display.
+	if v, ok := d.Field("measured-frequency").Value(); !ok || !scalar.EqualWithinRel(v, hz, 5e-4) {
+		t.Errorf("What the pitch says took %v Hz (%v) as the measurement, want %v Hz; field text %q", v, ok, hz, d.Field("measured-frequency").Text())
 	}
 }
 
