@@ -237,3 +237,25 @@ func TestImportFromTypedPath(t *testing.T) {
 	h.tap("Import a file")
 	waitFor(t, h, k, func() bool { _, ok := h.byDesc("Setup from a stick"); return ok })
 }
+
+// TestCopyResult puts one result on the clipboard as plain text from the
+// bar: title, inputs by label, rows with their units.
+func TestCopyResult(t *testing.T) {
+	k := NewMemoryKeeper()
+	k.WaitLoaded(5 * time.Second)
+	_, h := keepApp(t, k, sheet.IDGas)
+	h.tap("Copy result")
+	mime, data, ok := h.r.WriteClipboard()
+	text := string(data)
+	if !ok || mime != "application/text" {
+		t.Fatalf("clipboard written %v, type %q", ok, mime)
+	}
+	for _, want := range []string{"Working gas, ", "Temperature: 300 K", "Sound speed: ", " m/s"} {
+		if !strings.Contains(text, want) {
+			t.Errorf("clipboard text lacks %q:\n%s", want, text)
+		}
+	}
+	if msg, _ := h.shown("Saved work status"); !strings.Contains(msg, "clipboard") {
+		t.Errorf("status %q", msg)
+	}
+}

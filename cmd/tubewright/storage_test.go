@@ -40,3 +40,19 @@ func TestFolderPorter(t *testing.T) {
 		t.Error("an empty path was accepted")
 	}
 }
+
+// TestOpenStorage keeps the work in files under the data folder that Gio
+// names (here a temporary configuration folder).
+func TestOpenStorage(t *testing.T) {
+	dir := t.TempDir()
+	t.Setenv("XDG_CONFIG_HOME", dir)
+	t.Setenv("HOME", dir)
+	k, _ := openStorage()
+	if !k.Loaded() {
+		t.Fatal("the files did not load before the first frame")
+	}
+	kind, persist, ok := k.Where()
+	if !ok || !strings.Contains(kind, filepath.Join(dir)) || !strings.HasSuffix(kind, "tubewright") || persist != store.PersistGranted {
+		t.Fatalf("kept in %q (%v), %v; want files under %s", kind, ok, persist, dir)
+	}
+}
