@@ -257,7 +257,12 @@ func (f *Form) Enter() bool {
 		case sheet.SharePressure:
 			changed = takeValue(it.field, b.Pressure, formatPressure(b.Pressure)) || changed
 		case sheet.ShareFrequency:
-			changed = takeValue(it.field, b.Frequency, units.Format(b.Frequency, units.DimFrequency)) || changed
+			text := units.Format(b.Frequency, units.DimFrequency)
+			if b.FrequencyPM > 0 && it.in.PM {
+				// a measured frequency arrives with its ±
+				text = units.FormatPM(b.Frequency, b.FrequencyPM, units.DimFrequency)
+			}
+			changed = takeValue(it.field, b.Frequency, text) || changed
 		}
 	}
 	if changed {
