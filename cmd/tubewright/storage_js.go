@@ -16,7 +16,18 @@ import (
 // keeper opens it on its own goroutine: every call waits for the browser,
 // which must never happen while a frame is handled.
 func openStorage() (*ui.Keeper, ui.Porter) {
-	return ui.NewKeeper(func() (store.Backend, error) { return store.NewBrowser() }), browserPorter{}
+	k := ui.NewKeeper(func() (store.Backend, error) { return store.NewBrowser() })
+	// A phone hides the page before it closes it: write the last inputs
+	// then, without waiting for the pause after typing. (Flush blocks, so
+	// it runs on its own goroutine, never in the browser's event handler.)
+	onHide := js.FuncOf(func(js.Value, []js.Value) any {
+		if js.Global().Get("document").Get("visibilityState").String() == "hidden" {
+			go k.Flush()
+		}
+		return nil
+	})
+	js.Global().Get("document").Call("addEventListener", "visibilitychange", onHide)
+	return k, browserPorter{}
 }
 
 // closeStorage does nothing in the browser: changes are written as they
