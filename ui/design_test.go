@@ -262,3 +262,22 @@ func TestDesignLeaveCancels(t *testing.T) {
 		t.Errorf("no design after returning: %v", s.form.Err())
 	}
 }
+
+// TestScreenshotOnsetFromDesign pictures the Engine onset screen after
+// "Open in Engine onset": the designed engine in its editor
+// (SHOT_DIR/onset-from-design-<size>.png).
+func TestScreenshotOnsetFromDesign(t *testing.T) {
+	base, _ := sheet.Lookup(sheet.IDDesign)
+	r, err := base.Evaluate(map[string]string{"gas": "helium", "pressure": "10 bar", "frequency": "300 Hz", "hot": "650 K", "diameter": "50 mm"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	row, _ := r.Row("device")
+	env := NewEnv(nil)
+	env.handDevice(row.Text)
+	s := newOnsetScreen(env).(*onsetScreen)
+	shoot(t, "onset-from-design", env, s)
+	if got := s.editor.File().Name; got != "Designed engine, 300 Hz" {
+		t.Errorf("the onset editor holds %q", got)
+	}
+}

@@ -25,7 +25,7 @@ const IDDesign ID = "design"
 var designSheet = &Sheet{
 	ID:      IDDesign,
 	Title:   "Design from a target",
-	Summary: "From a frequency, gas, pressure and heater temperature to an engine that starts (or from a cold temperature and a driver to a heat pump): every part's length, the stack's pores, the margin and what moves it",
+	Summary: "From your frequency, gas, pressure and heater to an engine that starts: every part, the margin and what moves it; or a driven heat pump",
 	Inputs: []Input{
 		{Key: "for", Label: "Design", Kind: Pick, Default: "engine",
 			Hint: "engine (heat in, sound out) or heat-pump (a loudspeaker drives the tube and the stack pumps heat)",
