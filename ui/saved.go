@@ -297,6 +297,8 @@ func (s *savedScreen) where(gtx layout.Context) layout.Dimensions {
 	kind, persist, ok := k.Where()
 	text := "Looking for your storage…"
 	switch {
+	case ok && persist == store.PersistDenied && strings.HasPrefix(kind, "memory"):
+		text = "Kept in " + kind + "."
 	case ok:
 		text = "Kept in " + kind + "; " + persist.String() + "."
 	case k.Loaded():
