@@ -240,6 +240,15 @@ func (k *Keeper) Where() (kind string, persist store.Persistence, ok bool) {
 	return k.backend.Kind(), k.backend.Persistence(), true
 }
 
+// InMemory reports whether the work lives only in memory (a memory back
+// end: nothing survives closing the app).
+func (k *Keeper) InMemory() bool {
+	k.mu.Lock()
+	defer k.mu.Unlock()
+	_, mem := k.backend.(*store.Memory)
+	return mem
+}
+
 // run is the worker: load, then write changes as they come.
 func (k *Keeper) run() {
 	k.load()

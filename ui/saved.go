@@ -297,7 +297,7 @@ func (s *savedScreen) where(gtx layout.Context) layout.Dimensions {
 	kind, persist, ok := k.Where()
 	text := "Looking for your storage…"
 	switch {
-	case ok && persist == store.PersistDenied && strings.HasPrefix(kind, "memory"):
+	case ok && k.InMemory():
 		text = "Kept in " + kind + "."
 	case ok:
 		text = "Kept in " + kind + "; " + persist.String() + "."
