@@ -65,9 +65,21 @@ func newDesignScreen(env *Env) Screen {
 	s := &designScreen{env: env, page: NewPage(env), run: newDesignRun(env),
 		head: NewResults(env), parts: NewResults(env), strip: &deviceStrip{env: env}}
 	desc := *base
-	desc.Run = func(*sheet.Values) (*sheet.Result, error) { return s.run.run(s.form.Texts()) }
+	desc.Run = func(v *sheet.Values) (*sheet.Result, error) { return s.run.run(typed(v)) }
 	s.form = NewForm(env, &desc)
 	return s
+}
+
+// typed returns the texts typed for the inputs of v (the others take
+// their defaults when parsed again).
+func typed(v *sheet.Values) map[string]string {
+	texts := map[string]string{}
+	for _, val := range v.All() {
+		if val.Given {
+			texts[val.In.Key] = val.Text
+		}
+	}
+	return texts
 }
 
 // Title implements Screen.

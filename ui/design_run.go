@@ -55,11 +55,14 @@ func newDesignRun(env *Env) *designRun {
 }
 
 // textsKey is one string for a set of input texts, the same for the same
-// texts in any order.
+// texts in any order; an empty text counts as none (both take the
+// input's default).
 func textsKey(texts map[string]string) string {
 	keys := make([]string, 0, len(texts))
-	for k := range texts {
-		keys = append(keys, k)
+	for k, v := range texts {
+		if strings.TrimSpace(v) != "" {
+			keys = append(keys, k)
+		}
 	}
 	sort.Strings(keys)
 	var b strings.Builder

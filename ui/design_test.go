@@ -281,3 +281,22 @@ func TestScreenshotOnsetFromDesign(t *testing.T) {
 		t.Errorf("the onset editor holds %q", got)
 	}
 }
+
+// TestTextsKey: the design's inputs are one key whatever their order, an
+// empty text is the same as none, and any other difference is another key.
+func TestTextsKey(t *testing.T) {
+	t.Parallel()
+	a := textsKey(map[string]string{"gas": "helium", "hot": "650 K", "wire": ""})
+	if b := textsKey(map[string]string{"hot": "650 K", "gas": "helium"}); a != b {
+		t.Errorf("order or an empty text changed the key: %q, %q", a, b)
+	}
+	for _, other := range []map[string]string{
+		{"gas": "helium", "hot": "651 K"},
+		{"gas": "helium", "hot": "650 K", "wire": "50 um"},
+		{"gas": "heliumhot", "": "650 K"},
+	} {
+		if textsKey(other) == a {
+			t.Errorf("%v gives the same key as the first inputs", other)
+		}
+	}
+}
