@@ -34,8 +34,10 @@ func EntryOf(s *sheet.Sheet, texts map[string]string, res *sheet.Result, note st
 		case sheet.Num:
 			row.Value, row.Uncertainty, row.Unit = r.Value, r.PM, units.SIUnit(r.Dim)
 			row.Shown = units.FormatPM(r.Value, r.PM, r.Dim)
-			if r.PM == 0 {
-				row.Shown = units.Format(r.Value, r.Dim)
+			if r.Show != "" {
+				if s, err := units.FormatPMIn(r.Value, r.PM, r.Dim, r.Show); err == nil {
+					row.Shown = s
+				}
 			}
 			if r.Gauge {
 				row.Shown += " gauge"
