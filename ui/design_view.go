@@ -47,7 +47,10 @@ func (s *designScreen) outcome() (top, details []layout.Widget) {
 	case designCancelled:
 		return []layout.Widget{
 			Described("design status", Note(s.env, capitalize(errCancelled.Error())+".")),
-			func(gtx layout.Context) layout.Dimensions { return smallButton(s.env, gtx, &s.again, "Design again") },
+			func(gtx layout.Context) layout.Dimensions {
+				gtx.Constraints.Min.X = 0
+				return smallButton(s.env, gtx, &s.again, "Design again")
+			},
 		}, nil
 	case designIdle:
 		return []layout.Widget{s.form.Results.Layout}, nil
