@@ -219,6 +219,52 @@ func (s *Shelf) SaveDevice(d Device, replace bool) error {
 	})
 }
 
+// RenameDevice renames a device; the new name must be free.
+func (s *Shelf) RenameDevice(old, name string) error {
+	if err := checkItemName(name); err != nil {
+		return err
+	}
+	return s.Update(func(l *Library) error {
+		i := indexDevice(l.Devices, old)
+		if i < 0 {
+			return fmt.Errorf("no device named %q", old)
+		}
+		if indexDevice(l.Devices, name) >= 0 {
+			return fmt.Errorf("device %q: %w", name, ErrExists)
+		}
+		l.Devices[i].Name = name
+		return nil
+	})
+}
+
+// DeleteDevice removes a device and returns a function that puts it back
+// (the undo); the undo refuses with ErrExists if the name was used again
+// meanwhile.
+func (s *Shelf) DeleteDevice(name string) (undo func() error, err error) {
+	var gone Device
+	err = s.Update(func(l *Library) error {
+		i := indexDevice(l.Devices, name)
+		if i < 0 {
+			return fmt.Errorf("no device named %q", name)
+		}
+		gone = l.Devices[i]
+		l.Devices = append(l.Devices[:i:i], l.Devices[i+1:]...)
+		return nil
+	})
+	if err != nil {
+		return nil, err
+	}
+	return func() error { return s.SaveDevice(gone, false) }, nil
+}
+
+// Device returns the device named name.
+func (l *Library) Device(name string) (Device, bool) {
+	if i := indexDevice(l.Devices, name); i >= 0 {
+		return l.Devices[i], true
+	}
+	return Device{}, false
+}
+
 // AddEntry appends a logged result (its time set now when zero).
 func (s *Shelf) AddEntry(e Entry) error {
 	if e.Time.IsZero() {
