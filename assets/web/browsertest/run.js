@@ -19,6 +19,7 @@ const path = require("path");
 const zlib = require("zlib");
 const { chromium } = require("playwright-core");
 const { keepScenario } = require("./keep.js");
+const { listenScenario } = require("./listen.js");
 
 const TYPES = { ".html": "text/html; charset=utf-8", ".js": "text/javascript", ".wasm": "application/wasm",
   ".gz": "application/gzip", ".webmanifest": "application/manifest+json", ".svg": "image/svg+xml", ".png": "image/png" };
@@ -154,6 +155,7 @@ async function test(dir) {
     await updates(browser, dir, stats, url);
     await ctx.close();
     await keepScenario({ browser, url, phone, check, shots: process.env.SHOTS });
+    await listenScenario({ url, check, shots: process.env.SHOTS });
   } catch (e) {
     console.error(e.message || e);
     failed = true;
