@@ -5,6 +5,8 @@ import (
 	"errors"
 	"os"
 	"path/filepath"
+	"strings"
+	"time"
 
 	"gioui.org/layout"
 	"gioui.org/widget"
@@ -14,20 +16,41 @@ import (
 	"tubewright/ui/store"
 )
 
-// deviceFile keeps one saved device per editor on the desktop, at
-// os.UserConfigDir()/tubewright/devices/<example>.json. Saving writes a
-// temporary file and renames it (store.WriteFileAtomic); opening a damaged
-// file reports it and leaves both the file and the editor as they are.
-// Where there is no config folder (the browser) the buttons are not shown.
+// deviceFile is the device editor's Save as and Open: named devices kept
+// in the keeper's library (every device screen lists them all), with the
+// date and time they were saved. Save as keeps the editor's device under
+// the name typed (a name in use is replaced only when asked) and the
+// editor's device takes that name; a saved device can be opened into the
+// editor, renamed, or deleted with undo. The browser keeps them as every
+// other platform does. A device that does not read is reported and the
+// editor keeps its own.
+//
+// An earlier version kept one device per editor in a file (path); when
+// that file is there it is offered in the list, to be opened and saved
+// under a name.
 type deviceFile struct {
-	path        string // "" when files are not available
-	save, open  widget.Clickable
-	status      string
-	statusIsErr bool
+	path   string        // the earlier version's file; "" where there are no files
+	editor *deviceEditor // the editor, as of the last update
+
+	saveAs, openList, close                    widget.Clickable
+	shown                                      bool // the saved devices show in the editor
+	name                                       widget.Editor
+	save, openIt, rename, del, action, fromOld widget.Clickable
+	rows                                       []widget.Clickable
+	listed                                     []store.Device // as last laid out, newest first
+	selected                                   string
+	oldThere                                   bool // the earlier version's file exists
+
+	started    bool   // since was set, at the first update
+	since      uint64 // keeper statuses up to this one are not the editor's
+	status     keepStatus
+	statusLive bool
+	local      string // the editor's own message
+	localBad   bool
 }
 
-// defaultDevicePath is the saved-device file for an example's editor, or
-// "" when the platform has no config folder.
+// defaultDevicePath is the file an earlier version kept an example's
+// device in, or "" when the platform has no config folder.
 func defaultDevicePath(example string) string {
 	dir, err := os.UserConfigDir()
 	if err != nil || dir == "" {
@@ -36,88 +59,277 @@ func defaultDevicePath(example string) string {
 	return filepath.Join(dir, "tubewright", "devices", example+".json")
 }
 
-// update handles the two buttons for editor e.
-func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
-	if f.path == "" {
-		return
-	}
-	if f.save.Clicked(gtx) {
-		f.status, f.statusIsErr = "Saved to "+f.path, false
-		if err := f.write(e); err != nil {
-			f.status, f.statusIsErr = capitalize(err.Error()), true
-		}
-	}
-	if f.open.Clicked(gtx) {
-		f.status, f.statusIsErr = "Opened "+f.path, false
-		if err := f.read(e); err != nil {
-			f.status, f.statusIsErr = capitalize(err.Error()), true
-		}
+func (f *deviceFile) keeper(e *deviceEditor) *Keeper { return keepFor(e.env).keeper }
+
+// do queues a change of the library and shows its outcome when it arrives.
+func (f *deviceFile) do(e *deviceEditor, what string, run func(s *store.Shelf) (keepStatus, error)) {
+	f.local = ""
+	f.since = f.keeper(e).Status().Seq
+	f.keeper(e).Do(what, run)
+}
+
+func (f *deviceFile) say(e *deviceEditor, text string, bad bool) {
+	f.local, f.localBad = text, bad
+	f.since = f.keeper(e).Status().Seq
+	f.statusLive = false
+}
+
+// show opens the saved devices with the editor's device name to save under.
+func (f *deviceFile) show(e *deviceEditor) {
+	f.shown, f.selected, f.local = true, "", ""
+	f.name.SingleLine, f.name.Submit = true, true
+	f.name.SetText(e.name)
+	f.oldThere = false
+	if f.path != "" {
+		_, err := os.Stat(f.path)
+		f.oldThere = err == nil
 	}
 }
 
-// write saves the editor's device; an invalid device is not saved.
-func (f *deviceFile) write(e *deviceEditor) error {
+// update handles the taps for editor e, and takes a device opened from
+// the Saved work page.
+func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
+	f.editor = e
+	k := f.keeper(e)
+	if !f.started {
+		f.started, f.since = true, k.Status().Seq
+	}
+	if st := k.Status(); st.Seq > f.since {
+		f.status, f.statusLive, f.since, f.local = st, true, st.Seq, ""
+	}
+	if d, ok := takeSavedDevice(e.env, e.example); ok {
+		f.openStored(e, d)
+	}
+	if f.saveAs.Clicked(gtx) || f.openList.Clicked(gtx) {
+		f.show(e)
+	}
+	if f.close.Clicked(gtx) {
+		f.shown = false
+	}
+	if f.action.Clicked(gtx) && f.statusLive && f.status.Then != nil {
+		f.do(e, f.status.Action, f.status.Then)
+		f.statusLive = false
+	}
+	if !f.shown {
+		return
+	}
+	for i := range f.listed {
+		if i < len(f.rows) && f.rows[i].Clicked(gtx) {
+			if f.selected == f.listed[i].Name {
+				f.selected = ""
+			} else {
+				f.selected = f.listed[i].Name
+				f.name.SetText(f.selected)
+			}
+		}
+	}
+	if f.fromOld.Clicked(gtx) {
+		if err := f.read(e); err != nil {
+			f.say(e, capitalize(err.Error()), true)
+		} else {
+			f.shown = false
+			f.say(e, "Opened the device an earlier version kept in "+f.path+". Save it under a name to keep it here.", false)
+		}
+	}
+	name := strings.TrimSpace(f.name.Text())
+	if f.save.Clicked(gtx) || submitted(gtx, &f.name) {
+		f.saveNamed(e, name)
+	}
+	if f.selected == "" {
+		return
+	}
+	var sel store.Device
+	ok := false
+	if lib := k.Library(); lib != nil {
+		sel, ok = lib.Device(f.selected)
+	}
+	switch {
+	case f.openIt.Clicked(gtx) && ok:
+		f.openStored(e, sel)
+	case f.rename.Clicked(gtx) && ok:
+		if name == "" || name == f.selected {
+			f.say(e, "Type the new name in the Device name field, then tap Rename.", true)
+			break
+		}
+		f.do(e, "Renaming the device", opRenameDevice(f.selected, name))
+		if e.name == f.selected {
+			e.name = name
+		}
+		f.selected = name
+	case f.del.Clicked(gtx) && ok:
+		f.do(e, "Deleting the device", opDeleteDevice(f.selected))
+		f.selected = ""
+		f.name.SetText(e.name)
+	}
+}
+
+// saveNamed saves the editor's device under name; an invalid device is not
+// saved, and says why.
+func (f *deviceFile) saveNamed(e *deviceEditor, name string) {
+	if name == "" {
+		f.say(e, "Type a name for this device first.", true)
+		return
+	}
 	file := e.File()
+	file.Name = name
 	if _, err := file.Validate(); err != nil {
-		return errors.New("not saved: fix the device first. " + err.Error())
+		f.say(e, "Not saved: fix the device first. "+err.Error(), true)
+		return
 	}
 	data, err := file.Marshal()
 	if err != nil {
-		return err
+		f.say(e, "Not saved: "+err.Error(), true)
+		return
 	}
-	if err := os.MkdirAll(filepath.Dir(f.path), 0o755); err != nil {
-		return errors.New("not saved: " + err.Error())
-	}
-	if err := store.WriteFileAtomic(f.path, data, 0o644); err != nil {
-		return errors.New("not saved: " + err.Error())
-	}
-	return nil
+	f.do(e, "Saving the device", opSaveDevice(store.Device{Name: name, Saved: time.Now(), Device: data}))
+	e.name = name
+	f.selected = name
 }
 
-// read loads the saved device into the editor, unless the file is missing
-// or damaged.
+// openStored puts a saved device into the editor, unless it does not read.
+func (f *deviceFile) openStored(e *deviceEditor, d store.Device) {
+	file, err := storedDeviceFile(d)
+	if err != nil {
+		f.say(e, capitalize(err.Error()), true)
+		return
+	}
+	e.set(file)
+	f.shown = false
+	f.say(e, "Opened the device “"+d.Name+"”.", false)
+}
+
+// read loads the earlier version's file into the editor, unless it is
+// missing or damaged (then the file and the editor are left as they are).
 func (f *deviceFile) read(e *deviceEditor) error {
 	data, err := os.ReadFile(f.path)
 	if errors.Is(err, os.ErrNotExist) {
-		return errors.New("no saved device yet at " + f.path)
+		return errors.New("there is no device file at " + f.path + " any more")
 	}
 	if err != nil {
 		return err
 	}
 	if _, err := linear.ParseDevice(bytes.NewReader(data)); err != nil {
-		return errors.New("the saved device at " + f.path + " is damaged and was left as it is: " + err.Error())
+		return errors.New("the device file at " + f.path + " is damaged and was left as it is: " + err.Error())
 	}
 	var file linear.DeviceFile
 	if err := jsonDecode(data, &file); err != nil {
-		return errors.New("the saved device at " + f.path + " is damaged and was left as it is: " + err.Error())
+		return errors.New("the device file at " + f.path + " is damaged and was left as it is: " + err.Error())
 	}
 	e.set(&file)
 	return nil
 }
 
-// widgets returns the buttons and the status line (none without files).
+// widgets returns the editor's device name, the Save as and Open buttons,
+// the last message, and, while shown, the saved devices (nothing before
+// the editor's first update).
 func (f *deviceFile) widgets(env *Env) []layout.Widget {
-	if f.path == "" {
+	e := f.editor
+	if e == nil {
 		return nil
 	}
 	ws := []layout.Widget{func(gtx layout.Context) layout.Dimensions {
-		gtx.Constraints.Min.X = 0
-		return flow(gtx, gtx.Dp(8), gtx.Dp(8), 2, func(gtx layout.Context, i int) layout.Dimensions {
-			if i == 0 {
-				return smallButton(env, gtx, &f.save, "Save device")
-			}
-			return smallButton(env, gtx, &f.open, "Open saved device")
-		})
+		name := e.name
+		if name == "" {
+			name = "not named yet"
+		}
+		return Described("Device shown", Note(env, "Device: "+name))(gtx)
 	}}
-	if f.status != "" {
+	if !f.shown {
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			l := material.Body2(env.Theme, f.status)
-			l.Color = env.Colors.Muted
-			if f.statusIsErr {
-				l.Color = env.Colors.Error
-			}
-			return Described("device file status", l.Layout)(gtx)
+			return keepFlow(gtx,
+				func(gtx layout.Context) layout.Dimensions {
+					return keepButton(env, gtx, &f.saveAs, "Save device as…", true)
+				},
+				func(gtx layout.Context) layout.Dimensions {
+					return keepButton(env, gtx, &f.openList, "Open a saved device…", false)
+				})
+		})
+		return append(ws, func(gtx layout.Context) layout.Dimensions { return f.layoutStatus(gtx, env) })
+	}
+	return append(ws, f.panel(env, e)...)
+}
+
+// panel lists the saved devices under the name field and Save device.
+func (f *deviceFile) panel(env *Env, e *deviceEditor) []layout.Widget {
+	k := f.keeper(e)
+	f.listed = devicesNewestFirst(k.Library())
+	if len(f.rows) < len(f.listed) {
+		f.rows = append(f.rows, make([]widget.Clickable, len(f.listed)-len(f.rows))...)
+	}
+	ws := []layout.Widget{
+		Heading(env, "Saved devices"),
+		Note(env, "Type a name and tap Save device to keep the device shown. Tap a saved device to open, rename or delete it. Every device screen lists the same devices."),
+		func(gtx layout.Context) layout.Dimensions {
+			return keepEditor(env, gtx, &f.name, "Name, e.g. 12 bar He-Ar rig", "Device name")
+		},
+		func(gtx layout.Context) layout.Dimensions {
+			return keepFlow(gtx,
+				func(gtx layout.Context) layout.Dimensions {
+					return keepButton(env, gtx, &f.save, "Save device", true)
+				},
+				func(gtx layout.Context) layout.Dimensions {
+					return keepButton(env, gtx, &f.close, "Close saved devices", false)
+				})
+		},
+		func(gtx layout.Context) layout.Dimensions { return f.layoutStatus(gtx, env) },
+	}
+	switch {
+	case !k.Loaded():
+		ws = append(ws, Note(env, "Reading your saved work…"))
+	case len(f.listed) == 0:
+		ws = append(ws, Para(env, "No device saved yet."))
+	}
+	for i, d := range f.listed {
+		sel := d.Name == f.selected
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return keepListRow(env, gtx, &f.rows[i], "Device "+d.Name, d.Name, deviceSummary(d), sel)
+		})
+		if sel {
+			ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+				btn := func(c *widget.Clickable, label string, primary bool) layout.Widget {
+					return func(gtx layout.Context) layout.Dimensions { return keepButton(env, gtx, c, label, primary) }
+				}
+				return keepFlow(gtx, btn(&f.openIt, "Open", true), btn(&f.rename, "Rename", false), btn(&f.del, "Delete", false))
+			})
+		}
+	}
+	if f.oldThere {
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return keepListRow(env, gtx, &f.fromOld, "Device file of an earlier version", "Kept in a file by an earlier version", f.path, false)
 		})
 	}
 	return ws
+}
+
+// layoutStatus draws the editor's message or the keeper's answer, with
+// its follow-up button (Replace it, Undo).
+func (f *deviceFile) layoutStatus(gtx layout.Context, env *Env) layout.Dimensions {
+	text, bad, action := f.local, f.localBad, ""
+	if text == "" && f.statusLive {
+		text, bad = f.status.Text, f.status.Bad
+		if f.status.Then != nil {
+			action = f.status.Action
+		}
+	}
+	if text == "" {
+		return layout.Dimensions{}
+	}
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			l := material.Body2(env.Theme, text)
+			l.Color = env.Colors.Text
+			if bad {
+				l.Color = env.Colors.Error
+			}
+			return Described("Device save status", l.Layout)(gtx)
+		}),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			if action == "" {
+				return layout.Dimensions{}
+			}
+			return layout.Inset{Top: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				return keepButton(env, gtx, &f.action, action, true)
+			})
+		}),
+	)
 }

@@ -20,7 +20,8 @@ import (
 
 // savedScreen is "Saved work": the log of results (newest first; tap one
 // to read it whole and copy it), the setups of every calculator (tap one
-// to open it in its calculator, or delete it with undo), where the work is
+// to open it in its calculator, or delete it with undo), the saved devices
+// (see savedDevices), where the work is
 // kept and whether the browser promised to keep it, a damaged library with
 // a way to export its raw text and to set it aside, and Export everything
 // and Import (a merge: names already used are reported and replaced only
@@ -38,6 +39,7 @@ type savedScreen struct {
 	pathSet                                       bool
 	entry                                         *store.Entry // the entry shown whole
 	setup                                         string       // the setup selected
+	devices                                       savedDevices
 
 	since      uint64
 	status     keepStatus
@@ -172,6 +174,7 @@ func (s *savedScreen) update(gtx layout.Context) {
 			}
 		}
 	}
+	s.devices.update(gtx, s)
 	if s.setup != "" {
 		if s.openSetup.Clicked(gtx) {
 			s.openIn(s.setup)
@@ -288,6 +291,7 @@ func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 	}
 	ws = append(ws, s.logWidgets(lib)...)
 	ws = append(ws, s.setupWidgets(lib)...)
+	ws = append(ws, s.devices.widgets(s, lib)...)
 	return s.page.Layout(gtx, ws...)
 }
 

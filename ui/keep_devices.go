@@ -1,0 +1,143 @@
+package ui
+
+import (
+	"encoding/json"
+	"errors"
+	"fmt"
+	"sort"
+	"sync"
+
+	"tubewright/calc/linear"
+	"tubewright/ui/store"
+)
+
+// Named devices in the keeper's library: the changes the device editor and
+// the Saved work page queue, and how a device opened from Saved work
+// reaches the editor of the screen it opens in.
+
+// opSaveDevice saves d under its name; a name in use is not overwritten
+// but offered to be replaced.
+func opSaveDevice(d store.Device) func(s *store.Shelf) (keepStatus, error) {
+	return func(s *store.Shelf) (keepStatus, error) {
+		err := s.SaveDevice(d, false)
+		if errors.Is(err, store.ErrExists) {
+			return keepStatus{Text: fmt.Sprintf("A device named “%s” is already saved. Replace it with this one?", d.Name),
+				Action: "Replace it", Then: func(s *store.Shelf) (keepStatus, error) {
+					if err := s.SaveDevice(d, true); err != nil {
+						return keepStatus{}, err
+					}
+					return keepStatus{Text: fmt.Sprintf("Replaced the device “%s”.", d.Name)}, nil
+				}}, nil
+		}
+		if err != nil {
+			return keepStatus{}, err
+		}
+		return keepStatus{Text: fmt.Sprintf("Saved the device “%s”.", d.Name)}, nil
+	}
+}
+
+// opRenameDevice renames a saved device.
+func opRenameDevice(old, name string) func(s *store.Shelf) (keepStatus, error) {
+	return func(s *store.Shelf) (keepStatus, error) {
+		if err := s.RenameDevice(old, name); err != nil {
+			return keepStatus{}, err
+		}
+		return keepStatus{Text: fmt.Sprintf("Renamed the device “%s” to “%s”.", old, name)}, nil
+	}
+}
+
+// opDeleteDevice deletes a saved device and offers to undo it.
+func opDeleteDevice(name string) func(s *store.Shelf) (keepStatus, error) {
+	return func(s *store.Shelf) (keepStatus, error) {
+		undo, err := s.DeleteDevice(name)
+		if err != nil {
+			return keepStatus{}, err
+		}
+		return keepStatus{Text: fmt.Sprintf("Deleted the device “%s”.", name), Action: "Undo",
+			Then: func(*store.Shelf) (keepStatus, error) {
+				if err := undo(); err != nil {
+					return keepStatus{}, err
+				}
+				return keepStatus{Text: fmt.Sprintf("The device “%s” is back.", name)}, nil
+			}}, nil
+	}
+}
+
+// devicesNewestFirst returns the library's devices, the last saved first.
+func devicesNewestFirst(lib *store.Library) []store.Device {
+	if lib == nil {
+		return nil
+	}
+	out := append([]store.Device(nil), lib.Devices...)
+	sort.SliceStable(out, func(i, j int) bool { return out[i].Saved.After(out[j].Saved) })
+	return out
+}
+
+// deviceSummary is a saved device's second line: "saved 2026-12-05 18:40 ·
+// 7 parts · helium", or what is wrong with a document that does not read.
+func deviceSummary(d store.Device) string {
+	s := "saved " + d.Saved.Local().Format("2006-01-02 15:04")
+	var f linear.DeviceFile
+	if err := json.Unmarshal(d.Device, &f); err != nil {
+		return s + " · does not read as a device"
+	}
+	if n := len(f.PartsList); n == 1 {
+		s += " · 1 part"
+	} else {
+		s += fmt.Sprintf(" · %d parts", n)
+	}
+	if f.Gas != "" {
+		s += " · " + f.Gas
+	}
+	return s
+}
+
+// storedDeviceFile reads a saved device's document for the editor, named as
+// it is saved. A document that is not a device is an error that says so;
+// the caller leaves the editor as it is.
+func storedDeviceFile(d store.Device) (*linear.DeviceFile, error) {
+	var f linear.DeviceFile
+	if err := jsonDecode(d.Device, &f); err != nil {
+		return nil, fmt.Errorf("the saved device “%s” does not read and was left as it is: %v", d.Name, err)
+	}
+	f.Name = d.Name
+	return &f, nil
+}
+
+// deviceHandoff carries a saved device from the Saved work page to the
+// device editor of the screen it is opened in, by Env: the editor takes it
+// on its next frame (see deviceFile.update).
+var deviceHandoff struct {
+	sync.Mutex
+	m map[*Env]deviceRequest
+}
+
+// deviceRequest is a saved device waiting for the editor of one example
+// ("engine" for Engine onset, "heatpump" for Heat pump).
+type deviceRequest struct {
+	example string
+	device  store.Device
+}
+
+// handSavedDevice leaves d for the editor of example in env.
+func handSavedDevice(env *Env, example string, d store.Device) {
+	deviceHandoff.Lock()
+	defer deviceHandoff.Unlock()
+	if deviceHandoff.m == nil {
+		deviceHandoff.m = map[*Env]deviceRequest{}
+	}
+	deviceHandoff.m[env] = deviceRequest{example: example, device: d}
+}
+
+// takeSavedDevice returns the device left for the editor of example in
+// env, once.
+func takeSavedDevice(env *Env, example string) (store.Device, bool) {
+	deviceHandoff.Lock()
+	defer deviceHandoff.Unlock()
+	r, ok := deviceHandoff.m[env]
+	if !ok || r.example != example {
+		return store.Device{}, false
+	}
+	delete(deviceHandoff.m, env)
+	return r.device, true
+}
