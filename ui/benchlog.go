@@ -2,6 +2,7 @@ package ui
 
 import (
 	"fmt"
+	"sort"
 	"time"
 
 	"gioui.org/layout"
@@ -12,21 +13,29 @@ import (
 	"tubewright/ui/store"
 )
 
-// benchLogScreen lists the saved safety passes, newest first. Tapping one
-// shows its text; Export writes that text to a .txt file next to the log
-// (desktop) or, where there is no file system (the browser), leaves it on
-// screen to be selected and copied. A damaged log file is reported, never
-// replaced: the user may set it aside (it is renamed, not deleted).
+// benchLogScreen lists the saved safety passes, newest first: those kept
+// in the log of the saved work and those of the older bench log file (see
+// benchBook), each once. Tapping one shows its text; Export writes that
+// text to a .txt file (desktop) or, where there is no file system (the
+// browser), leaves it on screen to be selected and copied. A damaged file
+// or library is reported, never replaced: the user may set the file aside
+// (it is renamed, not deleted); the library is set aside on Saved work.
 type benchLogScreen struct {
 	env     *Env
 	page    *Page
 	caution *Caution
 
-	passes  []store.Pass
-	loadErr error
-	rows    []widget.Clickable
-	open    int // index into passes of the pass shown, -1 for none
-	text    widget.Selectable
+	legacy   []store.Pass // the older file's passes, read on Enter
+	loadErr  error        // why the older file could not be read
+	unread   []error      // safety entries of the log that are not passes
+	passes   []store.Pass // both, oldest first
+	seen     uint64       // the keeper's library version shown
+	loaded   bool
+	migrated bool // the older file's passes were queued to be copied
+	since    uint64
+	rows     []widget.Clickable
+	open     int // index into passes of the pass shown, -1 for none
+	text     widget.Selectable
 
 	export, setAside widget.Clickable
 	status           string
@@ -53,13 +62,40 @@ func (s *benchLogScreen) Title() string { return "Bench log" }
 // Enter reloads the log (the safety screen may have saved a pass).
 func (s *benchLogScreen) Enter() { s.reload() }
 
+// reload reads the older file again, then the log.
 func (s *benchLogScreen) reload() {
-	s.passes, s.loadErr = bookFor(s.env).Load()
-	if len(s.rows) < len(s.passes) {
-		s.rows = make([]widget.Clickable, len(s.passes))
+	s.legacy, s.loadErr = bookFor(s.env).Legacy()
+	s.loaded, s.migrated = true, false
+	s.since = bookFor(s.env).keeper().Status().Seq
+	s.merge()
+}
+
+// merge lists the log's passes and the older file's not yet in the log,
+// and queues those to be copied into the log once the library is loaded.
+func (s *benchLogScreen) merge() {
+	k := bookFor(s.env).keeper()
+	s.seen = k.Version()
+	kept, unread := bookFor(s.env).Kept()
+	s.unread = unread
+	extra := missing(s.legacy, kept)
+	if len(extra) > 0 && !s.migrated && k.Library() != nil && k.Damaged() == nil {
+		k.Do("Copying the older bench log file", opCopyPasses(extra))
+		s.migrated = true
 	}
-	if s.open >= len(s.passes) {
-		s.open = -1
+	shownTime := time.Time{}
+	if s.open >= 0 && s.open < len(s.passes) {
+		shownTime = s.passes[s.open].Time
+	}
+	s.passes = append(kept, extra...)
+	sort.SliceStable(s.passes, func(i, j int) bool { return s.passes[i].Time.Before(s.passes[j].Time) })
+	if len(s.rows) < len(s.passes) {
+		s.rows = append(s.rows, make([]widget.Clickable, len(s.passes)-len(s.rows))...)
+	}
+	s.open = -1
+	for i, p := range s.passes {
+		if !shownTime.IsZero() && p.Time.Equal(shownTime) {
+			s.open = i
+		}
 	}
 	if s.open < 0 && len(s.passes) > 0 {
 		s.open = len(s.passes) - 1
@@ -98,25 +134,38 @@ func (s *benchLogScreen) update(gtx layout.Context) {
 
 // Layout implements Screen.
 func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
-	if s.passes == nil && s.loadErr == nil {
+	if !s.loaded {
 		s.reload()
+	}
+	k := bookFor(s.env).keeper()
+	if k.Version() != s.seen {
+		s.merge()
 	}
 	s.update(gtx)
 	ws := []layout.Widget{s.caution.Layout}
-	switch {
-	case s.loadErr != nil:
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			l := material.Body1(s.env.Theme, s.loadErr.Error())
-			l.Color = s.env.Colors.Error
-			return Described("Bench log error", l.Layout)(gtx)
-		})
+	if d := k.Damaged(); d != nil {
+		ws = append(ws, s.errorLine(d.Error()+". Until then no pass can be saved there: open Saved work to export its raw text or set it aside."))
+	}
+	for _, err := range k.Problems() {
+		ws = append(ws, s.errorLine(err.Error()))
+	}
+	for _, err := range s.unread {
+		ws = append(ws, s.errorLine(err.Error()))
+	}
+	if st := k.Status(); st.Bad && st.Seq > s.since {
+		ws = append(ws, s.errorLine(st.Text))
+	}
+	if s.loadErr != nil {
+		ws = append(ws, s.errorLine(s.loadErr.Error()))
 		if isDamaged(s.loadErr) {
 			ws = append(ws,
-				Para(s.env, "New passes cannot be saved into this file. Setting it aside renames it (its bytes are kept for you to inspect) and starts a new log."),
+				Para(s.env, "The passes in this older file cannot be shown. Setting it aside renames it (its bytes are kept for you to inspect); passes you save now are kept with your saved work either way."),
 				func(gtx layout.Context) layout.Dimensions {
 					return safetyButton(s.env, gtx, &s.setAside, "Set the damaged log aside", true)
 				})
 		}
+	}
+	switch {
 	case len(s.passes) == 0:
 		ws = append(ws, Para(s.env, "No safety pass saved yet. Walk the safety pass and save it at the end; it appears here with its date and time."))
 	default:
@@ -153,6 +202,15 @@ func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
 	}
 	ws = append(ws, Note(s.env, bookFor(s.env).Where()))
 	return s.page.Layout(gtx, ws...)
+}
+
+// errorLine draws a problem in the error colour.
+func (s *benchLogScreen) errorLine(text string) layout.Widget {
+	return func(gtx layout.Context) layout.Dimensions {
+		l := material.Body1(s.env.Theme, text)
+		l.Color = s.env.Colors.Error
+		return Described("Bench log error", l.Layout)(gtx)
+	}
 }
 
 // row draws the list entry of pass i.

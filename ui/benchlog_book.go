@@ -3,24 +3,29 @@ package ui
 import (
 	"errors"
 	"fmt"
+	"io/fs"
 	"os"
 	"path/filepath"
 	"runtime"
+	"sort"
 	"time"
 
 	"tubewright/ui/store"
 )
 
-// benchBook is where the safety passes of one App are kept: the bench log
-// file on desktop (os.UserConfigDir()/tubewright/benchlog.json), or memory
-// only where there is no file system (the browser build) or no config
-// folder. The safety screen saves into it and the bench-log screen lists
-// it; both reach the same book through bookFor(env), which keeps it in
-// the Env.
+// benchBook is where the safety passes of one App are kept. New passes go
+// into the log of the user's library through the keeper (see passEntry), so
+// they live wherever the rest of the saved work does: the app's data folder
+// on desktop, IndexedDB in the browser. Passes saved by earlier versions
+// sit in the older bench log file (os.UserConfigDir()/tubewright/
+// benchlog.json); that file is still read, never written again, and its
+// passes are copied into the log the first time the bench log screen sees
+// them (the file is left as it was, so nothing is lost either way). A text
+// export is written next to that file on desktop. Both screens reach the
+// book through bookFor(env), which keeps it in the Env.
 type benchBook struct {
-	path string     // "" means memory only
-	mem  *store.Log // the log in memory-only mode
-	why  string     // why the book is in memory, for the screen's note
+	env  *Env
+	path string // the older bench log file; "" where there is no file system
 }
 
 // bookFor returns env's bench log book, opening the default place on
@@ -28,48 +33,66 @@ type benchBook struct {
 func bookFor(env *Env) *benchBook {
 	if env.book == nil {
 		env.book = defaultBook()
+		env.book.env = env
 	}
 	return env.book
 }
 
-// useBookAt makes env's book the file path ("" for memory only). Tests use
+// useBookAt makes path env's older bench log file ("" for none). Tests use
 // it with t.TempDir(); call it before the screens are first laid out.
 func useBookAt(env *Env, path string) *benchBook {
-	b := &benchBook{path: path}
-	if path == "" {
-		b.mem = store.NewLog()
-		b.why = "This build keeps the bench log in memory only"
-	}
+	b := &benchBook{env: env, path: path}
 	env.book = b
 	return b
 }
 
-// defaultBook opens the bench log in the user's config folder, or memory
-// when there is none (WebAssembly has no file system).
+// defaultBook finds the older bench log file in the user's config folder;
+// WebAssembly has no file system, so there is none in the browser.
 func defaultBook() *benchBook {
 	if runtime.GOOS == "js" {
-		return &benchBook{mem: store.NewLog(), why: "The browser build keeps the bench log in memory only: export each pass as text to keep it"}
+		return &benchBook{}
 	}
 	dir, err := os.UserConfigDir()
 	if err != nil {
-		return &benchBook{mem: store.NewLog(), why: "No configuration folder was found (" + err.Error() + "), so the bench log is kept in memory only: export each pass as text to keep it"}
+		return &benchBook{} // no config folder: no older file to read
 	}
 	return &benchBook{path: filepath.Join(dir, "tubewright", "benchlog.json")}
 }
 
-// Where says where the log is kept, for the screens.
+// keeper is the app's storage worker.
+func (b *benchBook) keeper() *Keeper { return keepFor(b.env).keeper }
+
+// Where says where the passes are kept, for the screens.
 func (b *benchBook) Where() string {
-	if b.path == "" {
-		return b.why
+	k := b.keeper()
+	var s string
+	switch kind, _, ok := k.Where(); {
+	case !ok && !k.Loaded():
+		s = "Safety passes are kept with your saved work; the storage is still opening."
+	case !ok:
+		s = "No storage could be opened, so safety passes cannot be kept: export each pass as text."
+	case k.InMemory():
+		s = "This app keeps your saved work in memory only, so safety passes are lost when it closes: export each pass as text to keep it."
+	default:
+		s = "Safety passes are kept with your saved work (" + kind + ") and go into its export file."
 	}
-	return "Bench log file: " + b.path
+	if b.path != "" {
+		if _, err := os.Stat(b.path); err == nil {
+			s += " The older bench log file is read too and left as it is: " + b.path
+		}
+	}
+	return s
 }
 
-// Load returns the passes, newest last. A damaged file gives a
-// *store.DamagedError and no passes.
-func (b *benchBook) Load() ([]store.Pass, error) {
+// Legacy returns the passes of the older bench log file, oldest first (none
+// when there is no file). A damaged file gives a *store.DamagedError and no
+// passes.
+func (b *benchBook) Legacy() ([]store.Pass, error) {
 	if b.path == "" {
-		return append([]store.Pass(nil), b.mem.Passes...), nil
+		return nil, nil
+	}
+	if _, err := os.Stat(b.path); errors.Is(err, fs.ErrNotExist) {
+		return nil, nil
 	}
 	l, err := store.Load(b.path)
 	if err != nil {
@@ -78,36 +101,120 @@ func (b *benchBook) Load() ([]store.Pass, error) {
 	return l.Passes, nil
 }
 
-// Append saves a pass. A damaged file is not touched: the
-// *store.DamagedError comes back and the caller offers SetAside.
-func (b *benchBook) Append(p store.Pass) error {
-	if b.path == "" {
-		if err := p.Validate(); err != nil {
-			return err
-		}
-		b.mem.Passes = append(b.mem.Passes, p)
-		return nil
+// Kept returns the passes kept in the library's log, oldest first, and one
+// error for each safety entry that could not be read as a pass (reported
+// on screen, never dropped).
+func (b *benchBook) Kept() ([]store.Pass, []error) {
+	lib := b.keeper().Library()
+	if lib == nil {
+		return nil, nil
 	}
-	return store.Append(b.path, p)
+	var out []store.Pass
+	var bad []error
+	for _, e := range lib.Log {
+		if e.Calculator != safetyCalc {
+			continue
+		}
+		p, err := entryPass(e)
+		if err != nil {
+			bad = append(bad, fmt.Errorf("the safety pass logged at %s cannot be shown (%v); it is kept in your saved work and its export file", e.Time.Format("2006-01-02 15:04"), err))
+			continue
+		}
+		out = append(out, p)
+	}
+	sort.SliceStable(out, func(i, j int) bool { return out[i].Time.Before(out[j].Time) })
+	return out, bad
 }
 
-// SetAside renames a damaged log so a new one can start, and returns a
-// sentence saying where the old one went.
+// missing returns the passes of legacy that are not in kept (same time).
+func missing(legacy, kept []store.Pass) []store.Pass {
+	var out []store.Pass
+	for _, p := range legacy {
+		if !hasPass(kept, p.Time) {
+			out = append(out, p)
+		}
+	}
+	return out
+}
+
+func hasPass(ps []store.Pass, t time.Time) bool {
+	for _, p := range ps {
+		if p.Time.Equal(t) {
+			return true
+		}
+	}
+	return false
+}
+
+// Save queues pass p to be kept in the log and returns what to tell the
+// user. With aside, a damaged library is first set aside (kept under a
+// dated name; the user chose that). A damaged library without aside is
+// refused with its *store.DamagedLibrary, and nothing is queued.
+func (b *benchBook) Save(p store.Pass, aside bool) (string, error) {
+	if err := p.Validate(); err != nil {
+		return "", fmt.Errorf("the pass is incomplete: %w", err)
+	}
+	k := b.keeper()
+	if d := k.Damaged(); d != nil && !aside {
+		return "", d
+	}
+	if k.Loaded() && k.Library() == nil {
+		if errs := k.Problems(); len(errs) > 0 {
+			return "", errs[0]
+		}
+	}
+	if aside {
+		k.Do("Setting the unreadable library aside", opSetAside)
+	}
+	k.Do("Saving the safety pass", opSavePass(passEntry(p)))
+	return b.Where(), nil
+}
+
+// opCopyPasses copies passes of the older bench log file into the log,
+// skipping those already there (same time); the file is not changed.
+func opCopyPasses(ps []store.Pass) func(s *store.Shelf) (keepStatus, error) {
+	return func(s *store.Shelf) (keepStatus, error) {
+		n := 0
+		err := s.Update(func(l *store.Library) error {
+			for _, p := range ps {
+				dup := false
+				for _, e := range l.Log {
+					if e.Calculator == safetyCalc && e.Time.Equal(p.Time) {
+						dup = true
+						break
+					}
+				}
+				if !dup {
+					l.Log = append(l.Log, passEntry(p))
+					n++
+				}
+			}
+			return nil
+		})
+		if err != nil {
+			return keepStatus{}, err
+		}
+		return keepStatus{Text: fmt.Sprintf("Copied %s of the older bench log file into your saved work; the file is left as it was.", passCount(n))}, nil
+	}
+}
+
+// SetAside renames a damaged older bench log file so that its passes stop
+// being reported as unreadable, and returns a sentence saying where it went.
 func (b *benchBook) SetAside(now time.Time) (string, error) {
 	if b.path == "" {
-		return "", errors.New("nothing to set aside: the log is in memory")
+		return "", errors.New("there is no bench log file to set aside")
 	}
 	name, err := store.SetAside(b.path, now)
 	if err != nil {
 		return "", err
 	}
-	return fmt.Sprintf("The damaged bench log was kept as %s; a new log starts with the next save.", name), nil
+	return fmt.Sprintf("The damaged bench log file was kept as %s.", name), nil
 }
 
-// Export writes the text of pass p next to the log as
-// benchlog-YYYYMMDD-HHMMSS.txt, atomically, and returns its path. In
-// memory-only mode it returns "" and no error: the screen shows the text
-// for copying instead.
+// Export writes the text of pass p next to the older bench log file as
+// benchlog-YYYYMMDD-HHMMSS.txt, atomically, and returns its path. Where
+// there is no file system it returns "" and no error: the screen shows the
+// text for copying instead.
 func (b *benchBook) Export(p store.Pass) (string, error) {
 	if b.path == "" {
 		return "", nil
@@ -122,8 +229,18 @@ func (b *benchBook) Export(p store.Pass) (string, error) {
 	return name, nil
 }
 
-// isDamaged reports whether err says the log file is damaged.
+// isDamaged reports whether err says the bench log file or the library
+// document is damaged.
 func isDamaged(err error) bool {
 	var d *store.DamagedError
-	return errors.As(err, &d)
+	var l *store.DamagedLibrary
+	return errors.As(err, &d) || errors.As(err, &l)
+}
+
+// passCount says "1 safety pass" or "N safety passes".
+func passCount(n int) string {
+	if n == 1 {
+		return "1 safety pass"
+	}
+	return fmt.Sprintf("%d safety passes", n)
 }

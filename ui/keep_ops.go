@@ -89,6 +89,16 @@ func opLog(e store.Entry) func(s *store.Shelf) (keepStatus, error) {
 	}
 }
 
+// opSavePass keeps a safety pass (its entry, see passEntry) in the log.
+func opSavePass(e store.Entry) func(s *store.Shelf) (keepStatus, error) {
+	return func(s *store.Shelf) (keepStatus, error) {
+		if err := s.AddEntry(e); err != nil {
+			return keepStatus{}, err
+		}
+		return keepStatus{Text: fmt.Sprintf("Kept the safety pass of %s in the log.", e.Time.Format("2006-01-02 15:04"))}, nil
+	}
+}
+
 // opNote sets the note of the entry of calculator calc logged at t.
 func opNote(calc string, t time.Time, note string) func(s *store.Shelf) (keepStatus, error) {
 	return func(s *store.Shelf) (keepStatus, error) {

@@ -249,30 +249,22 @@ func (s *safetyScreen) buildPass() store.Pass {
 	return p
 }
 
-// saveTo saves the pass in the bench log. With aside, a damaged log file
-// is first renamed out of the way (the user chose that).
+// saveTo saves the pass in the bench log (the log of the saved work, see
+// benchBook.Save). With aside, an unreadable library is first set aside
+// (kept under a dated name; the user chose that).
 func (s *safetyScreen) saveTo(aside bool) {
-	b := bookFor(s.env)
-	msg := ""
-	if aside {
-		m, err := b.SetAside(s.now())
-		if err != nil {
-			s.status, s.statusBad = "Could not set the damaged log aside: "+err.Error(), true
-			return
-		}
-		msg = m + " "
-	}
 	p := s.buildPass()
-	if err := b.Append(p); err != nil {
+	where, err := bookFor(s.env).Save(p, aside)
+	if err != nil {
 		s.damaged = isDamaged(err)
 		s.status, s.statusBad = "Not saved: "+err.Error(), true
 		if s.damaged {
-			s.status += ". You can keep the damaged file aside (renamed, not deleted) and save into a new log."
+			s.status += ". You can keep the damaged log aside (kept under a dated name, not deleted) and save into a new one."
 		}
 		return
 	}
 	s.damaged, s.statusBad, s.saved = false, false, true
-	s.status = msg + fmt.Sprintf("Saved %s with %d of %d items ticked. %s.", p.Time.Format("2006-01-02 15:04"), s.pass.Ticked(), s.items(), b.Where())
+	s.status = fmt.Sprintf("Saved %s with %d of %d items ticked. %s", p.Time.Format("2006-01-02 15:04"), s.pass.Ticked(), s.items(), where)
 }
 
 // Layout implements Screen.

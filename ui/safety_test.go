@@ -190,11 +190,16 @@ func TestSafetyWalkToSavedLog(t *testing.T) {
 	if st, _ := h.shown("Save status"); !strings.HasPrefix(st, "Saved 2026-12-01 22:30 with 11 of 11") {
 		t.Fatalf("save status %q", st)
 	}
-	l, err := store.Load(path)
-	if err != nil || len(l.Passes) != 1 {
-		t.Fatalf("log after save: %v, %v", l, err)
+	// The pass is kept in the log of the saved work, not in the file.
+	a.Keeper().Flush()
+	kept, bad := bookFor(a.Env()).Kept()
+	if len(kept) != 1 || len(bad) != 0 {
+		t.Fatalf("log after save: %+v, %v", kept, bad)
 	}
-	p := l.Passes[0]
+	if _, err := os.Stat(path); err == nil {
+		t.Errorf("the older bench log file %s was written", path)
+	}
+	p := kept[0]
 	if len(p.Items) != 11 || !p.Items[10].Done || p.Items[10].Note != "vent valve opened, gauge at zero" {
 		t.Errorf("saved items %+v", p.Items)
 	}
@@ -251,34 +256,49 @@ func TestSafetyWalkToSavedLog(t *testing.T) {
 	}
 }
 
-// TestSafetySaveKeepsDamagedLog: a damaged log is reported and left
-// untouched until the user chooses to set it aside.
+// TestSafetySaveKeepsDamagedLog: an unreadable library is reported and
+// left untouched until the user chooses to set it aside; then the pass is
+// saved into a new one and the old bytes are kept under a dated name.
 func TestSafetySaveKeepsDamagedLog(t *testing.T) {
-	dir := t.TempDir()
-	path := filepath.Join(dir, "benchlog.json")
-	bad := []byte(`{"format":"tubewright-benchlog","version":1,"passes":[{"ti`)
-	if err := os.WriteFile(path, bad, 0o600); err != nil {
+	mem := store.NewMemory()
+	bad := []byte(`{"format":"tubewright-library","version":1,"log":[{"ti`)
+	if err := mem.Save("library", bad); err != nil {
 		t.Fatal(err)
 	}
-	a, h := safetyApp(t, path, "safety", tallPhone)
+	k := on(mem)
+	a := NewApp(nil)
+	a.UseKeeper(k, nil)
+	useBookAt(a.Env(), "")
+	a.Open("safety")
+	h := newHarness(t, tallPhone, a.Layout)
+	settle(h, k)
 	s := a.Screen("safety").(*safetyScreen)
 	s.now = func() time.Time { return time.Date(2026, 12, 1, 23, 0, 0, 0, time.UTC) }
 	h.tap("Review")
 	h.tap("Save to the bench log")
 	st, _ := h.shown("Save status")
-	if !strings.Contains(st, "Not saved") || !strings.Contains(st, "damaged") {
+	if !strings.Contains(st, "Not saved") || !strings.Contains(st, "could not be read") {
 		t.Fatalf("status %q", st)
 	}
-	if b, _ := os.ReadFile(path); string(b) != string(bad) {
-		t.Fatal("the damaged log was changed")
+	settle(h, k)
+	if b, _ := mem.Load("library"); string(b) != string(bad) {
+		t.Fatal("the damaged library was changed")
 	}
 	h.tap("Keep the damaged log aside and save")
-	if b, err := os.ReadFile(path + ".damaged-20261201T230000"); err != nil || string(b) != string(bad) {
-		t.Fatalf("set-aside file: %q, %v", b, err)
+	settle(h, k)
+	names, _ := mem.Names()
+	aside := ""
+	for _, n := range names {
+		if strings.HasPrefix(n, "library-damaged-") {
+			aside = n
+		}
 	}
-	l, err := store.Load(path)
-	if err != nil || len(l.Passes) != 1 || l.Passes[0].Items[0].Done {
-		t.Fatalf("new log: %+v, %v", l, err)
+	if b, err := mem.Load(aside); err != nil || string(b) != string(bad) {
+		t.Fatalf("set-aside document %q: %q, %v (names %q)", aside, b, err, names)
+	}
+	kept, _ := bookFor(a.Env()).Kept()
+	if len(kept) != 1 || kept[0].Items[0].Done || !kept[0].Time.Equal(s.now()) {
+		t.Fatalf("new log: %+v", kept)
 	}
 }
 
@@ -324,6 +344,7 @@ func TestScreenshotSafetyStates(t *testing.T) {
 		t.Fatalf("save failed: %s", s.status)
 	}
 	shoot(t, "safety-review", env, s)
+	keepFor(env).keeper.Flush()
 	lg := newBenchLogScreen(env)
 	shoot(t, "benchlog-pass", env, lg)
 
