@@ -151,6 +151,10 @@ func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
 			f.say(e, "Type the new name in the Device name field, then tap Rename.", true)
 			break
 		}
+		if _, used := k.Library().Device(name); used {
+			f.say(e, "A device named “"+name+"” is already saved: choose another name, or delete that one first.", true)
+			break
+		}
 		f.do(e, "Renaming the device", opRenameDevice(f.selected, name))
 		if e.name == f.selected {
 			e.name = name

@@ -36,8 +36,8 @@ func deviceShotApp(t *testing.T) (*App, *Keeper) {
 
 // TestScreenshotDevices pictures the device editor's saved devices (one
 // selected, its Open, Rename and Delete shown) on the Engine onset screen,
-// scrolled to the editor, and the Saved work page's devices, at phone,
-// tablet and desktop sizes.
+// scrolled to the editor, the editor just after a device was opened, and
+// the Saved work page's devices, at phone, tablet and desktop sizes.
 func TestScreenshotDevices(t *testing.T) {
 	for _, sz := range shotSizes {
 		t.Run("open-"+sz.name, func(t *testing.T) {
@@ -52,6 +52,15 @@ func TestScreenshotDevices(t *testing.T) {
 			// example chips come before the editor.
 			s.page.list.Position.First = 7
 			shootApp(t, "devices-open-"+sz.name, sz.size, a)
+		})
+		t.Run("opened-"+sz.name, func(t *testing.T) {
+			a, k := deviceShotApp(t)
+			a.Open(sheet.IDOnset)
+			s := a.Screen(sheet.IDOnset).(*onsetScreen)
+			d, _ := k.Library().Device("12 bar He-Ar rig")
+			handSavedDevice(a.env, "engine", d)
+			s.page.list.Position.First = 7
+			shootApp(t, "devices-opened-"+sz.name, sz.size, a)
 		})
 		t.Run("saved-"+sz.name, func(t *testing.T) {
 			a, _ := deviceShotApp(t)

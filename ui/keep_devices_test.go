@@ -108,8 +108,24 @@ func TestDeviceSaveReopenOpenRenameDelete(t *testing.T) {
 		t.Errorf("the editor says %q about its device", d)
 	}
 
-	// Rename: the stored device and the editor's device take the new name.
+	// Rename: onto a name in use refused; otherwise the stored device and
+	// the editor's device take the new name.
+	k2.Do("Saving", opSaveDevice(store.Device{Name: "spare", Saved: time.Now().Add(-time.Hour), Device: []byte(`{}`)}))
+	k2.Flush()
 	h2.tap("Open a saved device…")
+	h2.tap(rigName)
+	h2.retype("Device name", rigName, "spare")
+	h2.tap("Rename")
+	settle(h2, k2)
+	if msg, _ := h2.shown("Device save status"); !strings.Contains(msg, "already saved") {
+		t.Errorf("rename onto a used name: %q", msg)
+	}
+	if e2.name != rigName {
+		t.Errorf("a refused rename changed the editor's device name to %q", e2.name)
+	}
+	h2.tap("spare")
+	h2.tap("Delete")
+	settle(h2, k2)
 	h2.tap(rigName)
 	h2.retype("Device name", rigName, "rig B")
 	h2.tap("Rename")
@@ -162,8 +178,8 @@ func TestDeviceSaveRefusesBadDevice(t *testing.T) {
 	h.retype("Device name", "", "broken rig")
 	h.tap("Save device")
 	settle(h, k)
-	if msg, _ := h.shown("Device save status"); !strings.Contains(msg, "Not saved: fix the device first") || !strings.Contains(msg, "mean_pressure") && !strings.Contains(msg, "pressure") {
-		t.Errorf("bad device: %q", msg)
+	if msg, _ := h.shown("Device save status"); !strings.HasPrefix(msg, "Not saved: fix the device first.") || !strings.Contains(msg, "pressure") {
+		t.Errorf("bad device: %q, want it refused naming the pressure", msg)
 	}
 	if ds := storedDevices(t, mem); len(ds) != 0 {
 		t.Errorf("a bad device was stored: %+v", ds)
