@@ -3,6 +3,7 @@ package ui
 import (
 	"fmt"
 	"sort"
+	"strings"
 	"time"
 
 	"gioui.org/layout"
@@ -32,7 +33,6 @@ type benchLogScreen struct {
 	seen     uint64       // the keeper's library version shown
 	loaded   bool
 	migrated bool // the older file's passes were queued to be copied
-	since    uint64
 	rows     []widget.Clickable
 	open     int // index into passes of the pass shown, -1 for none
 	text     widget.Selectable
@@ -66,7 +66,6 @@ func (s *benchLogScreen) Enter() { s.reload() }
 func (s *benchLogScreen) reload() {
 	s.legacy, s.loadErr = bookFor(s.env).Legacy()
 	s.loaded, s.migrated = true, false
-	s.since = bookFor(s.env).keeper().Status().Seq
 	s.merge()
 }
 
@@ -79,7 +78,7 @@ func (s *benchLogScreen) merge() {
 	s.unread = unread
 	extra := missing(s.legacy, kept)
 	if len(extra) > 0 && !s.migrated && k.Library() != nil && k.Damaged() == nil {
-		k.Do("Copying the older bench log file", opCopyPasses(extra))
+		k.Do(whatCopyPasses, opCopyPasses(extra))
 		s.migrated = true
 	}
 	shownTime := time.Time{}
@@ -152,7 +151,9 @@ func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
 	for _, err := range s.unread {
 		ws = append(ws, s.errorLine(err.Error()))
 	}
-	if st := k.Status(); st.Bad && st.Seq > s.since {
+	// The keeper's last word, when it is a failure to keep a pass (the
+	// safety screen queued the save and went on).
+	if st := k.Status(); st.Bad && (strings.HasPrefix(st.Text, whatSavePass) || strings.HasPrefix(st.Text, whatCopyPasses)) {
 		ws = append(ws, s.errorLine(st.Text))
 	}
 	if s.loadErr != nil {
@@ -166,6 +167,8 @@ func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
 		}
 	}
 	switch {
+	case len(s.passes) == 0 && !k.Loaded():
+		ws = append(ws, Para(s.env, "Reading your saved work…"))
 	case len(s.passes) == 0:
 		ws = append(ws, Para(s.env, "No safety pass saved yet. Walk the safety pass and save it at the end; it appears here with its date and time."))
 	default:

@@ -146,6 +146,12 @@ func hasPass(ps []store.Pass, t time.Time) bool {
 	return false
 }
 
+// What the keeper is doing for the bench log, as its failures begin.
+const (
+	whatSavePass   = "Saving the safety pass"
+	whatCopyPasses = "Copying the older bench log file"
+)
+
 // Save queues pass p to be kept in the log and returns what to tell the
 // user. With aside, a damaged library is first set aside (kept under a
 // dated name; the user chose that). A damaged library without aside is
@@ -166,7 +172,7 @@ func (b *benchBook) Save(p store.Pass, aside bool) (string, error) {
 	if aside {
 		k.Do("Setting the unreadable library aside", opSetAside)
 	}
-	k.Do("Saving the safety pass", opSavePass(passEntry(p)))
+	k.Do(whatSavePass, opSavePass(passEntry(p)))
 	return b.Where(), nil
 }
 

@@ -229,3 +229,22 @@ func TestBenchLogReadsOlderFile(t *testing.T) {
 		t.Errorf("still reported after setting aside:\n%s", h.dump())
 	}
 }
+
+// TestBenchLogShowsFailedSave: a pass the storage refused is not listed,
+// and the bench log says why in the error colour.
+func TestBenchLogShowsFailedSave(t *testing.T) {
+	k := on(&failing{})
+	a, h := benchApp(t, k, "", "safety")
+	a.Screen("safety").(*safetyScreen).now = func() time.Time { return time.Date(2026, 12, 3, 11, 0, 0, 0, time.UTC) }
+	h.tap("Review")
+	h.tap("Save to the bench log")
+	settle(h, k)
+	h.tap("Open the bench log")
+	settle(h, k)
+	if v, _ := h.shown("Bench log error"); !strings.Contains(v, "Saving the safety pass failed: disk full") {
+		t.Errorf("failure not shown: %q\n%s", v, h.dump())
+	}
+	if !h.hasLabel("No safety pass saved yet") {
+		t.Errorf("a refused pass is listed:\n%s", h.dump())
+	}
+}
