@@ -10,7 +10,6 @@ import (
 
 	"gioui.org/layout"
 	"gioui.org/widget"
-	"gioui.org/widget/material"
 
 	"tubewright/calc/linear"
 	"tubewright/ui/store"
@@ -283,20 +282,8 @@ func (f *deviceFile) panel(env *Env, e *deviceEditor) []layout.Widget {
 	case len(f.listed) == 0:
 		ws = append(ws, Para(env, "No device saved yet."))
 	}
-	for i, d := range f.listed {
-		sel := d.Name == f.selected
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepListRow(env, gtx, &f.rows[i], "Device "+d.Name, d.Name, deviceSummary(d), sel)
-		})
-		if sel {
-			ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-				btn := func(c *widget.Clickable, label string, primary bool) layout.Widget {
-					return func(gtx layout.Context) layout.Dimensions { return keepButton(env, gtx, c, label, primary) }
-				}
-				return keepFlow(gtx, btn(&f.openIt, "Open", true), btn(&f.rename, "Rename", false), btn(&f.del, "Delete", false))
-			})
-		}
-	}
+	ws = append(ws, deviceRows(env, f.listed, f.rows, f.selected,
+		keepAction{&f.openIt, "Open", true}, keepAction{&f.rename, "Rename", false}, keepAction{&f.del, "Delete", false})...)
 	if f.oldThere {
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 			return keepListRow(env, gtx, &f.fromOld, "Device file of an earlier version", "Kept in a file by an earlier version", f.path, false)
@@ -315,25 +302,5 @@ func (f *deviceFile) layoutStatus(gtx layout.Context, env *Env) layout.Dimension
 			action = f.status.Action
 		}
 	}
-	if text == "" {
-		return layout.Dimensions{}
-	}
-	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			l := material.Body2(env.Theme, text)
-			l.Color = env.Colors.Text
-			if bad {
-				l.Color = env.Colors.Error
-			}
-			return Described("Device save status", l.Layout)(gtx)
-		}),
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			if action == "" {
-				return layout.Dimensions{}
-			}
-			return layout.Inset{Top: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				return keepButton(env, gtx, &f.action, action, true)
-			})
-		}),
-	)
+	return keepStatusLine(gtx, env, "Device save status", text, bad, action, &f.action)
 }

@@ -7,6 +7,9 @@ import (
 	"sort"
 	"sync"
 
+	"gioui.org/layout"
+	"gioui.org/widget"
+
 	"tubewright/calc/linear"
 	"tubewright/ui/store"
 )
@@ -90,6 +93,55 @@ func deviceSummary(d store.Device) string {
 		s += " · " + f.Gas
 	}
 	return s
+}
+
+// keepAction is one button of the actions shown under a selected item.
+type keepAction struct {
+	c       *widget.Clickable
+	label   string
+	primary bool
+}
+
+// deviceRows lists devices as tappable rows, described "Device NAME", with
+// the date, parts and gas; the selected one is followed by its actions.
+// rows holds at least one Clickable per device.
+func deviceRows(env *Env, list []store.Device, rows []widget.Clickable, selected string, actions ...keepAction) []layout.Widget {
+	var ws []layout.Widget
+	for i, d := range list {
+		sel := d.Name == selected
+		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+			return keepListRow(env, gtx, &rows[i], "Device "+d.Name, d.Name, deviceSummary(d), sel)
+		})
+		if sel {
+			ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+				bs := make([]layout.Widget, len(actions))
+				for j, a := range actions {
+					bs[j] = func(gtx layout.Context) layout.Dimensions { return keepButton(env, gtx, a.c, a.label, a.primary) }
+				}
+				return keepFlow(gtx, bs...)
+			})
+		}
+	}
+	return ws
+}
+
+// keepStatusLine draws a status message described desc, red when bad, with
+// its follow-up button (action, on c) below it when action is not "".
+func keepStatusLine(gtx layout.Context, env *Env, desc, text string, bad bool, action string, c *widget.Clickable) layout.Dimensions {
+	if text == "" {
+		return layout.Dimensions{}
+	}
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(keepMessage(env, desc, text, bad)),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			if action == "" {
+				return layout.Dimensions{}
+			}
+			return layout.Inset{Top: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				return keepButton(env, gtx, c, action, true)
+			})
+		}),
+	)
 }
 
 // storedDeviceFile reads a saved device's document for the editor, named as

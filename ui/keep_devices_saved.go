@@ -66,21 +66,10 @@ func (sd *savedDevices) widgets(s *savedScreen, lib *store.Library) []layout.Wid
 	if len(sd.shown) == 0 {
 		ws = append(ws, Note(env, "No device saved yet. On "+screenTitle(sheet.IDOnset)+" or "+screenTitle(sheet.IDHeatPump)+", Save device as… keeps the device in the editor under a name."))
 	}
-	btn := func(c *widget.Clickable, label string, primary bool) layout.Widget {
-		return func(gtx layout.Context) layout.Dimensions { return keepButton(env, gtx, c, label, primary) }
-	}
-	for i, d := range sd.shown {
-		sel := d.Name == sd.selected
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepListRow(env, gtx, &sd.rows[i], "Device "+d.Name, d.Name, deviceSummary(d), sel)
-		})
-		if sel {
-			ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-				return keepFlow(gtx, btn(&sd.inOnset, "Open in "+screenTitle(sheet.IDOnset), true), btn(&sd.inHeatPump, "Open in "+screenTitle(sheet.IDHeatPump), false), btn(&sd.del, "Delete", false))
-			})
-		}
-	}
-	return ws
+	return append(ws, deviceRows(env, sd.shown, sd.rows, sd.selected,
+		keepAction{&sd.inOnset, "Open in " + screenTitle(sheet.IDOnset), true},
+		keepAction{&sd.inHeatPump, "Open in " + screenTitle(sheet.IDHeatPump), false},
+		keepAction{&sd.del, "Delete", false})...)
 }
 
 // screenTitle is the title of calculator id as the catalog shows it.

@@ -320,20 +320,7 @@ func (s *savedScreen) layoutStatus(gtx layout.Context) layout.Dimensions {
 			action = s.status.Action
 		}
 	}
-	if text == "" {
-		return layout.Dimensions{}
-	}
-	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-		layout.Rigid(keepMessage(s.env, "Saved work status", text, bad)),
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			if action == "" {
-				return layout.Dimensions{}
-			}
-			return layout.Inset{Top: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				return keepButton(s.env, gtx, &s.action, action, true)
-			})
-		}),
-	)
+	return keepStatusLine(gtx, s.env, "Saved work status", text, bad, action, &s.action)
 }
 
 // logWidgets lists the log newest first, the entry opened shown whole.
