@@ -66,15 +66,17 @@ func (b *benchBook) keeper() *Keeper { return keepFor(b.env).keeper }
 func (b *benchBook) Where() string {
 	k := b.keeper()
 	var s string
-	switch kind, _, ok := k.Where(); {
+	switch kind, persist, ok := k.Where(); {
 	case !ok && !k.Loaded():
 		s = "Safety passes are kept with your saved work; the storage is still opening."
 	case !ok:
 		s = "No storage could be opened, so safety passes cannot be kept: export each pass as text."
 	case k.InMemory():
 		s = "This app keeps your saved work in memory only, so safety passes are lost when it closes: export each pass as text to keep it."
+	case persist == store.PersistDenied:
+		s = "Safety passes are kept with your saved work and go into its export file. Kept in: " + kind + "; the browser may clear it when space runs low, so export now and then."
 	default:
-		s = "Safety passes are kept with your saved work (" + kind + ") and go into its export file."
+		s = "Safety passes are kept with your saved work and go into its export file. Kept in: " + kind + "."
 	}
 	if b.path != "" {
 		if _, err := os.Stat(b.path); err == nil {

@@ -248,3 +248,34 @@ func TestBenchLogShowsFailedSave(t *testing.T) {
 		t.Errorf("a refused pass is listed:\n%s", h.dump())
 	}
 }
+
+// TestBenchLogOnFiles: on the desktop's file storage the pass lands in the
+// library file of the data folder and a new app finds it there; the note
+// says where.
+func TestBenchLogOnFiles(t *testing.T) {
+	dir := t.TempDir()
+	files, err := store.NewFiles(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	k := on(files)
+	a, h := benchApp(t, k, filepath.Join(dir, "none", "benchlog.json"), "safety")
+	a.Screen("safety").(*safetyScreen).now = func() time.Time { return time.Date(2026, 12, 3, 12, 0, 0, 0, time.UTC) }
+	h.tap("Review")
+	h.tap("Save to the bench log")
+	if st, _ := h.shown("Save status"); !strings.Contains(st, "Kept in: files in "+dir+".") {
+		t.Errorf("save status %q", st)
+	}
+	settle(h, k)
+
+	again, err := store.NewFiles(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	k2 := on(again)
+	_, h2 := benchApp(t, k2, filepath.Join(dir, "none", "benchlog.json"), "benchlog")
+	waitFor(t, h2, k2, func() bool { return h2.hasLabel("2026-12-03 12:00 · 0 of 11 ticked") })
+	if h2.hasLabel("older bench log file") {
+		t.Errorf("a missing older file is named:\n%s", h2.dump())
+	}
+}
