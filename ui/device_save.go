@@ -8,6 +8,7 @@ import (
 	"strings"
 	"time"
 
+	"gioui.org/io/key"
 	"gioui.org/layout"
 	"gioui.org/widget"
 
@@ -73,11 +74,13 @@ func (f *deviceFile) say(e *deviceEditor, text string, bad bool) {
 	f.statusLive = false
 }
 
-// show opens the saved devices with the editor's device name to save under.
+// show opens the saved devices with the editor's device name to save
+// under, selected, so that typing replaces it.
 func (f *deviceFile) show(e *deviceEditor) {
 	f.shown, f.selected, f.local = true, "", ""
 	f.name.SingleLine, f.name.Submit = true, true
 	f.name.SetText(e.name)
+	f.name.SetCaret(f.name.Len(), 0)
 	f.oldThere = false
 	if f.path != "" {
 		_, err := os.Stat(f.path)
@@ -99,7 +102,12 @@ func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
 	if d, ok := takeSavedDevice(e.env, e.example); ok {
 		f.openStored(e, d)
 	}
-	if f.saveAs.Clicked(gtx) || f.openList.Clicked(gtx) {
+	if f.saveAs.Clicked(gtx) {
+		// Save as wants a name: the keyboard comes up on it at once.
+		f.show(e)
+		gtx.Execute(key.FocusCmd{Tag: &f.name})
+	}
+	if f.openList.Clicked(gtx) {
 		f.show(e)
 	}
 	if f.close.Clicked(gtx) {

@@ -54,6 +54,12 @@ func TestDeviceSaveReopenOpenRenameDelete(t *testing.T) {
 	_, h, e := deviceApp(t, k, sheet.IDOnset)
 	n := len(e.parts)
 	h.tap("Save device as…")
+	// The name field takes the keyboard with the device's name selected,
+	// so that typing replaces it.
+	if !h.r.Source().Focused(&e.saved.name) || e.saved.name.SelectedText() != e.name || e.name == "" {
+		t.Errorf("after Save device as…: name field focused %v, selected %q, want the device's name %q",
+			h.r.Source().Focused(&e.saved.name), e.saved.name.SelectedText(), e.name)
+	}
 	h.retype("Device name", e.name, rigName)
 	h.tap("Save device")
 	settle(h, k)
