@@ -1,6 +1,7 @@
 package store
 
 import (
+	"encoding/json"
 	"errors"
 	"fmt"
 	"sync"
@@ -233,6 +234,30 @@ func (s *Shelf) RenameDevice(old, name string) error {
 			return fmt.Errorf("device %q: %w", name, ErrExists)
 		}
 		l.Devices[i].Name = name
+		return nil
+	})
+}
+
+// DuplicateDevice copies the device named name under copyName, dated now;
+// a used copyName is refused with ErrExists and an empty one with the
+// name's own error. The copy's document is its own, not shared with the
+// original.
+func (s *Shelf) DuplicateDevice(name, copyName string) error {
+	if err := checkItemName(copyName); err != nil {
+		return err
+	}
+	return s.Update(func(l *Library) error {
+		i := indexDevice(l.Devices, name)
+		if i < 0 {
+			return fmt.Errorf("no device named %q", name)
+		}
+		if indexDevice(l.Devices, copyName) >= 0 {
+			return fmt.Errorf("device %q: %w", copyName, ErrExists)
+		}
+		d := l.Devices[i]
+		d.Name, d.Saved = copyName, s.now()
+		d.Device = append(json.RawMessage(nil), d.Device...)
+		l.Devices = append(l.Devices, d)
 		return nil
 	})
 }

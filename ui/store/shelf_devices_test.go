@@ -87,6 +87,75 @@ func TestShelfDevices(t *testing.T) {
 	}
 }
 
+// TestShelfDuplicateDevice copies a named device on every back end and
+// finds both, each with its own date and the same document, in a shelf
+// opened anew on the same back end; copies onto a used or empty name and
+// of a missing device are refused and leave the library as it was.
+func TestShelfDuplicateDevice(t *testing.T) {
+	t.Parallel()
+	doc := json.RawMessage(`{"gas":"argon","parts":[{"duct":{"length":"0.147 m"}}]}`)
+	for name, b := range backends(t) {
+		t.Run(name, func(t *testing.T) {
+			s, err := OpenShelf(b)
+			if err != nil {
+				t.Fatal(err)
+			}
+			when := time.Date(2026, 12, 1, 9, 30, 0, 0, time.UTC)
+			later := time.Date(2026, 12, 2, 14, 5, 0, 0, time.UTC)
+			s.now = func() time.Time { return later }
+			if err := s.SaveDevice(Device{Name: "rig A", Saved: when, Device: doc}, false); err != nil {
+				t.Fatal(err)
+			}
+			if err := s.SaveDevice(Device{Name: "rig B", Saved: when, Device: json.RawMessage(`{"gas":"air","parts":[]}`)}, false); err != nil {
+				t.Fatal(err)
+			}
+			if err := s.DuplicateDevice("rig A", "rig B"); !errors.Is(err, ErrExists) {
+				t.Errorf("duplicate onto rig B: %v, want ErrExists", err)
+			}
+			if err := s.DuplicateDevice("rig A", " "); err == nil {
+				t.Error("duplicate to a blank name succeeded")
+			}
+			if err := s.DuplicateDevice("no such rig", "x"); err == nil {
+				t.Error("duplicating a missing device succeeded")
+			}
+			if n := len(s.Library().Devices); n != 2 {
+				t.Fatalf("%d devices after the refused copies, want 2", n)
+			}
+			if err := s.DuplicateDevice("rig A", "rig A copy"); err != nil {
+				t.Fatal(err)
+			}
+			reopened, err := OpenShelf(b)
+			if err != nil {
+				t.Fatal(err)
+			}
+			lib := reopened.Library()
+			if n := len(lib.Devices); n != 3 {
+				t.Fatalf("%d devices stored after the copy, want 3", n)
+			}
+			orig, ok := lib.Device("rig A")
+			if !ok || !orig.Saved.Equal(when) || compact(t, orig.Device) != string(doc) {
+				t.Errorf("original after the copy: %+v (found %v), want it unchanged", orig, ok)
+			}
+			cp, ok := lib.Device("rig A copy")
+			if !ok || !cp.Saved.Equal(later) || compact(t, cp.Device) != string(doc) {
+				t.Errorf("copy: %+v (found %v), want rig A's document dated %v", cp, ok, later)
+			}
+			b2, _ := lib.Device("rig B")
+			if compact(t, b2.Device) != `{"gas":"air","parts":[]}` {
+				t.Errorf("rig B changed by the refused copy: %s", b2.Device)
+			}
+			// The copy is its own: deleting the original leaves it.
+			if _, err := s.DeleteDevice("rig A"); err != nil {
+				t.Fatal(err)
+			}
+			reopened, _ = OpenShelf(b)
+			if _, ok := reopened.Library().Device("rig A copy"); !ok {
+				t.Error("the copy went with the deleted original")
+			}
+		})
+	}
+}
+
 // compact returns a JSON document without its indentation (a stored
 // device document is indented with the library).
 func compact(t *testing.T, doc []byte) string {
