@@ -63,8 +63,7 @@ func NewForm(env *Env, s *sheet.Sheet) *Form {
 			it.pick = NewChoice(env, in.Label, keys, words)
 			it.pick.Select(start)
 		case sheet.Switch:
-			it.on = new(widget.Bool)
-			it.on.Value, _ = strconv.ParseBool(start)
+			it.on = &widget.Bool{Value: switchOn(in, start)}
 		default:
 			fd := NewField(env, in.Label, in.Dim, "")
 			fd.In = in
@@ -116,11 +115,18 @@ func (f *Form) SetText(key, text string) {
 	case it.pick != nil:
 		it.pick.Select(text)
 	case it.on != nil:
-		it.on.Value, _ = strconv.ParseBool(text)
+		it.on.Value = switchOn(it.in, text)
 	default:
 		it.field.SetText(text)
 	}
 	f.dirty = true
+}
+
+// switchOn reads a switch's text with the calculator's own words (on/off,
+// yes/no, true/false); anything else is off.
+func switchOn(in *sheet.Input, text string) bool {
+	v, err := sheet.ParseInput(in, text)
+	return err == nil && v.On
 }
 
 func (it *formItem) text() string {
