@@ -21,6 +21,10 @@ WEB_DIR := build/web
 NPM_DIR := build/npm
 PLAYWRIGHT_VERSION := 1.65.2
 BROWSER_PKGS := chromium fonts-dejavu-core
+# The store's tests built for the browser run under node, with IndexedDB from
+# fake-indexeddb, installed in a folder of its own under build/npm.
+FAKE_IDB_VERSION := 6.2.8
+STORE_NPM_DIR := $(NPM_DIR)/store
 SERVE_ADDR ?= 127.0.0.1:8080
 
 # apt_install checks that the Debian packages $(1) are installed; as root it
@@ -42,8 +46,20 @@ define apt_install
 	fi
 endef
 
+# npm_install checks that npm is on PATH; as root it installs Debian's
+# nodejs and npm, otherwise it prints the command and fails.
+define npm_install
+	@command -v npm >/dev/null || { \
+		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
+			echo "installing system packages: nodejs npm"; \
+			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends nodejs npm >/dev/null; \
+		else \
+			echo "npm is missing; run:"; echo "  sudo apt-get install -y --no-install-recommends nodejs npm"; exit 1; \
+		fi; }
+endef
+
 .PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
-	web serve-web web-size browser-deps browser-test apk shots bench fuzz clean
+	web serve-web web-size browser-deps browser-test store-wasm-deps store-wasm-test apk shots bench fuzz clean
 
 all: test
 
@@ -52,7 +68,7 @@ run: deps
 	$(GO) run -ldflags "$(LDFLAGS)" ./cmd/tubewright
 
 ## test: everything CI checks
-test: deps fmt-check vet lint unit build-twcalc build-wasm browser-test
+test: deps fmt-check vet lint unit store-wasm-test build-twcalc build-wasm browser-test
 	@echo "make test: all checks passed"
 
 check-go:
@@ -99,13 +115,7 @@ web-size: web browser-deps
 
 browser-deps:
 	$(call apt_install,$(BROWSER_PKGS))
-	@command -v npm >/dev/null || { \
-		if [ "$$(id -u)" = 0 ] && command -v apt-get >/dev/null; then \
-			echo "installing system packages: nodejs npm"; \
-			apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends nodejs npm >/dev/null; \
-		else \
-			echo "npm is missing; run:"; echo "  sudo apt-get install -y --no-install-recommends nodejs npm"; exit 1; \
-		fi; }
+	$(call npm_install)
 	@test -f $(NPM_DIR)/node_modules/playwright-core/package.json || \
 		npm install --prefix $(NPM_DIR) --no-save --no-audit --no-fund playwright-core@$(PLAYWRIGHT_VERSION)
 
@@ -113,6 +123,17 @@ browser-deps:
 browser-test: web browser-deps
 	$(GO) run ./assets/web/pack -check $(WEB_DIR)
 	NODE_PATH=$(CURDIR)/$(NPM_DIR)/node_modules node assets/web/browsertest/run.js test $(WEB_DIR)
+
+store-wasm-deps: check-go
+	$(call npm_install)
+	@test -f $(STORE_NPM_DIR)/node_modules/fake-indexeddb/package.json || \
+		npm install --prefix $(STORE_NPM_DIR) --no-save --no-audit --no-fund fake-indexeddb@$(FAKE_IDB_VERSION)
+
+## store-wasm-test: the store's tests built for the browser (GOOS=js) and run
+## under node, so the browser back end passes the same checks as the others
+store-wasm-test: store-wasm-deps
+	NODE_PATH=$(CURDIR)/$(STORE_NPM_DIR)/node_modules NODE_OPTIONS="--require fake-indexeddb/auto" \
+		GOOS=js GOARCH=wasm $(GO) test -count=1 -exec="$$($(GO) env GOROOT)/lib/wasm/go_js_wasm_exec" ./ui/store
 
 ## apk: the Android package in build/tubewright.apk with Gio's gogio (pinned),
 ## where an Android SDK, NDK and JDK are installed; otherwise says what to install

@@ -18,6 +18,7 @@ import (
 type Browser struct {
 	db      js.Value // the IndexedDB database; undefined when local
 	local   js.Value // localStorage when IndexedDB is refused
+	prefix  string   // the key prefix of documents in localStorage
 	persist Persistence
 }
 
@@ -26,8 +27,19 @@ const browserStore = "docs"
 // NewBrowser opens the browser's storage and asks it to keep the app's data
 // (navigator.storage.persist); Persistence says what it answered.
 func NewBrowser() (*Browser, error) {
-	b := &Browser{}
-	db, err := openIndexedDB()
+	return newBrowserNamed("tubewright", localPrefix, true)
+}
+
+// newBrowserNamed opens the IndexedDB database dbName, or localStorage
+// under the key prefix when IndexedDB is refused or useIndexedDB is false.
+// Tests give each back end its own names.
+func newBrowserNamed(dbName, prefix string, useIndexedDB bool) (*Browser, error) {
+	b := &Browser{prefix: prefix}
+	err := errors.New("IndexedDB not asked for")
+	var db js.Value
+	if useIndexedDB {
+		db, err = openIndexedDB(dbName)
+	}
 	if err != nil {
 		ls := js.Global().Get("localStorage")
 		if !ls.Truthy() {
@@ -100,7 +112,7 @@ func jsString(v js.Value) string {
 	return v.Call("toString").String()
 }
 
-func openIndexedDB() (db js.Value, err error) {
+func openIndexedDB(dbName string) (db js.Value, err error) {
 	defer func() {
 		if r := recover(); r != nil {
 			err = fmt.Errorf("%v", r)
@@ -110,7 +122,7 @@ func openIndexedDB() (db js.Value, err error) {
 	if !idb.Truthy() {
 		return js.Undefined(), errors.New("no IndexedDB")
 	}
-	req := idb.Call("open", "tubewright", 1)
+	req := idb.Call("open", dbName, 1)
 	upgrade := js.FuncOf(func(this js.Value, args []js.Value) any {
 		d := req.Get("result")
 		if !d.Get("objectStoreNames").Call("contains", browserStore).Bool() {
@@ -124,7 +136,11 @@ func openIndexedDB() (db js.Value, err error) {
 }
 
 func askPersist() Persistence {
-	st := js.Global().Get("navigator").Get("storage")
+	nav := js.Global().Get("navigator")
+	if !nav.Truthy() {
+		return PersistUnknown
+	}
+	st := nav.Get("storage")
 	if !st.Truthy() || !st.Get("persist").Truthy() {
 		return PersistUnknown
 	}
@@ -156,7 +172,7 @@ func (b *Browser) Load(name string) ([]byte, error) {
 			return nil, fmt.Errorf("store: reading %s: %w", name, err)
 		}
 	} else {
-		v = b.local.Call("getItem", localPrefix+name)
+		v = b.local.Call("getItem", b.prefix+name)
 	}
 	if v.IsUndefined() || v.IsNull() {
 		return nil, fmt.Errorf("store: %s: %w", name, ErrNotFound)
@@ -171,7 +187,7 @@ func (b *Browser) Save(name string, data []byte) error {
 	}
 	if !b.db.Truthy() {
 		defer func() { _ = recover() }() // a full localStorage throws
-		b.local.Call("setItem", localPrefix+name, string(data))
+		b.local.Call("setItem", b.prefix+name, string(data))
 		return nil
 	}
 	if _, err := request(b.store("readwrite").Call("put", string(data), name)); err != nil {
@@ -186,7 +202,7 @@ func (b *Browser) Delete(name string) error {
 		return err
 	}
 	if !b.db.Truthy() {
-		b.local.Call("removeItem", localPrefix+name)
+		b.local.Call("removeItem", b.prefix+name)
 		return nil
 	}
 	_, err := request(b.store("readwrite").Call("delete", name))
@@ -207,7 +223,7 @@ func (b *Browser) Names() ([]string, error) {
 	} else {
 		for i := 0; i < b.local.Length(); i++ {
 			k := b.local.Call("key", i).String()
-			if n, ok := cutPrefix(k, localPrefix); ok {
+			if n, ok := cutPrefix(k, b.prefix); ok {
 				out = append(out, n)
 			}
 		}
