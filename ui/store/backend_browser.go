@@ -181,12 +181,16 @@ func (b *Browser) Load(name string) ([]byte, error) {
 }
 
 // Save implements Backend.
-func (b *Browser) Save(name string, data []byte) error {
+func (b *Browser) Save(name string, data []byte) (err error) {
 	if err := checkName(name); err != nil {
 		return err
 	}
 	if !b.db.Truthy() {
-		defer func() { _ = recover() }() // a full localStorage throws
+		defer func() {
+			if r := recover(); r != nil { // a full localStorage throws
+				err = fmt.Errorf("store: saving %s: the browser refused it (%v)", name, r)
+			}
+		}()
 		b.local.Call("setItem", b.prefix+name, string(data))
 		return nil
 	}
