@@ -21,7 +21,8 @@ import (
 // date and time they were saved. Save as keeps the editor's device under
 // the name typed (a name in use is replaced only when asked) and the
 // editor's device takes that name; a saved device can be opened into the
-// editor, renamed, or deleted with undo. The browser keeps them as every
+// editor, renamed, copied under a free name, or deleted with undo; the
+// answers to these changes show here only, not in the keep bar. The browser keeps them as every
 // other platform does. A device that does not read is reported and the
 // editor keeps its own.
 //
@@ -32,14 +33,15 @@ type deviceFile struct {
 	path   string        // the earlier version's file; "" where there are no files
 	editor *deviceEditor // the editor, as of the last update
 
-	saveAs, openList, close                    widget.Clickable
-	shown                                      bool // the saved devices show in the editor
-	name                                       widget.Editor
-	save, openIt, rename, del, action, fromOld widget.Clickable
-	rows                                       []widget.Clickable
-	listed                                     []store.Device // as last laid out, newest first
-	selected                                   string
-	oldThere                                   bool // the earlier version's file exists
+	saveAs, openList, close                widget.Clickable
+	shown                                  bool // the saved devices show in the editor
+	name                                   widget.Editor
+	save, openIt, rename, dup, del, action widget.Clickable
+	fromOld                                widget.Clickable
+	rows                                   []widget.Clickable
+	listed                                 []store.Device // as last laid out, newest first
+	selected                               string
+	oldThere                               bool // the earlier version's file exists
 
 	started    bool   // since was set, at the first update
 	since      uint64 // keeper statuses up to this one are not the editor's
@@ -65,7 +67,7 @@ func (f *deviceFile) keeper(e *deviceEditor) *Keeper { return keepFor(e.env).kee
 func (f *deviceFile) do(e *deviceEditor, what string, run func(s *store.Shelf) (keepStatus, error)) {
 	f.local = ""
 	f.since = f.keeper(e).Status().Seq
-	f.keeper(e).Do(what, run)
+	doClaimed(f.keeper(e), f, what, run)
 }
 
 func (f *deviceFile) say(e *deviceEditor, text string, bad bool) {
@@ -97,7 +99,9 @@ func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
 		f.started, f.since = true, k.Status().Seq
 	}
 	if st := k.Status(); st.Seq > f.since {
-		f.status, f.statusLive, f.since, f.local = st, true, st.Seq, ""
+		// Only the answers to this editor's changes show here; the others
+		// show where they were asked for, and clear this one's message.
+		f.status, f.statusLive, f.since, f.local = st, claimedBy(k, st.Seq) == f, st.Seq, ""
 	}
 	if d, ok := takeSavedDevice(e.env, e.example); ok {
 		f.openStored(e, d)
@@ -167,6 +171,8 @@ func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
 			e.name = name
 		}
 		f.selected = name
+	case f.dup.Clicked(gtx) && ok:
+		f.do(e, "Copying the device", opDuplicateDevice(f.selected))
 	case f.del.Clicked(gtx) && ok:
 		f.do(e, "Deleting the device", opDeleteDevice(f.selected))
 		f.selected = ""
@@ -269,7 +275,7 @@ func (f *deviceFile) panel(env *Env, e *deviceEditor) []layout.Widget {
 	}
 	ws := []layout.Widget{
 		Heading(env, "Saved devices"),
-		Note(env, "Type a name and tap Save device to keep the device shown. Tap a saved device to open, rename or delete it. Every device screen lists the same devices."),
+		Note(env, "Type a name and tap Save device to keep the device shown. Tap a saved device to open, rename, copy or delete it. Every device screen lists the same devices."),
 		func(gtx layout.Context) layout.Dimensions {
 			return keepEditor(env, gtx, &f.name, "Name, e.g. 12 bar He-Ar rig", "Device name")
 		},
@@ -291,7 +297,8 @@ func (f *deviceFile) panel(env *Env, e *deviceEditor) []layout.Widget {
 		ws = append(ws, Para(env, "No device saved yet."))
 	}
 	ws = append(ws, deviceRows(env, f.listed, f.rows, f.selected,
-		keepAction{&f.openIt, "Open", true}, keepAction{&f.rename, "Rename", false}, keepAction{&f.del, "Delete", false})...)
+		keepAction{&f.openIt, "Open", true}, keepAction{&f.rename, "Rename", false},
+		keepAction{&f.dup, "Duplicate", false}, keepAction{&f.del, "Delete", false})...)
 	if f.oldThere {
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 			return keepListRow(env, gtx, &f.fromOld, "Device file of an earlier version", "Kept in a file by an earlier version", f.path, false)

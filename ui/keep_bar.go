@@ -103,7 +103,9 @@ func (b *keepBar) say(text string, bad bool) {
 func (b *keepBar) update(gtx layout.Context, f *Form) {
 	k := b.keeper()
 	if st := k.Status(); st.Seq > b.since {
-		b.status, b.statusLive = st, true
+		// A device editor's changes answer in that editor (see
+		// statusClaims): the bar does not say them again.
+		b.status, b.statusLive = st, claimedBy(k, st.Seq) == nil
 		b.since = st.Seq
 		b.local = ""
 	}

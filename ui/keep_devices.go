@@ -49,6 +49,25 @@ func opRenameDevice(old, name string) func(s *store.Shelf) (keepStatus, error) {
 	}
 }
 
+// opDuplicateDevice copies a saved device under a name not yet used ("NAME
+// copy", "NAME copy 2", ...), as setups are copied.
+func opDuplicateDevice(name string) func(s *store.Shelf) (keepStatus, error) {
+	return func(s *store.Shelf) (keepStatus, error) {
+		lib := s.Library()
+		copyName := name + " copy"
+		for i := 2; ; i++ {
+			if _, used := lib.Device(copyName); !used {
+				break
+			}
+			copyName = fmt.Sprintf("%s copy %d", name, i)
+		}
+		if err := s.DuplicateDevice(name, copyName); err != nil {
+			return keepStatus{}, err
+		}
+		return keepStatus{Text: fmt.Sprintf("Copied the device “%s” as “%s”.", name, copyName)}, nil
+	}
+}
+
 // opDeleteDevice deletes a saved device and offers to undo it.
 func opDeleteDevice(name string) func(s *store.Shelf) (keepStatus, error) {
 	return func(s *store.Shelf) (keepStatus, error) {
@@ -64,6 +83,52 @@ func opDeleteDevice(name string) func(s *store.Shelf) (keepStatus, error) {
 				return keepStatus{Text: fmt.Sprintf("The device “%s” is back.", name)}, nil
 			}}, nil
 	}
+}
+
+// statusClaims remembers, per keeper, which statuses answer a change that
+// a device editor queued, so that the message shows once: in that editor,
+// beside the saved devices and their Undo or Replace, and not again in the
+// keep bar at the foot of the screen (which shows the rest). The keeper
+// runs one change at a time on its worker and numbers its status one past
+// the last right after the change returns, so the change itself can note
+// the number. A change that never ran (no storage could be opened) is
+// claimed by no one and shows in the keep bar.
+var statusClaims struct {
+	sync.Mutex
+	m map[*Keeper]map[uint64]any
+}
+
+// doClaimed queues run on k like k.Do, its status claimed by owner.
+func doClaimed(k *Keeper, owner any, what string, run func(s *store.Shelf) (keepStatus, error)) {
+	k.Do(what, func(s *store.Shelf) (keepStatus, error) {
+		st, err := run(s)
+		seq := k.Status().Seq + 1
+		statusClaims.Lock()
+		defer statusClaims.Unlock()
+		if statusClaims.m == nil {
+			statusClaims.m = map[*Keeper]map[uint64]any{}
+		}
+		m := statusClaims.m[k]
+		if m == nil {
+			m = map[uint64]any{}
+			statusClaims.m[k] = m
+		}
+		for old := range m {
+			if old+64 < seq {
+				delete(m, old)
+			}
+		}
+		m[seq] = owner
+		return st, err
+	})
+}
+
+// claimedBy returns the owner of k's status seq, or nil when no one
+// claimed it.
+func claimedBy(k *Keeper, seq uint64) any {
+	statusClaims.Lock()
+	defer statusClaims.Unlock()
+	return statusClaims.m[k][seq]
 }
 
 // devicesNewestFirst returns the library's devices, the last saved first.

@@ -11,13 +11,14 @@ import (
 // savedDevices is the part of the Saved work page that lists the named
 // devices (newest first, with the date and time saved, the number of parts
 // and the gas): tap one to open it in the Engine onset or Heat pump span
-// screen's editor, or to delete it (with undo).
+// screen's editor, to copy it under a free name, or to delete it (with
+// undo).
 type savedDevices struct {
 	rows     []widget.Clickable
 	shown    []store.Device
 	selected string
 
-	inOnset, inHeatPump, del widget.Clickable
+	inOnset, inHeatPump, dup, del widget.Clickable
 }
 
 // update handles the devices' taps on page s.
@@ -49,6 +50,8 @@ func (sd *savedDevices) update(gtx layout.Context, s *savedScreen) {
 		handSavedDevice(s.env, "heatpump", d)
 		sd.selected = ""
 		s.env.Open(sheet.IDHeatPump)
+	case sd.dup.Clicked(gtx):
+		s.do("Copying the device", opDuplicateDevice(sd.selected))
 	case sd.del.Clicked(gtx):
 		s.do("Deleting the device", opDeleteDevice(sd.selected))
 		sd.selected = ""
@@ -69,6 +72,7 @@ func (sd *savedDevices) widgets(s *savedScreen, lib *store.Library) []layout.Wid
 	return append(ws, deviceRows(env, sd.shown, sd.rows, sd.selected,
 		keepAction{&sd.inOnset, "Open in " + screenTitle(sheet.IDOnset), true},
 		keepAction{&sd.inHeatPump, "Open in " + screenTitle(sheet.IDHeatPump), false},
+		keepAction{&sd.dup, "Duplicate", false},
 		keepAction{&sd.del, "Delete", false})...)
 }
 

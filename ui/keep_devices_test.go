@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"bytes"
+	"encoding/json"
 	"image"
 	"os"
 	"strings"
@@ -301,4 +303,118 @@ func TestSavedWorkListsDevices(t *testing.T) {
 	h.tap("Undo")
 	settle(h, k)
 	h.mustDesc("Device tube on the bench")
+}
+
+// labelsSaying counts the text labels on screen that contain text: a
+// message drawn twice (the device editor and the keep bar) counts two.
+func labelsSaying(h *harness, text string) int {
+	n := 0
+	for _, nd := range h.nodes() {
+		if strings.Contains(nd.Desc.Label, text) {
+			n++
+		}
+	}
+	return n
+}
+
+// TestDeviceDuplicate copies a saved device from the device editor's list
+// (a second copy takes the next free name), finds both in a new app on
+// the same storage, each with the original's parts, and checks that every
+// device message (save, copy, rename, delete) is drawn once, in the editor,
+// while the keep bar still answers its own Log result.
+func TestDeviceDuplicate(t *testing.T) {
+	mem := store.NewMemory()
+	k := on(mem)
+	k.WaitLoaded(5 * time.Second)
+	_, h, e := deviceApp(t, k, sheet.IDOnset)
+	n := len(e.parts)
+	once := func(step, want string) {
+		t.Helper()
+		if msg, _ := h.shown("Device save status"); msg != want {
+			t.Errorf("%s: editor says %q, want %q", step, msg, want)
+		}
+		if c := labelsSaying(h, want); c != 1 {
+			t.Errorf("%s: %q drawn %d times, want once", step, want, c)
+		}
+		if msg, ok := h.shown("Saved work status"); ok {
+			t.Errorf("%s: the keep bar also says %q", step, msg)
+		}
+	}
+	h.tap("Save device as…")
+	h.retype("Device name", e.name, rigName)
+	h.tap("Save device")
+	settle(h, k)
+	once("save", "Saved the device “"+rigName+"”.")
+
+	h.tap("Duplicate")
+	settle(h, k)
+	once("duplicate", "Copied the device “"+rigName+"” as “"+rigName+" copy”.")
+	h.mustDesc("Device " + rigName + " copy")
+	// The original stays listed and selected: a second Duplicate copies it
+	// again under the next free name.
+	if _, ok := h.byDesc("Device " + rigName); !ok {
+		t.Fatal("the original is no longer listed after the copy")
+	}
+	h.tap("Duplicate")
+	settle(h, k)
+	once("second duplicate", "Copied the device “"+rigName+"” as “"+rigName+" copy 2”.")
+
+	h.tap(rigName + " copy 2")
+	h.retype("Device name", rigName+" copy 2", "rig spare")
+	h.tap("Rename")
+	settle(h, k)
+	once("rename", "Renamed the device “"+rigName+" copy 2” to “rig spare”.")
+	h.tap("Delete")
+	settle(h, k)
+	once("delete", "Deleted the device “rig spare”.")
+	if c := labelsSaying(h, "Undo"); c != 1 {
+		t.Errorf("Undo drawn %d times after the delete, want once", c)
+	}
+
+	// The keep bar's own change still answers in the bar, and only there.
+	h.tap("Log result")
+	settle(h, k)
+	if msg, _ := h.shown("Saved work status"); !strings.HasPrefix(msg, "Logged this result") {
+		t.Errorf("keep bar after Log result: %q", msg)
+	}
+	if msg, ok := h.shown("Device save status"); ok && msg != "" {
+		t.Errorf("the device editor also says %q after Log result", msg)
+	}
+
+	// A new app on the same storage lists both, with the same document.
+	ds := storedDevices(t, mem)
+	byName := map[string]store.Device{}
+	for _, d := range ds {
+		byName[d.Name] = d
+	}
+	orig, ok1 := byName[rigName]
+	cp, ok2 := byName[rigName+" copy"]
+	if len(ds) != 2 || !ok1 || !ok2 {
+		t.Fatalf("stored devices %d, want %q and its copy", len(ds), rigName)
+	}
+	if compactJSON(t, orig.Device) != compactJSON(t, cp.Device) {
+		t.Errorf("the copy's document differs:\n%s\n%s", orig.Device, cp.Device)
+	}
+	k2 := on(mem)
+	k2.WaitLoaded(5 * time.Second)
+	_, h2, e2 := deviceApp(t, k2, sheet.IDOnset)
+	h2.click(h2.mustDesc("Remove part 2").Desc.Bounds)
+	h2.tap("Open a saved device…")
+	h2.mustDesc("Device " + rigName)
+	h2.tap(rigName + " copy")
+	h2.tap("Open")
+	h2.frames(2)
+	if len(e2.parts) != n || e2.name != rigName+" copy" {
+		t.Errorf("opened copy: %d parts named %q, want %d named %q", len(e2.parts), e2.name, n, rigName+" copy")
+	}
+}
+
+// compactJSON returns doc without its indentation.
+func compactJSON(t *testing.T, doc []byte) string {
+	t.Helper()
+	var b bytes.Buffer
+	if err := json.Compact(&b, doc); err != nil {
+		t.Fatal(err)
+	}
+	return b.String()
 }
