@@ -22,9 +22,9 @@ import (
 // the name typed (a name in use is replaced only when asked) and the
 // editor's device takes that name; a saved device can be opened into the
 // editor, renamed, copied under a free name, or deleted with undo; the
-// answers to these changes show here only, not in the keep bar. The browser keeps them as every
-// other platform does. A device that does not read is reported and the
-// editor keeps its own.
+// answers to these changes show here only, not again in the keep bar. The
+// browser keeps them as every other platform does. A device that does not
+// read is reported and the editor keeps its own.
 //
 // An earlier version kept one device per editor in a file (path); when
 // that file is there it is offered in the list, to be opened and saved
