@@ -270,7 +270,11 @@ func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 			s.path.SetText(pp.ImportPath())
 		}
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepEditor(env, gtx, &s.path, "Path of the file to import", "File to import")
+			hint := "Path of the file to import"
+			if h, ok := pp.(interface{ PathHint() string }); ok {
+				hint = h.PathHint()
+			}
+			return keepEditor(env, gtx, &s.path, hint, "File to import")
 		})
 	}
 	ws = append(ws,

@@ -44,11 +44,13 @@ func main() {
 // run is the window's event loop: one ui.App, laid out on every frame.
 func run(w *app.Window) error {
 	a := ui.NewApp(w.Invalidate)
-	keeper, porter := openStorage()
+	keeper, porter, listen := openStorage(w)
 	a.UseKeeper(keeper, porter)
 	var ops op.Ops
 	for {
-		switch e := w.Event().(type) {
+		ev := w.Event()
+		listen(ev)
+		switch e := ev.(type) {
 		case app.DestroyEvent:
 			closeStorage(keeper)
 			return e.Err

@@ -11,6 +11,8 @@ import (
 	"time"
 
 	"gioui.org/app"
+	"gioui.org/io/event"
+	"gioui.org/x/explorer"
 
 	"tubewright/ui"
 	"tubewright/ui/store"
@@ -20,17 +22,21 @@ import (
 // (Gio's app.DataDir plus "tubewright"), written atomically. The keeper
 // loads on its own goroutine; the window waits up to two seconds for it so
 // the first frame already shows the last inputs.
-func openStorage() (*ui.Keeper, ui.Porter) {
+//
+// Export and import go through the desktop's file dialog (dialogPorter);
+// listen must see every window event, for the dialog to know the window.
+func openStorage(w *app.Window) (k *ui.Keeper, p ui.Porter, listen func(event.Event)) {
 	base, err := app.DataDir()
 	dir := filepath.Join(base, "tubewright")
-	k := ui.NewKeeper(func() (store.Backend, error) {
+	k = ui.NewKeeper(func() (store.Backend, error) {
 		if err != nil {
 			return nil, fmt.Errorf("no data folder: %v", err)
 		}
 		return store.NewFiles(dir)
 	})
 	k.WaitLoaded(2 * time.Second)
-	return k, folderPorter{dir: dir}
+	ex := explorer.NewExplorer(w)
+	return k, dialogPorter{dialog: ex, folder: folderPorter{dir: dir}}, ex.ListenEvents
 }
 
 // closeStorage writes what is still pending before the app exits.
@@ -45,10 +51,8 @@ func closeStorage(k *ui.Keeper) {
 
 // folderPorter writes export files into the data folder's "exports"
 // folder and reads an import file from a path the user types (the data
-// folder's "import.json" at first). The desktop build has no file dialog:
-// the only version of Gio's extension module the module proxy serves,
-// gioui.org/x v0.2.0, was made for Gio v0.2.0, and its Linux dialog (the
-// desktop portal over D-Bus) could not be tried on our machines.
+// folder's "import.json" at first): what dialogPorter falls back to where
+// the desktop offers no file dialog.
 type folderPorter struct{ dir string }
 
 // Export implements ui.Porter.

@@ -7,6 +7,9 @@ import (
 	"fmt"
 	"syscall/js"
 
+	"gioui.org/app"
+	"gioui.org/io/event"
+
 	"tubewright/ui"
 	"tubewright/ui/store"
 )
@@ -15,7 +18,8 @@ import (
 // storage where IndexedDB is refused) and asks the browser to keep it. The
 // keeper opens it on its own goroutine: every call waits for the browser,
 // which must never happen while a frame is handled.
-func openStorage() (*ui.Keeper, ui.Porter) {
+// The window's events need no listener here (listen does nothing).
+func openStorage(*app.Window) (*ui.Keeper, ui.Porter, func(event.Event)) {
 	k := ui.NewKeeper(func() (store.Backend, error) { return store.NewBrowser() })
 	// A phone hides the page before it closes it: write the last inputs
 	// then, without waiting for the pause after typing. (Flush blocks, so
@@ -27,7 +31,7 @@ func openStorage() (*ui.Keeper, ui.Porter) {
 		return nil
 	})
 	js.Global().Get("document").Call("addEventListener", "visibilitychange", onHide)
-	return k, browserPorter{}
+	return k, browserPorter{}, func(event.Event) {}
 }
 
 // closeStorage does nothing in the browser: changes are written as they

@@ -47,7 +47,7 @@ func TestOpenStorage(t *testing.T) {
 	dir := t.TempDir()
 	t.Setenv("XDG_CONFIG_HOME", dir)
 	t.Setenv("HOME", dir)
-	k, _ := openStorage()
+	k, _, _ := openStorage(nil)
 	if !k.Loaded() {
 		t.Fatal("the files did not load before the first frame")
 	}
