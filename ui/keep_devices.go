@@ -54,13 +54,7 @@ func opRenameDevice(old, name string) func(s *store.Shelf) (keepStatus, error) {
 func opDuplicateDevice(name string) func(s *store.Shelf) (keepStatus, error) {
 	return func(s *store.Shelf) (keepStatus, error) {
 		lib := s.Library()
-		copyName := name + " copy"
-		for i := 2; ; i++ {
-			if _, used := lib.Device(copyName); !used {
-				break
-			}
-			copyName = fmt.Sprintf("%s copy %d", name, i)
-		}
+		copyName := freeCopyName(name, func(n string) bool { _, used := lib.Device(n); return used })
 		if err := s.DuplicateDevice(name, copyName); err != nil {
 			return keepStatus{}, err
 		}

@@ -48,18 +48,22 @@ func opRenameSetup(old, name string) func(s *store.Shelf) (keepStatus, error) {
 func opDuplicateSetup(name string) func(s *store.Shelf) (keepStatus, error) {
 	return func(s *store.Shelf) (keepStatus, error) {
 		lib := s.Library()
-		copyName := name + " copy"
-		for i := 2; ; i++ {
-			if _, used := lib.Setup(copyName); !used {
-				break
-			}
-			copyName = fmt.Sprintf("%s copy %d", name, i)
-		}
+		copyName := freeCopyName(name, func(n string) bool { _, used := lib.Setup(n); return used })
 		if err := s.DuplicateSetup(name, copyName); err != nil {
 			return keepStatus{}, err
 		}
 		return keepStatus{Text: fmt.Sprintf("Copied “%s” as “%s”.", name, copyName)}, nil
 	}
+}
+
+// freeCopyName is the first of "NAME copy", "NAME copy 2", ... that used
+// says is free.
+func freeCopyName(name string, used func(string) bool) string {
+	copyName := name + " copy"
+	for i := 2; used(copyName); i++ {
+		copyName = fmt.Sprintf("%s copy %d", name, i)
+	}
+	return copyName
 }
 
 // opDeleteSetup deletes a setup and offers to undo it.

@@ -219,32 +219,10 @@ func (c Conflicts) Empty() bool { return len(c.Setups) == 0 && len(c.Devices) ==
 // reported; log entries already present (same time, calculator and note)
 // are skipped. It returns how many items were added and the conflicts.
 func (l *Library) Merge(in *Library, replace bool) (added int, c Conflicts) {
-	for _, s := range in.Setups {
-		i := indexSetup(l.Setups, s.Name)
-		switch {
-		case i < 0:
-			l.Setups = append(l.Setups, s)
-			added++
-		case replace:
-			l.Setups[i] = s
-			added++
-		default:
-			c.Setups = append(c.Setups, s.Name)
-		}
-	}
-	for _, d := range in.Devices {
-		i := indexDevice(l.Devices, d.Name)
-		switch {
-		case i < 0:
-			l.Devices = append(l.Devices, d)
-			added++
-		case replace:
-			l.Devices[i] = d
-			added++
-		default:
-			c.Devices = append(c.Devices, d.Name)
-		}
-	}
+	n, names := mergeNamed(&l.Setups, in.Setups, func(s Setup) string { return s.Name }, replace)
+	added, c.Setups = added+n, names
+	n, names = mergeNamed(&l.Devices, in.Devices, func(d Device) string { return d.Name }, replace)
+	added, c.Devices = added+n, names
 	for _, e := range in.Log {
 		dup := false
 		for _, have := range l.Log {
@@ -261,20 +239,40 @@ func (l *Library) Merge(in *Library, replace bool) (added int, c Conflicts) {
 	return added, c
 }
 
-func indexSetup(list []Setup, name string) int {
-	for i, s := range list {
-		if s.Name == name {
+// mergeNamed adds the items of src to dst; an item whose name dst already
+// uses replaces it when replace is set and is otherwise left out and named
+// in conflicts.
+func mergeNamed[T any](dst *[]T, src []T, name func(T) string, replace bool) (added int, conflicts []string) {
+	for _, item := range src {
+		i := indexNamed(*dst, name(item), name)
+		switch {
+		case i < 0:
+			*dst = append(*dst, item)
+			added++
+		case replace:
+			(*dst)[i] = item
+			added++
+		default:
+			conflicts = append(conflicts, name(item))
+		}
+	}
+	return added, conflicts
+}
+
+// indexNamed returns the index of the item called name, or -1.
+func indexNamed[T any](list []T, name string, nameOf func(T) string) int {
+	for i, item := range list {
+		if nameOf(item) == name {
 			return i
 		}
 	}
 	return -1
 }
 
+func indexSetup(list []Setup, name string) int {
+	return indexNamed(list, name, func(s Setup) string { return s.Name })
+}
+
 func indexDevice(list []Device, name string) int {
-	for i, d := range list {
-		if d.Name == name {
-			return i
-		}
-	}
-	return -1
+	return indexNamed(list, name, func(d Device) string { return d.Name })
 }
