@@ -40,6 +40,7 @@ type App struct {
 	entries []widget.Clickable
 	list    widget.List
 	back    widget.Clickable
+	theme   themeToggle
 	welcome *Page
 }
 
@@ -138,11 +139,13 @@ func (a *App) enterTop() {
 }
 
 // update handles the app's own events: Back (the Android key, browser
-// history back, Escape on a keyboard, the Back button) and catalog taps.
+// history back, Escape on a keyboard, the Back button), the theme button
+// and catalog taps.
 func (a *App) update(gtx layout.Context) {
 	if a.back.Clicked(gtx) {
 		a.Back()
 	}
+	a.theme.update(gtx, a.env)
 	for i := range a.entries {
 		if a.entries[i].Clicked(gtx) {
 			a.openRoot(catalog[i].ID)
@@ -209,7 +212,8 @@ func (a *App) Layout(gtx layout.Context) layout.Dimensions {
 	)
 }
 
-// layoutBar draws the top bar: Back when a screen is open, and the title.
+// layoutBar draws the top bar: Back when a screen is open, the title and
+// the theme button.
 func (a *App) layoutBar(gtx layout.Context) layout.Dimensions {
 	th := a.env.Theme
 	title := "Tubewright"
@@ -250,6 +254,9 @@ func (a *App) layoutBar(gtx layout.Context) layout.Dimensions {
 				return l.Layout(gtx)
 			})
 		})
+	}))
+	children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		return a.theme.layout(gtx, a.env)
 	}))
 	layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)
 	return layout.Dimensions{Size: size}

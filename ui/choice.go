@@ -102,9 +102,11 @@ func (c *Choice) Layout(gtx layout.Context) layout.Dimensions {
 			return c.clicks[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 				semantic.RadioButton.Add(gtx.Ops)
 				semantic.SelectedOp(sel).Add(gtx.Ops)
-				bg, edge, fg := col.Surface, col.Divider, col.Text
+				// Selected: filled with the accent, so that it stands
+				// apart from the outlined others in glare.
+				bg, edge, fg := col.Surface, col.Outline, col.Text
 				if sel {
-					bg, edge, fg = col.Selected, col.Accent, col.Text
+					bg, edge, fg = col.Accent, col.Accent, col.OnAccent
 				}
 				bw := gtx.Dp(1)
 				if sel {

@@ -33,11 +33,14 @@ type Env struct {
 	book   *benchBook // the bench log of the safety screens; see bookFor
 	keep   *keepSide  // saved inputs, setups and the log; see keepFor
 	handed string     // a device document for the onset editor; see handDevice
+	dark   bool       // the dark palette shows; see SetDark
 
 }
 
-// NewEnv returns an Env with the app theme. invalidate may be nil (tests);
-// Open does nothing until an App owns the Env.
+// NewEnv returns an Env with the app theme: dark when the system asks for
+// a dark colour scheme (systemPrefersDark), else the bright bench theme.
+// invalidate may be nil (tests); Open does nothing until an App owns the
+// Env.
 func NewEnv(invalidate func()) *Env {
 	th, c := NewTheme()
 	e := &Env{Theme: th, Colors: c, Bench: new(Bench), open: func(sheet.ID) {}}
@@ -47,6 +50,9 @@ func NewEnv(invalidate func()) *Env {
 		if f := e.notify.Load(); f != nil {
 			(*f)()
 		}
+	}
+	if systemPrefersDark() {
+		e.SetDark(true)
 	}
 	return e
 }

@@ -258,7 +258,7 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 		}),
 		layout.Rigid(layout.Spacer{Height: 4}.Layout),
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			edge := c.Divider
+			edge := c.Outline
 			bw := gtx.Dp(1)
 			if gtx.Focused(&f.editor) {
 				edge, bw = c.Accent, gtx.Dp(2)

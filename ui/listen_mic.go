@@ -105,7 +105,7 @@ func (m *micView) Layout(gtx layout.Context) layout.Dimensions {
 			b := material.Button(m.env.Theme, &m.btn, label)
 			b.TextSize = unit.Sp(17)
 			if st == micRecording {
-				b.Background = rgb(0xb00020)
+				b.Background = m.env.Colors.Fail
 			}
 			return b.Layout(gtx)
 		}),
@@ -143,12 +143,12 @@ func (m *micView) meter(gtx layout.Context) layout.Dimensions {
 		lv = meterFloor
 	}
 	frac := math.Max(0, math.Min(1, (lv-meterFloor)/-meterFloor))
-	col := rgb(0x1b6e33)
+	col := m.env.Colors.Pass
 	switch {
 	case lv >= listen.NearFullScaleDB:
-		col = rgb(0xb00020)
+		col = m.env.Colors.Fail
 	case lv >= -6:
-		col = rgb(0x8a5300)
+		col = m.env.Colors.Check
 	}
 	words := fmt.Sprintf("%.0f dBFS peak · %.1f s", math.Max(lv, meterFloor), m.mic.Seconds())
 	if lv >= listen.NearFullScaleDB {

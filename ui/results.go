@@ -279,7 +279,7 @@ func (r *Results) layoutLongRow(gtx layout.Context, row resultRow) layout.Dimens
 // in white on red), readable in glare and by a screen reader; nothing for
 // a row that is not a check.
 func (r *Results) badge(gtx layout.Context, row resultRow) layout.Dimensions {
-	word, bg := outcomeLook(row.outcome)
+	word, bg := outcomeLook(r.env.Colors, row.outcome)
 	if word == "" {
 		return layout.Dimensions{}
 	}
@@ -287,7 +287,7 @@ func (r *Results) badge(gtx layout.Context, row resultRow) layout.Dimensions {
 		return background(gtx, bg, bg, gtx.Dp(4), 0, func(gtx layout.Context) layout.Dimensions {
 			return layout.Inset{Left: 6, Right: 6, Top: 2, Bottom: 2}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 				l := material.Label(r.env.Theme, unit.Sp(14), word)
-				l.Color = rgb(0xffffff)
+				l.Color = r.env.Colors.OnBadge
 				l.Font.Weight = 700
 				return l.Layout(gtx)
 			})
@@ -300,7 +300,7 @@ func (r *Results) badge(gtx layout.Context, row resultRow) layout.Dimensions {
 func (r *Results) String() string {
 	s := ""
 	for _, row := range r.rows {
-		if word, _ := outcomeLook(row.outcome); word != "" {
+		if word, _ := outcomeLook(r.env.Colors, row.outcome); word != "" {
 			s += fmt.Sprintf("%s: [%s] %s\n", row.label, word, row.value)
 		} else {
 			s += fmt.Sprintf("%s: %s\n", row.label, row.value)

@@ -50,15 +50,16 @@ func (r *Results) addGauge(label string, pa float64) {
 }
 
 // outcomeLook is how a check's outcome is drawn: the words on its badge and
-// the badge colour. A failure is red with "FAIL", never plain text.
-func outcomeLook(o sheet.Outcome) (word string, bg color.NRGBA) {
+// the badge colour from the palette c (words in c.OnBadge). A failure is
+// red with "FAIL", never plain text.
+func outcomeLook(c Colors, o sheet.Outcome) (word string, bg color.NRGBA) {
 	switch o {
 	case sheet.Pass:
-		return "PASS", rgb(0x1b6e33)
+		return "PASS", c.Pass
 	case sheet.Warn:
-		return "CHECK", rgb(0x8a5300)
+		return "CHECK", c.Check
 	case sheet.Fail:
-		return "FAIL", rgb(0xb00020)
+		return "FAIL", c.Fail
 	}
 	return "", color.NRGBA{}
 }

@@ -342,7 +342,7 @@ func (s *safetyScreen) textBox(gtx layout.Context, ed *widget.Editor, label, hin
 		}),
 		layout.Rigid(layout.Spacer{Height: 4}.Layout),
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			edge := c.Divider
+			edge := c.Outline
 			if gtx.Focused(ed) {
 				edge = c.Accent
 			}
@@ -407,7 +407,7 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 			state = "done"
 		}
 		o := s.outcomeOf(i)
-		if word, _ := outcomeLook(o); word != "" {
+		if word, _ := outcomeLook(s.env.Colors, o); word != "" {
 			state += ", checks " + word
 		}
 		label := fmt.Sprintf("%d. %s · %s", i+1, it.Title, state)

@@ -240,8 +240,8 @@ func (s *sheetStep) Verdict() layout.Widget {
 		if head == "" {
 			return layout.Dimensions{}
 		}
-		_, bg := outcomeLook(o)
-		white := rgb(0xffffff)
+		_, bg := outcomeLook(s.env.Colors, o)
+		white := s.env.Colors.OnBadge
 		gtx.Constraints.Min.X = gtx.Constraints.Max.X
 		return Described("Step verdict", func(gtx layout.Context) layout.Dimensions {
 			return background(gtx, bg, bg, gtx.Dp(8), 0, func(gtx layout.Context) layout.Dimensions {

@@ -38,21 +38,28 @@ var appFaces = sync.OnceValue(func() []font.FontFace {
 })
 
 // Colors is the app's palette beyond material.Palette: surfaces, muted
-// text, errors and the caution box.
+// text, errors, outlines, check badges and the caution box. The app has two
+// (brightColors, darkColors, in themes.go); Env.SetDark swaps them at run
+// time, so screens read Env.Colors every frame and never keep a copy.
 type Colors struct {
 	Background  color.NRGBA // window background
 	Surface     color.NRGBA // cards and the side list
 	Text        color.NRGBA // body text
 	Muted       color.NRGBA // hints, units, secondary text
-	Accent      color.NRGBA // buttons, selection, links
+	Accent      color.NRGBA // buttons, selection, links, the top bar
 	OnAccent    color.NRGBA // text on Accent
 	Divider     color.NRGBA // hairlines between rows
+	Outline     color.NRGBA // the border of a field or an unselected chip
 	Error       color.NRGBA // error text under a field
 	Warning     color.NRGBA // model warnings
 	CautionBg   color.NRGBA // caution box fill
 	CautionEdge color.NRGBA // caution box border and heading
 	CautionText color.NRGBA // caution box text
-	Selected    color.NRGBA // a selected chip or list entry
+	Selected    color.NRGBA // a selected list entry, selected text
+	Pass        color.NRGBA // a passed check's badge and band
+	Check       color.NRGBA // a check to look at again: badge and band
+	Fail        color.NRGBA // a failed check's badge and band
+	OnBadge     color.NRGBA // text and icons on Pass, Check and Fail
 }
 
 // rgb builds an opaque colour from 0xRRGGBB.
@@ -60,36 +67,27 @@ func rgb(c uint32) color.NRGBA {
 	return color.NRGBA{R: uint8(c >> 16), G: uint8(c >> 8), B: uint8(c), A: 0xff}
 }
 
-// NewTheme returns the app's material theme and the palette beyond it. Its
-// text shaper uses only the embedded faces (appFaces), never system fonts:
-// the browser build has none, and screenshots then do not depend on the
-// host's fonts.
+// NewTheme returns the app's material theme and the bright bench palette.
+// Its text shaper uses only the embedded faces (appFaces), never system
+// fonts: the browser build has none, and screenshots then do not depend on
+// the host's fonts.
 func NewTheme() (*material.Theme, Colors) {
 	th := material.NewTheme()
 	th.Shaper = text.NewShaper(text.NoSystemFonts(), text.WithCollection(appFaces()))
-	c := Colors{
-		Background:  rgb(0xf6f4ef),
-		Surface:     rgb(0xffffff),
-		Text:        rgb(0x1e2a32),
-		Muted:       rgb(0x5a6670),
-		Accent:      rgb(0x23636b),
-		OnAccent:    rgb(0xffffff),
-		Divider:     rgb(0xdcd8cf),
-		Error:       rgb(0xa3261f),
-		Warning:     rgb(0x8a5a00),
-		CautionBg:   rgb(0xfff3d1),
-		CautionEdge: rgb(0xb06d00),
-		CautionText: rgb(0x3d2a00),
-		Selected:    rgb(0xd6e8e9),
-	}
+	c := brightColors()
+	applyPalette(th, c)
+	th.TextSize = unit.Sp(16)
+	return th, c
+}
+
+// applyPalette sets the material palette of th from c.
+func applyPalette(th *material.Theme, c Colors) {
 	th.Palette = material.Palette{
 		Bg:         c.Background,
 		Fg:         c.Text,
 		ContrastBg: c.Accent,
 		ContrastFg: c.OnAccent,
 	}
-	th.TextSize = unit.Sp(16)
-	return th, c
 }
 
 // fill paints the rectangle from the origin to size with c.
