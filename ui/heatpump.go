@@ -49,12 +49,23 @@ func pumpTables(ctx context.Context, s *sheet.Sheet, texts map[string]string) (*
 }
 
 // showPlots draws Tm, |p1| and acoustic power along the device and the
-// span against drive frequency.
+// span against drive frequency, with the best drive frequency of the
+// result shown marked on it.
 func (s *heatPumpScreen) showPlots(t *deviceTables) {
 	s.plots[0].Set(lineXY(tableXY(t.profile, 0, 4, 1), "Position from the driver", "m", "Mean temperature Tm", "K", "Mean temperature along the device"))
 	s.plots[1].Set(lineXY(tableXY(t.profile, 0, 1, 1), "Position from the driver", "m", "|p1|", "Pa", "Pressure amplitude along the device"))
 	s.plots[2].Set(lineXY(tableXY(t.profile, 0, 5, 1), "Position from the driver", "m", "Acoustic power", "W", "Acoustic power along the device"))
-	s.plots[3].Set(lineXY(tableXY(t.sweep, 0, 2, 1), "Drive frequency", "Hz", "Span", "K", "Span against drive frequency"))
+	sp := lineXY(tableXY(t.sweep, 0, 2, 1), "Drive frequency", "Hz", "Span", "K", "Span against drive frequency")
+	if sp != nil {
+		if r := s.form.Result(); r != nil {
+			f, okF := r.Row("best_drive_frequency")
+			span, okS := r.Row("best_span")
+			if okF && okS {
+				sp.AddMark(f.Value, span.Value, 0, 0)
+			}
+		}
+	}
+	s.plots[3].Set(sp)
 }
 
 // Layout implements Screen.

@@ -85,14 +85,36 @@ func onsetTables(ctx context.Context, s *sheet.Sheet, texts map[string]string) (
 	return out, ctx.Err()
 }
 
-// showPlots draws the profiles and the onset against mean pressure.
+// showPlots draws the profiles and the onset against mean pressure, the
+// device's own pressure marked.
 func (s *onsetScreen) showPlots(t *deviceTables) {
 	setProfilePlots(s.plots[:4], t.profile)
 	pp := lineXY(tableXY(t.sweep, 0, 1, 1e-5), "Mean pressure", "bar", "Onset hot temperature", "K", "Onset against mean pressure")
 	if pp != nil {
 		pp.X.Log = true
+		s.markOwnPressure(pp)
 	}
 	s.plots[4].Set(pp)
+}
+
+// markOwnPressure marks on the onset-against-pressure chart c (pressure
+// in bar) the device's own mean pressure and the onset the result shown
+// found there, with its ± when it has one.
+func (s *onsetScreen) markOwnPressure(c *Chart) {
+	r := s.form.Result()
+	if r == nil {
+		return
+	}
+	hot, ok := r.Row("hot_temperature")
+	if !ok {
+		return
+	}
+	for _, d := range r.Derived {
+		if d.Key == "mean_pressure" && d.Value > 0 {
+			c.AddMark(d.Value*1e-5, hot.Value, 0, 0)
+			c.WithError(0, hot.PM)
+		}
+	}
 }
 
 // setProfilePlots draws |p1|, |U1|, Tm and acoustic power along x from a

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"image"
+	"math"
 	"os"
 	"strings"
 	"testing"
@@ -356,5 +357,35 @@ func TestDeviceScreenExampleChips(t *testing.T) {
 	h.frames(2)
 	if got, want := rowValue(s.form.Results, "Hot temperature at onset"), wantOnset(t, s.editor); got != want {
 		t.Errorf("engine again: %q, want %q", got, want)
+	}
+}
+
+// TestOnsetScreenOwnPressureMark: the onset-against-pressure plot marks
+// the device's own mean pressure (in bar, as the axis) at the onset the
+// result shows; the sweep passes through that pressure, where it solves
+// the same onset from its own start, so the mark lies on the line (within
+// 0.1 %, the solver's convergence from two starts).
+func TestOnsetScreenOwnPressureMark(t *testing.T) {
+	env := NewEnv(nil)
+	s := newOnsetScreen(env).(*onsetScreen)
+	h := newHarness(t, image.Pt(412, 915), s.Layout)
+	waitSolved(t, h, s.job.Running, s.job.Has)
+	c := s.plots[4].Chart()
+	if c == nil || len(c.Lines) != 1 || len(c.Marks) != 1 {
+		t.Fatalf("onset plot %+v: want one line and one mark", c)
+	}
+	hot, _ := s.form.Result().Row("hot_temperature")
+	m := c.Marks[0]
+	if pm := s.dev.MeanPressure * 1e-5; m.X != pm || m.Y != hot.Value {
+		t.Errorf("mark (%g bar, %g K), want (%g bar, %g K)", m.X, m.Y, pm, hot.Value)
+	}
+	on := false
+	for _, p := range c.Lines[0] {
+		if math.Abs(p.X-m.X) <= 1e-9*m.X && math.Abs(p.Y-m.Y) <= 1e-3*m.Y {
+			on = true
+		}
+	}
+	if !on {
+		t.Errorf("mark (%g bar, %g K) is not on the swept line %v", m.X, m.Y, c.Lines[0])
 	}
 }

@@ -27,7 +27,8 @@ var heatPumpSheet = &Sheet{
 		profileInput(),
 	},
 	About: "Rott's linear wave equations (Swift 2002, ch. 4) with the total power through the stack held at minus the load (Swift 2002, ch. 7); " +
-		"zero load is the largest span. The cold side is taken as insulated. " + deviceFileHelp +
+		"zero load is the largest span. The cold side is taken as insulated. " +
+		fmt.Sprintf("The best drive frequency is the largest span, at the same driver amplitude and load, of %d frequencies within ±%g %% of the driver's own, refined by Brent's method on the slope of the span. ", bestPoints, 100*bestReach) + deviceFileHelp +
 		` For a heat pump the first part is a "driver" with "pressure_amplitude" or "volume_velocity_amplitude" and "frequency"; the stack has one neighbour at "ambient" and the parts on the other side at "cold".`,
 	Examples: []string{
 		"twcalc heatpump --example heatpump --json",
@@ -104,6 +105,15 @@ func runHeatPump(v *Values) (*Result, error) {
 			added.Note = "= " + c
 		}
 	}
+	centre := res.Frequency
+	if f := d.Driver().Frequency; f > 0 {
+		centre = f
+	}
+	best, err := bestDrive(d, centre, quiet)
+	if err != nil {
+		return nil, blameDevice(v, err)
+	}
+	addBest(r, best, centre)
 	iterationsRow(r, res.Iterations)
 	shortStackRows(r, res.ShortStack, true)
 	if load.Value == 0 {

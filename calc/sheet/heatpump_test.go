@@ -1,12 +1,15 @@
 package sheet
 
 import (
+	"math"
 	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
 
 	"tubewright/calc/linear"
+	"tubewright/calc/resonator"
+	"tubewright/calc/units"
 )
 
 // TestHeatPumpSheetThermodynamics: the example pump through the
@@ -101,5 +104,69 @@ func TestHeatPumpSheetBadInput(t *testing.T) {
 		if len(fes) == 0 || fes[0].Key != c.key || !strings.Contains(err.Error(), c.words) {
 			t.Errorf("%s: error %v, want one about %s saying %q", c.name, err, c.key, c.words)
 		}
+	}
+}
+
+// TestHeatPumpSheetBestDrive: the best drive frequency of the example pump
+// (zero load).
+//
+// Against the same solver, brute force: calc/linear's span on a dense grid
+// every 0.05 Hz over 405 to 420 Hz (the coarse search's bracket around the
+// peak). The refined frequency must lie within one grid step of the grid's
+// best, and its span must be no lower than the grid's best less 1 mK (the
+// refinement finds the top of the same smooth curve).
+//
+// Outside check: the half-wave resonance c/(2L) of the bare closed-closed
+// tube of the pump's total length, in air at the ambient temperature
+// (calc/resonator's TubeFrequency, checked there against Kinsler et al.,
+// "Fundamentals of Acoustics", 4th ed. 2000, sec. 10.2). With the driver's
+// pressure amplitude held, the stack close to the driver sits nearest a
+// pressure antinode, with the largest ratio of pressure to velocity, when
+// the whole tube is a half-wave standing wave, so the span peaks near that
+// resonance. The stack's porosity and the colder gas of the cold side
+// shift the peak by a few percent; the tolerance is 3 % (the example is at
+// about 1 %).
+func TestHeatPumpSheetBestDrive(t *testing.T) {
+	t.Parallel()
+	r := devEval(t, heatPumpSheet, map[string]string{"example": "heatpump"})
+	fBest, sBest := devRow(t, r, "best_drive_frequency").Value, devRow(t, r, "best_span").Value
+	if !strings.Contains(devRow(t, r, "best_drive_frequency").Note, "Brent") {
+		t.Errorf("best drive frequency not refined: note %q, warnings %q", devRow(t, r, "best_drive_frequency").Note, r.Warnings)
+	}
+	d, err := linear.Example("heatpump")
+	if err != nil {
+		t.Fatal(err)
+	}
+	const step = 0.05
+	gridF, gridS := 0.0, math.Inf(-1)
+	for _, p := range linear.SpanVsFrequency(d, linear.Grid(405, 420, 301, false), nil) {
+		if p.Err != nil {
+			t.Fatalf("%g Hz: %v", p.Frequency, p.Err)
+		}
+		if p.Result.TemperatureSpan > gridS {
+			gridF, gridS = p.Frequency, p.Result.TemperatureSpan
+		}
+	}
+	if math.Abs(fBest-gridF) > step || sBest < gridS-1e-3 {
+		t.Errorf("best %.3f Hz, %.4f K; dense grid %.3f Hz, %.4f K (want within %g Hz, span no lower by 1 mK)", fBest, sBest, gridF, gridS, step)
+	}
+	length := 0.0
+	for _, p := range d.Parts {
+		length += p.Length
+	}
+	g, err := d.Gas.Properties(units.Temperature(d.AmbientTemperature), units.Pressure(d.MeanPressure), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	res, err := resonator.TubeFrequency(resonator.Tube{Ends: resonator.ClosedClosed, Mode: 1, Length: length, Radius: d.Parts[1].Diameter / 2}, g)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !scalar.EqualWithinRel(fBest, res.Frequency, 0.03) {
+		t.Errorf("best %.1f Hz, bare tube's half-wave resonance %.1f Hz (L = %.3f m): want within 3 %%", fBest, res.Frequency, length)
+	}
+	// The best span is at least the span at the driver's own frequency.
+	if span := devRow(t, r, "temperature_span").Value; sBest < span {
+		t.Errorf("best span %.3f K below the span %.3f K at the driver's frequency", sBest, span)
 	}
 }
