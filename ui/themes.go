@@ -6,14 +6,16 @@ package ui
 // one at least 3:1. The colours are our own choice.
 
 // brightColors is the bench theme: a near-white page with dark text and
-// outlines strong enough to read in sunlight and under workshop lamps.
+// outlines strong enough to read in sunlight and under workshop lamps. The
+// accent, the selected shade and the badges are the colours the browser
+// tests (assets/web/browsertest) look for on screen: change them together.
 func brightColors() Colors {
 	return Colors{
 		Background:  rgb(0xf7f6f2),
 		Surface:     rgb(0xffffff),
 		Text:        rgb(0x111a20),
 		Muted:       rgb(0x4a5560),
-		Accent:      rgb(0x1d5960),
+		Accent:      rgb(0x23636b),
 		OnAccent:    rgb(0xffffff),
 		Divider:     rgb(0xc9c4b8),
 		Outline:     rgb(0x6b7479),
@@ -22,7 +24,7 @@ func brightColors() Colors {
 		CautionBg:   rgb(0xfff3d1),
 		CautionEdge: rgb(0x9a5f00),
 		CautionText: rgb(0x3d2a00),
-		Selected:    rgb(0xcfe4e6),
+		Selected:    rgb(0xd6e8e9),
 		Pass:        rgb(0x1b6e33),
 		Check:       rgb(0x8a5300),
 		Fail:        rgb(0xb00020),
