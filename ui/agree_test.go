@@ -137,27 +137,7 @@ func runApp(t *testing.T, s *sheet.Sheet, c agreeCase) *Form {
 		if !ok {
 			continue
 		}
-		switch in.Kind {
-		case sheet.Gas:
-			if err := f.Gas(in.Key).SetText(text); err != nil {
-				f.SetText(in.Key, text)
-			}
-			f.Invalidate()
-		case sheet.Pick:
-			words := text
-			for _, ch := range in.Choices {
-				if strings.EqualFold(ch.Key, text) {
-					words = ch.Words
-				}
-			}
-			h.tap(words)
-		case sheet.Switch:
-			if f.Text(in.Key) != text {
-				h.tap(in.Label)
-			}
-		default:
-			h.retype(in.Label, f.Field(in.Key).Text(), text)
-		}
+		typeInput(h, f, &in, text)
 		h.frames(2)
 	}
 	h.frames(2)
@@ -171,6 +151,34 @@ func tempDirOutsideTest() (string, error) {
 	dir, err := os.MkdirTemp("", "twcalc-agree-")
 	twcalcDir = dir
 	return dir, err
+}
+
+// typeInput gives input in the text as a person would: typed into its field
+// through the router, a chip or the switch tapped; a gas is set on its
+// picker (the picker's own tests cover its chips).
+func typeInput(h *harness, f *Form, in *sheet.Input, text string) {
+	h.t.Helper()
+	switch in.Kind {
+	case sheet.Gas:
+		if err := f.Gas(in.Key).SetText(text); err != nil {
+			f.SetText(in.Key, text)
+		}
+		f.Invalidate()
+	case sheet.Pick:
+		words := text
+		for _, ch := range in.Choices {
+			if strings.EqualFold(ch.Key, text) {
+				words = ch.Words
+			}
+		}
+		h.tap(words)
+	case sheet.Switch:
+		if f.Text(in.Key) != text {
+			h.tap(in.Label)
+		}
+	default:
+		h.retype(in.Label, f.Field(in.Key).Text(), text)
+	}
 }
 
 // TestAppAndTerminalAgree runs every calculator's cases through both front

@@ -2,7 +2,6 @@ package ui
 
 import (
 	"image"
-	"strings"
 	"testing"
 
 	"tubewright/calc/sheet"
@@ -66,23 +65,7 @@ func runSafetyApp(t *testing.T, s *sheet.Sheet, c agreeCase) *Form {
 		}
 		scr.goTo(step)
 		h.frames(2)
-		switch in.Kind {
-		case sheet.Gas:
-			if err := f.Gas(in.Key).SetText(text); err != nil {
-				f.SetText(in.Key, text)
-			}
-			f.Invalidate()
-		case sheet.Pick:
-			words := text
-			for _, ch := range in.Choices {
-				if strings.EqualFold(ch.Key, text) {
-					words = ch.Words
-				}
-			}
-			h.tap(words)
-		default:
-			h.retype(in.Label, f.Field(in.Key).Text(), text)
-		}
+		typeInput(h, f, &in, text)
 		h.frames(2)
 	}
 	h.frames(2)
