@@ -10,6 +10,7 @@
 // calculator, the setups panel, the Saved work buttons) and reads the
 // stored documents from IndexedDB, as the app keeps them.
 "use strict";
+const { column } = require("./pixels.js");
 const fs = require("fs");
 const path = require("path");
 
@@ -21,23 +22,6 @@ const SURFACE = [0xff, 0xff, 0xff];
 const ACCENT = [0x23, 0x63, 0x6b];
 const SELECTED = [0xd6, 0xe8, 0xe9];
 
-// column returns the colours of the page's pixels at x, top to bottom.
-async function column(page, x) {
-  const png = (await page.screenshot()).toString("base64");
-  return page.evaluate(async ({ png, x }) => {
-    const img = new Image();
-    img.src = "data:image/png;base64," + png;
-    await img.decode();
-    const c = document.createElement("canvas");
-    c.width = img.width; c.height = img.height;
-    const g = c.getContext("2d");
-    g.drawImage(img, 0, 0);
-    const d = g.getImageData(x, 0, 1, img.height).data;
-    const out = [];
-    for (let i = 0; i < d.length; i += 4) out.push([d[i], d[i + 1], d[i + 2]]);
-    return out;
-  }, { png, x });
-}
 
 const near = (a, b) => a.every((v, i) => Math.abs(v - b[i]) <= 3);
 

@@ -14,6 +14,7 @@
 // the catalog line, {"x":..,"y":..}) and finds the Record button and the
 // level meter by their colours.
 "use strict";
+const { column } = require("./pixels.js");
 const fs = require("fs");
 const http = require("http");
 const os = require("os");
@@ -45,23 +46,6 @@ function toneWAV(file) {
   fs.writeFileSync(file, b);
 }
 
-// column returns the colours of the page's pixels at x, top to bottom.
-async function column(page, x) {
-  const png = (await page.screenshot()).toString("base64");
-  return page.evaluate(async ({ png, x }) => {
-    const img = new Image();
-    img.src = "data:image/png;base64," + png;
-    await img.decode();
-    const c = document.createElement("canvas");
-    c.width = img.width; c.height = img.height;
-    const g = c.getContext("2d");
-    g.drawImage(img, 0, 0);
-    const d = g.getImageData(x, 0, 1, img.height).data;
-    const out = [];
-    for (let y = 0; y < img.height; y++) out.push([d[4 * y], d[4 * y + 1], d[4 * y + 2]]);
-    return out;
-  }, { png, x });
-}
 
 function near(p, c) { return Math.abs(p[0] - c[0]) < 4 && Math.abs(p[1] - c[1]) < 4 && Math.abs(p[2] - c[2]) < 4; }
 
