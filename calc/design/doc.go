@@ -32,4 +32,16 @@
 // favours ever shorter stacks; the shortest stack is set by the gas
 // displacement at a working amplitude (Settings.DriveRatio), a choice of
 // this package stated in the rules.
+//
+// How designs are checked: designed engines are solved again by an
+// independent scipy implementation of Rott's equations
+// (testdata/design_onset.py); the written file is read back and solved
+// by linear.Onset; property tests (a hotter heater never gives a worse
+// margin, the frequency follows the target across gases, lengths ×2 with
+// frequency and pressure ÷2 give the same onset) and the literature's
+// band for the stack gap (from memory) stand beside them. Not yet done:
+// a comparison with a published standing-wave engine. Of the papers,
+// theses and textbooks on prime-mover onset found so far only the
+// openings could be read, and those give either the geometry or the
+// onset temperature, never both, so no such check is claimed here.
 package design
