@@ -65,21 +65,6 @@ type PartFile struct {
 	Frequency               string     `json:"frequency,omitempty"`
 }
 
-// PoresFile describes the pores of a stack or exchanger.
-type PoresFile struct {
-	Shape         string `json:"shape"`
-	HalfGap       string `json:"half_gap,omitempty"`       // plates
-	Thickness     string `json:"thickness,omitempty"`      // plates (optional)
-	Radius        string `json:"radius,omitempty"`         // circular
-	HalfWidth     string `json:"half_width,omitempty"`     // rectangular
-	HalfHeight    string `json:"half_height,omitempty"`    // rectangular
-	PinRadius     string `json:"pin_radius,omitempty"`     // pins
-	Pitch         string `json:"pitch,omitempty"`          // pins
-	Mesh          string `json:"mesh,omitempty"`           // screens, per length
-	WireDiameter  string `json:"wire_diameter,omitempty"`  // screens
-	FibreDiameter string `json:"fibre_diameter,omitempty"` // fibres
-}
-
 // TempRef says where a part's mean temperature comes from.
 type TempRef int
 
@@ -409,7 +394,7 @@ func (pf *PartFile) validatePorous(i int, p *Part) error {
 		return pf.fieldError(i, "porosity", fmt.Sprintf("= %s must be in (0, 1]", pf.Porosity))
 	}
 	if pf.Pores == nil {
-		return pf.fieldError(i, "pores", fmt.Sprintf("is missing (e.g. {\"shape\": \"plates\", \"half_gap\": \"0.3 mm\"}; shapes: %s)", strings.Join(PoreShapes, ", ")))
+		return pf.fieldError(i, "pores", fmt.Sprintf("is missing (e.g. {\"shape\": \"plates\", \"gap\": \"0.6 mm\"}; shapes: %s)", strings.Join(PoreShapes, ", ")))
 	}
 	if p.Pores, err = pf.Pores.validate(i, pf.Kind); err != nil {
 		return err
@@ -454,69 +439,6 @@ func (pf *PartFile) checkUnused(i int, used map[string]bool) error {
 		return pf.fieldError(i, "pores", fmt.Sprintf("does not apply to a %s", pf.Kind))
 	}
 	return nil
-}
-
-func (pf *PoresFile) validate(i int, kind string) (Pores, error) {
-	ps := Pores{Shape: pf.Shape}
-	fe := func(field, msg string) error {
-		return &FieldError{Part: i, Kind: kind, Field: "pores." + field, Msg: msg}
-	}
-	var err error
-	get := func(dst *float64, text string, field string, dim units.Dimension, lo, hi float64) {
-		if err != nil {
-			return
-		}
-		*dst, err = positive(text, dim, "pores."+field, i, kind, lo, hi)
-	}
-	used := map[string]bool{}
-	use := func(f ...string) {
-		for _, s := range f {
-			used[s] = true
-		}
-	}
-	switch pf.Shape {
-	case "plates":
-		use("half_gap", "thickness")
-		get(&ps.HalfGap, pf.HalfGap, "half_gap", units.DimLength, 1e-7, 0.1)
-		if pf.Thickness != "" {
-			get(&ps.Thickness, pf.Thickness, "thickness", units.DimLength, 1e-7, 0.1)
-		}
-	case "circular":
-		use("radius")
-		get(&ps.Radius, pf.Radius, "radius", units.DimLength, 1e-7, 0.1)
-	case "rectangular":
-		use("half_width", "half_height")
-		get(&ps.HalfWidth, pf.HalfWidth, "half_width", units.DimLength, 1e-7, 0.1)
-		get(&ps.HalfHeight, pf.HalfHeight, "half_height", units.DimLength, 1e-7, 0.1)
-	case "pins":
-		use("pin_radius", "pitch")
-		get(&ps.PinRadius, pf.PinRadius, "pin_radius", units.DimLength, 1e-7, 0.1)
-		get(&ps.Pitch, pf.Pitch, "pitch", units.DimLength, 1e-7, 0.1)
-	case "screens":
-		use("mesh", "wire_diameter")
-		get(&ps.Mesh, pf.Mesh, "mesh", units.DimPerLength, 1, 1e6)
-		get(&ps.WireDiameter, pf.WireDiameter, "wire_diameter", units.DimLength, 1e-7, 0.01)
-	case "fibres":
-		use("fibre_diameter")
-		get(&ps.FibreDiameter, pf.FibreDiameter, "fibre_diameter", units.DimLength, 1e-7, 0.01)
-	case "":
-		return ps, fe("shape", fmt.Sprintf("is missing; use one of %s", strings.Join(PoreShapes, ", ")))
-	default:
-		return ps, fe("shape", fmt.Sprintf("= %q is not a pore shape; use one of %s", pf.Shape, strings.Join(PoreShapes, ", ")))
-	}
-	if err != nil {
-		return ps, err
-	}
-	for _, kv := range []struct{ key, val string }{
-		{"half_gap", pf.HalfGap}, {"thickness", pf.Thickness}, {"radius", pf.Radius},
-		{"half_width", pf.HalfWidth}, {"half_height", pf.HalfHeight}, {"pin_radius", pf.PinRadius},
-		{"pitch", pf.Pitch}, {"mesh", pf.Mesh}, {"wire_diameter", pf.WireDiameter}, {"fibre_diameter", pf.FibreDiameter},
-	} {
-		if kv.val != "" && !used[kv.key] {
-			return ps, fe(kv.key, fmt.Sprintf("does not apply to %s pores", pf.Shape))
-		}
-	}
-	return ps, nil
 }
 
 // quantity parses text of dimension dim for a field; a missing or

@@ -51,12 +51,19 @@ func checkPorosity(i int, kind string, porosity float64, p Pores) error {
 	var from string
 	switch p.Shape {
 	case "plates":
-		from = fmt.Sprintf("the plates (half gap %s, thickness %s) give %.3f: y0/(y0 + l) with y0 the half gap and l half the plate thickness", mmText(p.HalfGap), mmText(p.Thickness), geo)
+		from = fmt.Sprintf("the plates (%s, thickness %s) give %.3f: y0/(y0 + l) with y0 the half gap and l half the plate thickness", GapWords(p.HalfGap), mmText(p.Thickness), geo)
 	default:
-		from = fmt.Sprintf("the pins (radius %s, pitch %s) give %.3f", mmText(p.PinRadius), mmText(p.Pitch), geo)
+		from = fmt.Sprintf("the pins (diameter %s, pitch %s) give %.3f", mmText(2*p.PinRadius), mmText(p.Pitch), geo)
 	}
 	return &FieldError{Part: i, Kind: kind, Field: "porosity", Msg: fmt.Sprintf(
 		"= %.3g contradicts the pore geometry: %s; write \"%.3f\" or correct the pores", porosity, from, geo)}
+}
+
+// GapWords shows the gap between plates and its half together, the way
+// every screen and message names them: "gap 2y0 = 0.6 mm (half gap y0 =
+// 0.3 mm)"; y0 is the half gap in m.
+func GapWords(y0 float64) string {
+	return "gap 2y0 = " + mmText(2*y0) + " (half gap y0 = " + mmText(y0) + ")"
 }
 
 // mmText formats a length in millimetres.

@@ -38,7 +38,7 @@ const (
 // deviceFileHelp describes the device file (what Save device writes too);
 // the About of both device sheets includes it, for the terminal help and
 // the screen.
-const deviceFileHelp = `The device file is JSON: "gas", "mean_pressure", "ambient_temperature" and an ordered list of "parts" from the start (closed) end, each with a "kind": closed-end, driver, tube, exchanger, stack, cavity, open-end; quantities are text with units, e.g. {"kind": "tube", "length": "1 m", "diameter": "5 cm", "temperature": "ambient"}. A stack or exchanger has "porosity" and "pores" ({"shape": "plates", "half_gap": "0.3 mm"}); an exchanger's "temperature" is "ambient", "hot", "cold" or a value.`
+const deviceFileHelp = `The device file is JSON: "gas", "mean_pressure", "ambient_temperature" and an ordered list of "parts" from the start (closed) end, each with a "kind": closed-end, driver, tube, exchanger, stack, cavity, open-end; quantities are text with units, e.g. {"kind": "tube", "length": "1 m", "diameter": "5 cm", "temperature": "ambient"}. A stack or exchanger has "porosity" and "pores" ({"shape": "plates", "gap": "0.6 mm"}; round pores and pins take "diameter" and "pin_diameter"; older files' "half_gap", "radius" and "pin_radius" are still read); an exchanger's "temperature" is "ambient", "hot", "cold" or a value.`
 
 // deviceInput is the device: a file path or the device document.
 func deviceInput() Input {
