@@ -37,6 +37,7 @@ type deviceEditor struct {
 	changed  bool
 	strip    *deviceStrip
 	saved    deviceFile
+	undo     *editorUndo // the Remove or Open that Undo takes back, or nil
 }
 
 // kindLabels are the part kinds as people read them, in linear.Kinds order.
@@ -136,6 +137,7 @@ func (e *deviceEditor) document() string {
 // Update handles the editor's events and reports whether the device changed.
 func (e *deviceEditor) Update(gtx layout.Context) bool {
 	e.saved.update(gtx, e)
+	e.updateUndo(gtx)
 	if e.gas.Update(gtx) {
 		e.changed = true
 	}
@@ -166,13 +168,7 @@ func (e *deviceEditor) Update(gtx layout.Context) bool {
 				e.selected = i
 			}
 		case p.remove.Clicked(gtx):
-			e.parts = append(e.parts[:i], e.parts[i+1:]...)
-			if e.selected == i {
-				e.selected = -1
-			} else if e.selected > i {
-				e.selected--
-			}
-			e.changed = true
+			e.removePart(i)
 			i--
 			continue
 		}
@@ -182,6 +178,7 @@ func (e *deviceEditor) Update(gtx layout.Context) bool {
 	}
 	ch := e.changed
 	e.changed = false
+	e.settleUndo(ch)
 	return ch
 }
 
@@ -237,10 +234,10 @@ func defaultPart(kind, diameter string) linear.PartFile {
 		p.Length, p.Diameter, p.Temperature = "0.5 m", diameter, "ambient"
 	case linear.KindStack:
 		p.Length, p.Diameter, p.Porosity = "50 mm", diameter, "0.7"
-		p.Pores = &linear.PoresFile{Shape: "plates", HalfGap: "0.3 mm", Thickness: "0.2 mm"}
+		p.Pores = &linear.PoresFile{Shape: "plates", Gap: "0.6 mm", Thickness: "0.2 mm"}
 	case linear.KindExchanger:
 		p.Length, p.Diameter, p.Porosity, p.Temperature = "8 mm", diameter, "0.6", "ambient"
-		p.Pores = &linear.PoresFile{Shape: "plates", HalfGap: "0.5 mm", Thickness: "0.5 mm"}
+		p.Pores = &linear.PoresFile{Shape: "plates", Gap: "1 mm", Thickness: "0.5 mm"}
 	case linear.KindCavity:
 		p.Volume, p.Temperature = "0.5 L", "ambient"
 	case linear.KindDriver:
@@ -267,11 +264,20 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 		},
 		Heading(e.env, "Parts, from the start end"),
 	)
+	removedAt := -1
+	if e.undo != nil && e.undo.part != nil {
+		removedAt = min(e.undo.at, len(e.parts))
+	}
 	for i := range e.parts {
-		i := i
+		if i == removedAt {
+			ws = append(ws, e.removedBar)
+		}
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 			return e.parts[i].layout(gtx, i, e.selected == i)
 		})
+	}
+	if removedAt == len(e.parts) {
+		ws = append(ws, e.removedBar)
 	}
 	ws = append(ws,
 		e.addKind.Layout,
@@ -318,7 +324,7 @@ func summary(p linear.PartFile) string {
 		s = append(s, p.Volume)
 	}
 	if p.Pores != nil {
-		s = append(s, p.Pores.Shape)
+		s = append(s, poresWords(p.Pores))
 	}
 	if p.Temperature != "" {
 		s = append(s, "at "+p.Temperature)
@@ -374,9 +380,8 @@ func (e *deviceEditor) mark(err error) {
 		f = e.ambient
 	case fe.Part >= 0 && fe.Part < len(e.parts):
 		p := e.parts[fe.Part]
-		key := strings.TrimPrefix(fe.Field, "pores.")
 		for _, pf := range p.fields {
-			if pf.key == key {
+			if pf.key == fe.Field || (pf.size != nil && pf.size.halfKey == fe.Field) {
 				f = pf.f
 			}
 		}

@@ -12,14 +12,17 @@ import (
 	"tubewright/calc/units"
 )
 
-// partField is one quantity field of a part, with the JSON key it fills.
-// shape is set for pore fields (shown only for that pore shape); amp for
-// the driver's two amplitudes (shown only for the chosen one).
+// partField is one quantity field of a part, with the JSON key it fills
+// ("pores.gap" for a pore field). shape is set for pore fields (shown only
+// for that pore shape); amp for the driver's two amplitudes (shown only
+// for the chosen one); size for a size that may be typed whole or as its
+// half (a diameter or a radius, a gap or a half gap).
 type partField struct {
 	key   string
 	f     *Field
 	shape string
 	amp   string
+	size  *sizeAs
 }
 
 // partEditor holds the widgets of one part.
@@ -45,7 +48,7 @@ var (
 	flangeLabels    = []string{"Unflanged (bare tube end)", "Flanged (end in a wall)"} // as on the Tube resonance screen
 	ampKeys         = []string{"pressure", "flow"}
 	ampLabels       = []string{"Pressure amplitude", "Volume-velocity amplitude"}
-	poreShapeLabels = []string{"Plates", "Circular", "Rectangular", "Pins", "Screens", "Fibres"}
+	poreShapeLabels = []string{"Plates", "Round pores", "Rectangular", "Pins", "Screens", "Fibres"}
 )
 
 func newPartEditor(env *Env, p linear.PartFile) *partEditor {
@@ -55,48 +58,26 @@ func newPartEditor(env *Env, p linear.PartFile) *partEditor {
 		e.fields = append(e.fields, partField{key: key, f: f})
 		return f
 	}
+	// duct adds the diameter of a duct or driver, typed as a diameter or
+	// a radius.
+	duct := func(diameter, radius string) {
+		f := add("diameter", diameter, units.DimLength, p.Diameter)
+		e.fields[len(e.fields)-1].size = roundSize(env, diameter, radius, "")
+		e.fields[len(e.fields)-1].size.relabel(f)
+	}
 	switch p.Kind {
 	case linear.KindTube:
 		add("length", "Length", units.DimLength, p.Length)
-		add("diameter", "Inside diameter", units.DimLength, p.Diameter)
+		duct("Inside diameter", "Inside radius")
 	case linear.KindStack, linear.KindExchanger:
 		add("length", "Length", units.DimLength, p.Length)
-		add("diameter", "Diameter of the holder", units.DimLength, p.Diameter)
+		duct("Inside diameter of the holder", "Inside radius of the holder")
 		add("porosity", "Porosity (open fraction)", units.DimNone, p.Porosity)
-		pores := p.Pores
-		if pores == nil {
-			pores = &linear.PoresFile{Shape: "plates"}
-		}
-		e.shape = NewChoice(env, "Pores", linear.PoreShapes, poreShapeLabels)
-		e.shape.Select(pores.Shape)
-		// Pore sizes are fractions of a millimetre: the generic length
-		// hint ("250 mm") would mislead; the mesh count has its own.
-		const small = "e.g. 0.25 mm, 250 um, 0.01 in"
-		const mesh = "wires per inch or per mm: 200 /in, 8 /mm"
-		for _, pf := range []struct {
-			shape, key, label string
-			dim               units.Dimension
-			text, hint        string
-		}{
-			{"plates", "half_gap", "Half gap y0", units.DimLength, pores.HalfGap, small},
-			{"plates", "thickness", "Plate thickness (optional)", units.DimLength, pores.Thickness, small},
-			{"circular", "radius", "Pore radius", units.DimLength, pores.Radius, small},
-			{"rectangular", "half_width", "Half width", units.DimLength, pores.HalfWidth, small},
-			{"rectangular", "half_height", "Half height", units.DimLength, pores.HalfHeight, small},
-			{"pins", "pin_radius", "Pin radius", units.DimLength, pores.PinRadius, small},
-			{"pins", "pitch", "Pin pitch", units.DimLength, pores.Pitch, small},
-			{"screens", "mesh", "Mesh count", units.DimPerLength, pores.Mesh, mesh},
-			{"screens", "wire_diameter", "Wire diameter", units.DimLength, pores.WireDiameter, small},
-			{"fibres", "fibre_diameter", "Fibre diameter", units.DimLength, pores.FibreDiameter, small},
-		} {
-			f := NewField(env, pf.label, pf.dim, pf.text)
-			f.Hint = pf.hint
-			e.fields = append(e.fields, partField{key: pf.key, f: f, shape: pf.shape})
-		}
+		e.addPores(p.Pores)
 	case linear.KindCavity:
 		add("volume", "Volume", units.DimVolume, p.Volume)
 	case linear.KindDriver:
-		add("diameter", "Piston diameter (drawing only)", units.DimLength, p.Diameter)
+		duct("Piston diameter (drawing only)", "Piston radius (drawing only)")
 		e.amp = NewChoice(env, "Drive given as", ampKeys, ampLabels)
 		pa := NewField(env, "Pressure amplitude at the driver", units.DimPressure, p.PressureAmplitude)
 		ua := NewField(env, "Volume-velocity amplitude", units.DimVolumeFlow, p.VolumeVelocityAmplitude)
@@ -128,10 +109,15 @@ func newPartEditor(env *Env, p linear.PartFile) *partEditor {
 	return e
 }
 
-// text returns the text of the field with JSON key key, or "".
+// text returns the whole size or the text of the field with JSON key
+// key, or "".
 func (e *partEditor) text(key string) string {
 	for _, pf := range e.fields {
 		if pf.key == key {
+			if pf.size != nil {
+				_, t := pf.size.whole(key, pf.f)
+				return t
+			}
 			return strings.TrimSpace(pf.f.Text())
 		}
 	}
@@ -159,43 +145,11 @@ func (e *partEditor) file() linear.PartFile {
 		if !e.visible(pf) {
 			continue
 		}
-		t := strings.TrimSpace(pf.f.Text())
-		switch pf.key {
-		case "length":
-			p.Length = t
-		case "diameter":
-			p.Diameter = t
-		case "porosity":
-			p.Porosity = t
-		case "volume":
-			p.Volume = t
-		case "pressure_amplitude":
-			p.PressureAmplitude = t
-		case "volume_velocity_amplitude":
-			p.VolumeVelocityAmplitude = t
-		case "frequency":
-			p.Frequency = t
-		case "half_gap":
-			p.Pores.HalfGap = t
-		case "thickness":
-			p.Pores.Thickness = t
-		case "radius":
-			p.Pores.Radius = t
-		case "half_width":
-			p.Pores.HalfWidth = t
-		case "half_height":
-			p.Pores.HalfHeight = t
-		case "pin_radius":
-			p.Pores.PinRadius = t
-		case "pitch":
-			p.Pores.Pitch = t
-		case "mesh":
-			p.Pores.Mesh = t
-		case "wire_diameter":
-			p.Pores.WireDiameter = t
-		case "fibre_diameter":
-			p.Pores.FibreDiameter = t
+		key, t := pf.key, strings.TrimSpace(pf.f.Text())
+		if pf.size != nil {
+			key, t = pf.size.whole(key, pf.f)
 		}
+		setPartText(&p, key, t)
 	}
 	if e.temp != nil {
 		p.Temperature = e.temp.Selected()
@@ -214,6 +168,9 @@ func (e *partEditor) file() linear.PartFile {
 func (e *partEditor) update(gtx layout.Context) bool {
 	changed := false
 	for _, pf := range e.fields {
+		if pf.size != nil && pf.size.update(gtx, pf.f) {
+			changed = true
+		}
 		if pf.f.Update(gtx) {
 			changed = true
 		}
@@ -297,7 +254,7 @@ func (e *partEditor) widgets() []layout.Widget {
 		if pf.shape != "" || !e.visible(pf) {
 			continue
 		}
-		ws = append(ws, pf.f.Layout)
+		ws = append(ws, pf.widget(e.env))
 	}
 	if e.temp != nil {
 		ws = append(ws, e.temp.Layout)
@@ -309,7 +266,7 @@ func (e *partEditor) widgets() []layout.Widget {
 		ws = append(ws, e.shape.Layout)
 		for _, pf := range e.fields {
 			if pf.shape != "" && e.visible(pf) {
-				ws = append(ws, pf.f.Layout)
+				ws = append(ws, pf.widget(e.env))
 			}
 		}
 	}

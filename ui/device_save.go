@@ -66,12 +66,14 @@ func (f *deviceFile) keeper(e *deviceEditor) *Keeper { return keepFor(e.env).kee
 // do queues a change of the library and shows its outcome when it arrives.
 func (f *deviceFile) do(e *deviceEditor, what string, run func(s *store.Shelf) (keepStatus, error)) {
 	f.local = ""
+	e.undo = nil
 	f.since = f.keeper(e).Status().Seq
 	doClaimed(f.keeper(e), f, what, run)
 }
 
 func (f *deviceFile) say(e *deviceEditor, text string, bad bool) {
 	f.local, f.localBad = text, bad
+	e.undo = nil
 	f.since = f.keeper(e).Status().Seq
 	f.statusLive = false
 }
@@ -80,6 +82,7 @@ func (f *deviceFile) say(e *deviceEditor, text string, bad bool) {
 // under, selected, so that typing replaces it.
 func (f *deviceFile) show(e *deviceEditor) {
 	f.shown, f.selected, f.local = true, "", ""
+	e.undo = nil
 	f.name.SingleLine, f.name.Submit = true, true
 	f.name.SetText(e.name)
 	f.name.SetCaret(f.name.Len(), 0)
@@ -135,11 +138,11 @@ func (f *deviceFile) update(gtx layout.Context, e *deviceEditor) {
 		}
 	}
 	if f.fromOld.Clicked(gtx) {
-		if err := f.read(e); err != nil {
+		if file, err := f.read(); err != nil {
 			f.say(e, capitalize(err.Error()), true)
 		} else {
 			f.shown = false
-			f.say(e, "Opened the device an earlier version kept in "+f.path+". Save it under a name to keep it here.", false)
+			e.open(file, "Opened the device an earlier version kept in "+f.path+". Save it under a name to keep it here.")
 		}
 	}
 	name := strings.TrimSpace(f.name.Text())
@@ -210,30 +213,28 @@ func (f *deviceFile) openStored(e *deviceEditor, d store.Device) {
 		f.say(e, capitalize(err.Error()), true)
 		return
 	}
-	e.set(file)
 	f.shown = false
-	f.say(e, "Opened the device “"+d.Name+"”.", false)
+	e.open(file, "Opened the device “"+d.Name+"”.")
 }
 
-// read loads the earlier version's file into the editor, unless it is
-// missing or damaged (then the file and the editor are left as they are).
-func (f *deviceFile) read(e *deviceEditor) error {
+// read reads the earlier version's file for the editor, unless it is
+// missing or damaged (then the file is left as it is).
+func (f *deviceFile) read() (*linear.DeviceFile, error) {
 	data, err := os.ReadFile(f.path)
 	if errors.Is(err, os.ErrNotExist) {
-		return errors.New("there is no device file at " + f.path + " any more")
+		return nil, errors.New("there is no device file at " + f.path + " any more")
 	}
 	if err != nil {
-		return err
+		return nil, err
 	}
 	if _, err := linear.ParseDevice(bytes.NewReader(data)); err != nil {
-		return errors.New("the device file at " + f.path + " is damaged and was left as it is: " + err.Error())
+		return nil, errors.New("the device file at " + f.path + " is damaged and was left as it is: " + err.Error())
 	}
 	var file linear.DeviceFile
 	if err := jsonDecode(data, &file); err != nil {
-		return errors.New("the device file at " + f.path + " is damaged and was left as it is: " + err.Error())
+		return nil, errors.New("the device file at " + f.path + " is damaged and was left as it is: " + err.Error())
 	}
-	e.set(&file)
-	return nil
+	return &file, nil
 }
 
 // widgets returns the editor's device name, the Save as and Open buttons,
@@ -311,11 +312,15 @@ func (f *deviceFile) panel(env *Env, e *deviceEditor) []layout.Widget {
 // its follow-up button (Replace it, Undo).
 func (f *deviceFile) layoutStatus(gtx layout.Context, env *Env) layout.Dimensions {
 	text, bad, action := f.local, f.localBad, ""
+	click := &f.action
+	if u := f.editor.openUndo(text); u != nil {
+		action, click = "Undo", &u.button
+	}
 	if text == "" && f.statusLive {
 		text, bad = f.status.Text, f.status.Bad
 		if f.status.Then != nil {
 			action = f.status.Action
 		}
 	}
-	return keepStatusLine(gtx, env, "Device save status", text, bad, action, &f.action)
+	return keepStatusLine(gtx, env, "Device save status", text, bad, action, click)
 }

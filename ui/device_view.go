@@ -81,7 +81,7 @@ func (v *deviceView) takeDevice() {
 func (v *deviceView) update(gtx layout.Context) bool {
 	if ex := v.form.Pick(keyExample); ex.Update(gtx) {
 		if name := ex.Selected(); name != noExample {
-			if err := v.editor.load(name); err != nil {
+			if err := v.editor.openExample(name); err != nil {
 				panic("ui: built-in example " + name + ": " + err.Error())
 			}
 		}

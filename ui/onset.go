@@ -41,7 +41,7 @@ func (s *onsetScreen) Enter() {
 	if err := jsonDecode([]byte(doc), &f); err != nil {
 		panic("ui: handed device does not read: " + err.Error())
 	}
-	s.editor.set(&f)
+	s.editor.open(&f, "Opened the designed device.")
 }
 
 // onsetTables is the plots' run: the profile of the result shown, then the
