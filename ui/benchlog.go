@@ -237,10 +237,12 @@ func (s *benchLogScreen) row(i int) layout.Widget {
 			}
 			gtx.Constraints.Min.X = gtx.Constraints.Max.X
 			return background(gtx, bg, s.env.Colors.Divider, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-				return layout.Inset{Left: 14, Right: 14, Top: 10, Bottom: 10}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-					l := material.Body1(s.env.Theme, label)
-					l.Color = s.env.Colors.Text
-					return l.Layout(gtx)
+				return targetRow(gtx, func(gtx layout.Context) layout.Dimensions {
+					return layout.Inset{Left: 14, Right: 14, Top: 10, Bottom: 10}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						l := material.Body1(s.env.Theme, label)
+						l.Color = s.env.Colors.Text
+						return l.Layout(gtx)
+					})
 				})
 			})
 		})

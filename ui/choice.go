@@ -113,8 +113,9 @@ func (c *Choice) Layout(gtx layout.Context) layout.Dimensions {
 					bw = gtx.Dp(2)
 				}
 				return background(gtx, bg, edge, gtx.Dp(16), bw, func(gtx layout.Context) layout.Dimensions {
-					// At least 40 dp tall for fingers, the text centred.
-					gtx.Constraints.Min.Y = gtx.Dp(40)
+					// At least minTarget both ways for gloved fingers,
+					// the text centred.
+					gtx = atTarget(gtx)
 					return layout.Center.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 						return layout.Inset{Left: 14, Right: 14, Top: 6, Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 							l := material.Body2(th, c.labels[i])

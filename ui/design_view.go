@@ -63,7 +63,7 @@ func (s *designScreen) outcome() (top, details []layout.Widget) {
 		top = append(top, Note(s.env, "Build it in the Heat pump editor part by part from the sizes below, driver first."))
 	} else {
 		top = append(top, func(gtx layout.Context) layout.Dimensions {
-			return material.Button(s.env.Theme, &s.open, "Open in Engine onset").Layout(gtx)
+			return material.Button(s.env.Theme, &s.open, "Open in Engine onset").Layout(atTarget(gtx))
 		})
 	}
 	top = append(top, s.form.CautionWidget)

@@ -283,7 +283,7 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 		e.addKind.Layout,
 		func(gtx layout.Context) layout.Dimensions {
 			b := material.Button(th, &e.add, "Add part")
-			return b.Layout(gtx)
+			return b.Layout(atTarget(gtx))
 		},
 		Heading(e.env, "Gas and fill"),
 		e.gas.Layout, e.pressure.Layout, e.ambient.Layout,
@@ -296,12 +296,13 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 const stripLegend = "To scale, start end on the left. Hatched: stack. Exchangers red when hot, blue at ambient, " +
 	"pale blue when cold, violet at a set temperature; tubes tinted the same way. Dark bars: closed ends; a wedge: the driver."
 
-// smallButton draws a compact button.
+// smallButton draws a button with small text, still at least minTarget
+// square for gloved fingers.
 func smallButton(env *Env, gtx layout.Context, c *widget.Clickable, label string) layout.Dimensions {
 	b := material.Button(env.Theme, c, label)
 	b.TextSize = unit.Sp(14)
 	b.Inset = layout.Inset{Top: 6, Bottom: 6, Left: 10, Right: 10}
-	return b.Layout(gtx)
+	return b.Layout(atTarget(gtx))
 }
 
 // jsonDecode reads a device file's JSON, refusing unknown fields.

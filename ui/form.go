@@ -6,7 +6,6 @@ import (
 
 	"gioui.org/layout"
 	"gioui.org/widget"
-	"gioui.org/widget/material"
 
 	"tubewright/calc/sheet"
 	"tubewright/calc/units"
@@ -316,10 +315,7 @@ func (it *formItem) widget(env *Env) layout.Widget {
 		return it.pick.Layout
 	case it.on != nil:
 		return func(gtx layout.Context) layout.Dimensions {
-			cb := material.CheckBox(env.Theme, it.on, it.in.Label)
-			cb.Color = env.Colors.Text
-			cb.IconColor = env.Colors.Accent
-			return cb.Layout(gtx)
+			return tick(env, gtx, it.on, it.in.Label)
 		}
 	default:
 		return it.field.Layout

@@ -379,7 +379,7 @@ func (s *listenScreen) sendButton(gtx layout.Context) layout.Dimensions {
 	}
 	b := material.Button(s.env.Theme, &s.send, "Use "+units.FormatPM(hz, pm, units.DimFrequency)+" in What the pitch says")
 	b.TextSize = unit.Sp(16)
-	return b.Layout(gtx)
+	return b.Layout(atTarget(gtx))
 }
 
 // csvButton copies the track table as CSV, as twcalc listen --track

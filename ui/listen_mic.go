@@ -107,7 +107,7 @@ func (m *micView) Layout(gtx layout.Context) layout.Dimensions {
 			if st == micRecording {
 				b.Background = m.env.Colors.Fail
 			}
-			return b.Layout(gtx)
+			return b.Layout(atTarget(gtx))
 		}),
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			if st != micRecording {

@@ -28,7 +28,7 @@ func (w *Plot) headerWidgets() {
 				b.Color = w.env.Colors.Text
 				b.TextSize = unit.Sp(14)
 				b.Inset = layout.Inset{Top: 10, Bottom: 10, Left: 12, Right: 12}
-				return b.Layout(gtx)
+				return b.Layout(atTarget(gtx))
 			})
 		}
 	}

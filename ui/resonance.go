@@ -132,7 +132,7 @@ func (s *resonanceScreen) carryWidget(gtx layout.Context) layout.Dimensions {
 	}
 	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return material.Button(s.env.Theme, &s.carry, "Use this frequency on other screens").Layout(gtx)
+			return material.Button(s.env.Theme, &s.carry, "Use this frequency on other screens").Layout(atTarget(gtx))
 		}),
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			if s.carried == "" {

@@ -311,10 +311,7 @@ func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
 	}
 	ws = append(ws,
 		func(gtx layout.Context) layout.Dimensions {
-			cb := material.CheckBox(s.env.Theme, &s.ticks[i], "Done: "+it.Title)
-			cb.Color = s.env.Colors.Text
-			cb.IconColor = s.env.Colors.Accent
-			return cb.Layout(gtx)
+			return tick(s.env, gtx, &s.ticks[i], "Done: "+it.Title)
 		},
 		s.noteEditor(i),
 	)
@@ -346,11 +343,16 @@ func (s *safetyScreen) textBox(gtx layout.Context, ed *widget.Editor, label, hin
 			if gtx.Focused(ed) {
 				edge = c.Accent
 			}
-			return background(gtx, c.Surface, edge, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-				return layout.UniformInset(12).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-					e := material.Editor(th, ed, hint)
-					e.Color, e.HintColor = c.Text, c.Muted
-					return Described(label, e.Layout)(gtx)
+			return editorBox(s.env, gtx, ed, label, func(gtx layout.Context) layout.Dimensions {
+				return background(gtx, c.Surface, edge, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
+					gtx.Constraints.Min.Y = gtx.Dp(minTarget)
+					return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						return layout.UniformInset(12).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+							e := material.Editor(th, ed, hint)
+							e.Color, e.HintColor = c.Text, c.Muted
+							return e.Layout(gtx)
+						})
+					})
 				})
 			})
 		}),
@@ -414,7 +416,7 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 			return s.jumps[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 				gtx.Constraints.Min.X = gtx.Constraints.Max.X
-				return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+				return targetRow(gtx, func(gtx layout.Context) layout.Dimensions {
 					l := material.Body1(s.env.Theme, label)
 					l.Color = s.env.Colors.Text
 					if !s.pass.Done[i] || o == sheet.Fail {
@@ -460,13 +462,7 @@ func (s *safetyScreen) button(gtx layout.Context, c *widget.Clickable, label str
 // safetyButton draws a filled (primary) or outlined button of the safety
 // screens.
 func safetyButton(env *Env, gtx layout.Context, c *widget.Clickable, label string, primary bool) layout.Dimensions {
-	b := material.Button(env.Theme, c, label)
-	b.TextSize = unit.Sp(16)
-	if !primary {
-		b.Background = env.Colors.Selected
-		b.Color = env.Colors.Text
-	}
-	return b.Layout(gtx)
+	return button(env, gtx, c, label, primary)
 }
 
 // gridMinCell is the narrowest column of the inputs grid.

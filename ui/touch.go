@@ -1,0 +1,94 @@
+package ui
+
+import (
+	"gioui.org/io/event"
+	"gioui.org/io/key"
+	"gioui.org/io/pointer"
+	"gioui.org/io/semantic"
+	"gioui.org/layout"
+	"gioui.org/op"
+	"gioui.org/op/clip"
+	"gioui.org/unit"
+	"gioui.org/widget"
+	"gioui.org/widget/material"
+)
+
+// minTarget is the smallest side of anything a finger taps: 48 dp, the
+// touch-target size of Material Design's accessibility guidance, above
+// WCAG 2.2's 44 CSS px (2.5.5, Target Size). People at the bench wear
+// gloves; TestTouchTargets holds every control of every screen to it.
+const minTarget = unit.Dp(48)
+
+// atTarget returns gtx with its minimum raised to minTarget both ways
+// (never above the maximum), for a control's layout.
+func atTarget(gtx layout.Context) layout.Context {
+	m := gtx.Dp(minTarget)
+	gtx.Constraints.Min.X = min(max(gtx.Constraints.Min.X, m), gtx.Constraints.Max.X)
+	gtx.Constraints.Min.Y = min(max(gtx.Constraints.Min.Y, m), gtx.Constraints.Max.Y)
+	return gtx
+}
+
+// button draws a material button at least minTarget square: filled with
+// the accent when primary, else on the selected shade with body text.
+func button(env *Env, gtx layout.Context, c *widget.Clickable, label string, primary bool) layout.Dimensions {
+	b := material.Button(env.Theme, c, label)
+	if !primary {
+		b.Background = env.Colors.Selected
+		b.Color = env.Colors.Text
+	}
+	return b.Layout(atTarget(gtx))
+}
+
+// boxTag is the pointer tag of an editor's box (see editorBox).
+type boxTag struct{ ed *widget.Editor }
+
+// editorBox lays out w (a box drawn around the editor ed, with padding)
+// and makes the whole box a target: a press anywhere in it, the padding
+// included, focuses ed. desc, when not "", describes the box for tests and
+// screen readers (a field's label). While ed has the focus, Escape leaves
+// it (and hides a phone's keyboard) instead of leaving the screen.
+func editorBox(env *Env, gtx layout.Context, ed *widget.Editor, desc string, w layout.Widget) layout.Dimensions {
+	tag := boxTag{ed}
+	for {
+		ev, ok := gtx.Event(pointer.Filter{Target: tag, Kinds: pointer.Press})
+		if !ok {
+			break
+		}
+		if e, ok := ev.(pointer.Event); ok && e.Kind == pointer.Press && gtx.Enabled() {
+			gtx.Execute(key.FocusCmd{Tag: ed})
+		}
+	}
+	if gtx.Focused(ed) {
+		// Escape in the next frame leaves the box, not the screen
+		// (App.update).
+		env.typing = true
+	}
+	m := op.Record(gtx.Ops)
+	dims := w(gtx)
+	call := m.Stop()
+	defer clip.Rect{Max: dims.Size}.Push(gtx.Ops).Pop()
+	if desc != "" {
+		semantic.DescriptionOp(desc).Add(gtx.Ops)
+	}
+	pointer.CursorText.Add(gtx.Ops)
+	event.Op(gtx.Ops, tag)
+	call.Add(gtx.Ops)
+	return dims
+}
+
+// targetRow makes a row (a tick with its words, a list entry) at least
+// minTarget tall with w centred vertically in it.
+func targetRow(gtx layout.Context, w layout.Widget) layout.Dimensions {
+	gtx.Constraints.Min.Y = min(max(gtx.Constraints.Min.Y, gtx.Dp(minTarget)), gtx.Constraints.Max.Y)
+	return layout.W.Layout(gtx, w)
+}
+
+// tick draws a check box with its words as one row the full width and at
+// least minTarget tall, so that a tap anywhere along it toggles b.
+func tick(env *Env, gtx layout.Context, b *widget.Bool, label string) layout.Dimensions {
+	cb := material.CheckBox(env.Theme, b, label)
+	cb.Color = env.Colors.Text
+	cb.IconColor = env.Colors.Accent
+	gtx.Constraints.Min.X = gtx.Constraints.Max.X
+	return cb.Layout(atTarget(gtx))
+}
