@@ -140,8 +140,12 @@ func (a *App) enterTop() {
 
 // update handles the app's own events: Back (the Android key, browser
 // history back, Escape on a keyboard, the Back button), the theme button
-// and catalog taps.
+// and catalog taps. Escape while a text box had the focus in the last
+// frame leaves the box, not the screen (see editorBox); the next Escape
+// goes back.
 func (a *App) update(gtx layout.Context) {
+	typing := a.env.typing
+	a.env.typing = false
 	if a.back.Clicked(gtx) {
 		a.Back()
 	}
@@ -161,7 +165,13 @@ func (a *App) update(gtx layout.Context) {
 			if !ok {
 				break
 			}
-			if ke, ok := ev.(key.Event); ok && ke.State == key.Press {
+			ke, ok := ev.(key.Event)
+			switch {
+			case !ok || ke.State != key.Press:
+			case ke.Name == key.NameEscape && typing:
+				gtx.Execute(key.FocusCmd{})
+				a.env.Invalidate()
+			default:
 				a.Back()
 			}
 		}

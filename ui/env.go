@@ -34,6 +34,7 @@ type Env struct {
 	keep   *keepSide  // saved inputs, setups and the log; see keepFor
 	handed string     // a device document for the onset editor; see handDevice
 	dark   bool       // the dark palette shows; see SetDark
+	typing bool       // a text box has the focus; see editorBox
 
 }
 

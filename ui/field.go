@@ -6,10 +6,8 @@ import (
 	"strings"
 
 	"gioui.org/io/key"
-	"gioui.org/io/semantic"
 	"gioui.org/layout"
 	"gioui.org/op"
-	"gioui.org/op/clip"
 	"gioui.org/unit"
 	"gioui.org/widget"
 	"gioui.org/widget/material"
@@ -64,11 +62,7 @@ func NewField(env *Env, label string, dim units.Dimension, text string) *Field {
 	f := &Field{Label: label, Dim: dim, env: env}
 	f.editor.SingleLine = true
 	f.editor.Submit = true
-	// Units need letters, so not key.HintNumeric. HintURL keeps a full
-	// keyboard with autocorrect, capitals and spell checking off (Gio
-	// turns them on for HintText); the page shell (assets/web/index.html)
-	// turns the browser's URL keyboard and suggestions back to plain text.
-	f.editor.InputHint = key.HintURL
+	f.editor.InputHint = f.inputHint()
 	f.SetText(text)
 	return f
 }
@@ -246,6 +240,7 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 	}
 	th := f.env.Theme
 	c := f.env.Colors
+	f.editor.InputHint = f.inputHint()
 	gtx.Constraints.Max.X = min(gtx.Constraints.Max.X, gtx.Dp(fieldWidth))
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
 	errText := f.ErrorText()
@@ -266,22 +261,23 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 			if errText != "" {
 				edge = c.Error
 			}
-			return background(gtx, c.Surface, edge, gtx.Dp(6), bw, func(gtx layout.Context) layout.Dimensions {
-				return layout.Inset{Left: 12, Right: 12, Top: 10, Bottom: 10}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-					m := op.Record(gtx.Ops)
-					e := material.Editor(th, &f.editor, f.hint())
-					e.Color = c.Text
-					e.HintColor = c.Muted
-					e.SelectionColor = c.Selected
-					dims := e.Layout(gtx)
-					call := m.Stop()
-					// A clip node carrying the label lets tests and
-					// screen readers find the editor by the field's name.
-					st := clip.Rect{Max: dims.Size}.Push(gtx.Ops)
-					semantic.DescriptionOp(f.Label).Add(gtx.Ops)
-					call.Add(gtx.Ops)
-					st.Pop()
-					return dims
+			// The box carries the label, so that tests and screen
+			// readers find the field by its name, and a tap anywhere in
+			// it focuses the editor; with its padding it is at least
+			// minTarget tall.
+			return editorBox(f.env, gtx, &f.editor, f.Label, func(gtx layout.Context) layout.Dimensions {
+				return background(gtx, c.Surface, edge, gtx.Dp(6), bw, func(gtx layout.Context) layout.Dimensions {
+					in := layout.Inset{Left: 12, Right: 12, Top: 14, Bottom: 14}
+					gtx.Constraints.Min.Y = gtx.Dp(minTarget)
+					return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						return in.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+							e := material.Editor(th, &f.editor, f.hint())
+							e.Color = c.Text
+							e.HintColor = c.Muted
+							e.SelectionColor = c.Selected
+							return e.Layout(gtx)
+						})
+					})
 				})
 			})
 		}),
@@ -310,15 +306,37 @@ func (f *Field) reading() string {
 	return f.hint()
 }
 
-// hint returns the accepted-units hint.
+// inputHint is the keyboard a phone shows for the field. A count or a
+// plain number without ± gets the number pad (key.HintNumeric: digits, a
+// decimal point and a sign); everything else takes units and ±, so it
+// needs letters, and gets key.HintURL: a full keyboard with autocorrect,
+// capitals and spell checking off (Gio turns them on for HintText). The
+// page shell (assets/web/index.html) turns the browser's URL keyboard and
+// suggestions back to plain text.
+func (f *Field) inputHint() key.InputHint {
+	if f.In != nil && !f.In.PM && (f.In.Kind == sheet.Count || f.In.Kind == sheet.Number) {
+		return key.HintNumeric
+	}
+	return key.HintURL
+}
+
+// pmHint is what a hint says about typing ± on a keyboard without it.
+const pmHint = "± or +- for an uncertainty"
+
+// hint returns the accepted-units hint; a field that takes ± says that
+// "+-" types it.
 func (f *Field) hint() string {
-	if f.Hint != "" {
-		return f.Hint
+	h := f.Hint
+	if h == "" {
+		h = dimHints[f.Dim]
 	}
-	if h, ok := dimHints[f.Dim]; ok {
-		return h
+	if h == "" {
+		h = "value in " + units.SIUnit(f.Dim)
 	}
-	return "value in " + units.SIUnit(f.Dim)
+	if f.In != nil && f.In.PM && !strings.Contains(h, "+-") {
+		h += "; " + pmHint
+	}
+	return h
 }
 
 // dimHints are the default "what you can type" lines per dimension.
@@ -328,7 +346,7 @@ var dimHints = map[units.Dimension]string{
 	units.DimTemperatureDifference: "e.g. 40 K, 40 degC, 72 degF",
 	units.DimPressure:              "absolute: 10 bar, 145 psi, 1 MPa; gauge: 9 barg, 130 psig",
 	units.DimStress:                "e.g. 120 MPa, 17 ksi, 120 N/mm²",
-	units.DimFrequency:             "e.g. 440 Hz, 1.2 kHz, 440 Hz ± 5 Hz",
+	units.DimFrequency:             "e.g. 440 Hz, 1.2 kHz, 440 Hz ± 5 Hz (type +- for ±)",
 	units.DimVolume:                "e.g. 2 L, 2000 cm³, 0.002 m³",
 	units.DimNone:                  "a number, or a percentage such as 30 %",
 }

@@ -412,7 +412,7 @@ func keepButton(env *Env, gtx layout.Context, c *widget.Clickable, label string,
 // and screen readers.
 func keepEditor(env *Env, gtx layout.Context, ed *widget.Editor, hint, desc string) layout.Dimensions {
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
-	return Described(desc, func(gtx layout.Context) layout.Dimensions {
+	return editorBox(env, gtx, ed, desc, func(gtx layout.Context) layout.Dimensions {
 		return background(gtx, env.Colors.Background, env.Colors.Muted, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
 			gtx.Constraints.Min.X = gtx.Constraints.Max.X
 			gtx.Constraints.Min.Y = gtx.Dp(48) - 2*gtx.Dp(13)
@@ -424,7 +424,7 @@ func keepEditor(env *Env, gtx layout.Context, ed *widget.Editor, hint, desc stri
 				return e.Layout(gtx)
 			})
 		})
-	})(gtx)
+	})
 }
 
 // keepMessage is a line of status text, red when bad.
