@@ -47,6 +47,10 @@ type Keeper struct {
 	loadErr  error
 	inputErr error // why the last inputs could not be read or written
 	version  uint64
+
+	settings      keptSettings // the app settings (the chosen theme)
+	settingsDirty bool         // settings changed since the last write
+	settingsErr   error        // why the settings could not be read or written
 }
 
 // keepOp is a change of the library run on the worker.
@@ -215,7 +219,8 @@ func (k *Keeper) Damaged() *store.DamagedLibrary {
 }
 
 // Problems returns what went wrong opening or loading the storage and
-// reading or writing the last inputs (nil when nothing did).
+// reading or writing the last inputs or the app settings (nil when
+// nothing did).
 func (k *Keeper) Problems() []error {
 	k.mu.Lock()
 	defer k.mu.Unlock()
@@ -225,6 +230,9 @@ func (k *Keeper) Problems() []error {
 	}
 	if k.inputErr != nil {
 		out = append(out, k.inputErr)
+	}
+	if k.settingsErr != nil {
+		out = append(out, k.settingsErr)
 	}
 	return out
 }
@@ -273,6 +281,7 @@ func (k *Keeper) step() bool {
 	for _, op := range ops {
 		k.apply(op)
 	}
+	k.writeSettings()
 	switch {
 	case dirty && (len(flushes) > 0 || !time.Now().Before(due)):
 		k.writeInputs()
@@ -306,10 +315,16 @@ func (k *Keeper) load() {
 	}
 	shelf, err := store.OpenShelf(b)
 	inputs, inErr := loadInputs(b)
+	settings, setErr := loadSettings(b)
 	k.mu.Lock()
 	defer k.mu.Unlock()
 	k.backend = b
 	k.inputErr = inErr
+	k.settingsErr = setErr
+	if !k.settingsDirty {
+		// A theme chosen before the load wins; it is written next.
+		k.settings = settings
+	}
 	for id, t := range inputs {
 		k.inputs[id] = t
 	}
