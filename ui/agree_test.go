@@ -71,6 +71,7 @@ func twcalcExe(t *testing.T) string {
 // terminalOut is what twcalc --json printed, decoded.
 type terminalOut struct {
 	Results  map[string]json.RawMessage `json:"results"`
+	Details  map[string]json.RawMessage `json:"details"`
 	Warnings []string                   `json:"warnings"`
 	Cautions []string                   `json:"cautions"`
 	Verdicts []sheet.Verdict            `json:"verdicts"`
@@ -239,6 +240,7 @@ func checkAgreement(t *testing.T, f *Form, errKey string, term *terminalOut, std
 		t.Fatalf("app gave no result: %v", f.Err())
 	}
 	compareRows(t, res, term)
+	compareDetails(t, res, term)
 	if !equalStrings(res.Warnings, term.Warnings) {
 		t.Errorf("warnings differ:\napp:      %q\nterminal: %q", res.Warnings, term.Warnings)
 	}
@@ -298,6 +300,29 @@ func compareRows(t *testing.T, res *sheet.Result, term *terminalOut) {
 			if err != nil || !jsonEqual(raw, want) {
 				t.Errorf("result %s: app %s, terminal %s", row.Key, want, raw)
 			}
+		}
+	}
+}
+
+// compareDetails checks that the solve's diagnostics the app keeps in its
+// Details section are the terminal's "details", and nothing more.
+func compareDetails(t *testing.T, res *sheet.Result, term *terminalOut) {
+	t.Helper()
+	if len(res.Details) != len(term.Details) {
+		t.Errorf("app has %d details, terminal %d", len(res.Details), len(term.Details))
+	}
+	for _, d := range res.Details {
+		raw, ok := term.Details[d.Key]
+		if !ok {
+			t.Errorf("terminal has no detail %s", d.Key)
+			continue
+		}
+		want, err := json.Marshal(struct {
+			Value any    `json:"value"`
+			Unit  string `json:"unit"`
+		}{d.Any, ""})
+		if err != nil || !jsonEqual(raw, want) {
+			t.Errorf("detail %s: app %s, terminal %s", d.Key, want, raw)
 		}
 	}
 }

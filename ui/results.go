@@ -15,7 +15,8 @@ import (
 )
 
 // Results is a card of result rows (label, value with its unit, optional
-// note), followed by the model's warnings. Values go through the units
+// note), followed by the model's warnings and, when the solve reports any,
+// a closed Details section with its diagnostics. Values go through the units
 // formatters; a non-finite value is never shown: the row reads "—" with a
 // reason. A screen fills it after each computation (Reset, then Add...).
 type Results struct {
@@ -23,6 +24,7 @@ type Results struct {
 	rows     []resultRow
 	warnings []string
 	failure  string
+	details  resultDetails
 }
 
 type resultRow struct {
@@ -38,6 +40,7 @@ func (r *Results) Reset() {
 	r.rows = r.rows[:0]
 	r.warnings = r.warnings[:0]
 	r.failure = ""
+	r.details.rows = r.details.rows[:0]
 }
 
 // finite reports whether v is neither NaN nor ±Inf.
@@ -170,6 +173,9 @@ func (r *Results) Layout(gtx layout.Context) layout.Dimensions {
 				return l.Layout(gtx)
 			})
 		}))
+	}
+	if len(r.details.rows) > 0 {
+		children = append(children, layout.Rigid(r.layoutDetails))
 	}
 	if len(children) == 0 {
 		return layout.Dimensions{}

@@ -9,7 +9,8 @@ import (
 
 // Show fills the card with a calculator's result rows and warnings, each
 // row formatted from its dimension (or its Show unit) and, where the row
-// is a check, marked with its outcome.
+// is a check, marked with its outcome; the solve's diagnostics go to the
+// closed Details section.
 func (r *Results) Show(res *sheet.Result) {
 	for _, row := range res.Rows {
 		n := len(r.rows)
@@ -37,6 +38,7 @@ func (r *Results) Show(res *sheet.Result) {
 		}
 	}
 	r.Warn(res.Warnings...)
+	r.details.show(res.Details)
 }
 
 // addGauge appends a pressure above the atmosphere, in bar gauge.

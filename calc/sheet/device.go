@@ -173,9 +173,10 @@ func shortStackRows(r *Result, ss *linear.ShortStackResult, pump bool) {
 	}
 }
 
-// iterationsRow adds the number of Newton iterations of a solve.
+// iterationsRow adds the number of Newton iterations of a solve to the
+// result's details (a diagnostic, not an answer).
 func iterationsRow(r *Result, n int) {
-	r.AddObject("iterations", "Newton iterations", n, fmt.Sprint(n))
+	r.Detail("iterations", "Newton iterations", n, fmt.Sprint(n))
 }
 
 // withAlt formats v (SI) and, in brackets, in another unit:

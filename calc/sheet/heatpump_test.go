@@ -44,7 +44,7 @@ func TestHeatPumpSheetThermodynamics(t *testing.T) {
 	if tc != want.ColdTemperature || get("driver_pressure_amplitude") != want.DriverPressure {
 		t.Errorf("cold %g K, driver %g Pa; calc/linear %g K, %g Pa", tc, get("driver_pressure_amplitude"), want.ColdTemperature, want.DriverPressure)
 	}
-	if len(r.Cautions) != 4 || !strings.HasPrefix(r.Cautions[0], "Sound:") || !strings.Contains(r.Cautions[0], "3000 Pa") {
+	if len(r.Cautions) != 4 || !strings.HasPrefix(r.Cautions[0], "Sound:") || !strings.Contains(r.Cautions[0], "3 kPa") {
 		t.Errorf("cautions %q", r.Cautions)
 	}
 }

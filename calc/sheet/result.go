@@ -98,6 +98,11 @@ type Result struct {
 	Derived []Row
 	// Rows are the results in order.
 	Rows []Row
+	// Details are diagnostics of how the answer was reached (the Newton
+	// iterations of a solve), not answers: the app shows them in a
+	// collapsed section under the results, twcalc in a "details" block of
+	// the table and a "details" object of its JSON that tools can ignore.
+	Details []Row
 	// Warnings are model warnings: a state near the edge of a model, a
 	// result near a limit of the method.
 	Warnings []string
@@ -157,6 +162,13 @@ func (r *Result) AddObject(key, label string, v any, text string) *Row {
 	return &r.Rows[len(r.Rows)-1]
 }
 
+// Detail appends a diagnostic of the solve: v is its JSON value (a
+// count, a number) and text its words for people ("6").
+func (r *Result) Detail(key, label string, v any, text string) *Row {
+	r.Details = append(r.Details, Row{Key: key, Label: label, Kind: Object, Any: v, Text: text})
+	return &r.Details[len(r.Details)-1]
+}
+
 // Check appends a check row: words for the verdict, its outcome and why.
 func (r *Result) Check(key, label, words string, o Outcome, why string) *Row {
 	row := r.AddWords(key, label, words)
@@ -209,7 +221,7 @@ func (r *Result) Worst() Outcome {
 // never reach a screen or a file.
 func (r *Result) check() error {
 	seen := map[string]bool{}
-	for _, list := range [][]Row{r.Derived, r.Rows} {
+	for _, list := range [][]Row{r.Derived, r.Rows, r.Details} {
 		for _, row := range list {
 			if seen[row.Key] {
 				return fmt.Errorf("internal: result %s added twice", row.Key)

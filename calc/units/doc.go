@@ -10,7 +10,14 @@
 //     with an optional uncertainty. Bad input gives a *ParseError that
 //     quotes the input and says what is accepted.
 //   - Format, FormatIn, FormatInDim, FormatGauge, FormatPM and FormatPMIn
-//     write values with their unit symbol and sensible significant digits.
+//     write values with their unit symbol and sensible significant digits,
+//     never with an exponent: Format and FormatPM pick the unit a person
+//     reads (an SI prefix or a unit of the trade, "243.9 µm", "1 MPa",
+//     "160.5 mg/m³", see readable.go) and write a dimensionless million or
+//     more in words ("45.8 million"). Number, Decimal, FormatDigits,
+//     FormatComplex and FormatSI do the same for sentences, files, echoes,
+//     complex values and values with a stored SI symbol. Parse reads every
+//     text they write back.
 //   - ToUnit, FromUnit (and the Dim variants) and Gauge convert numbers.
 //   - Units lists the unit symbols a screen can offer for a dimension, SI
 //     first; SIUnit gives the SI symbol.

@@ -104,17 +104,53 @@ func (e *RangeError) Error() string {
 	return b.String()
 }
 
-// rangeText writes the bounds as "0–1" or "20–3000 K".
+// rangeText writes the bounds as "0–1", "20–3000 K" or "0–100 MPa": the
+// lower bound in the upper bound's readable unit, unless it would read
+// below 0.001 there ("100 µm–3 m").
 func (e *RangeError) rangeText() string {
-	return formatNumber(e.Min, 4) + "–" + e.withUnit(e.Max)
+	d, ok := siDim(e.Unit)
+	if !ok || !isFinite(e.Max) {
+		return formatNumber(e.Min, 4) + "–" + e.withUnit(e.Max)
+	}
+	if d == DimNone {
+		return formatPlain(e.Min, 4) + "–" + formatPlain(e.Max, 4)
+	}
+	def := readableUnit(roundSig(e.Max, 4), d)
+	if def == nil {
+		return formatNumber(e.Min, 4) + "–" + e.withUnit(e.Max)
+	}
+	lo := toUnit(e.Min, def, StandardAtmosphere)
+	if lo != 0 && math.Abs(roundSig(lo, 4)) < 1e-3 {
+		return e.withUnit(e.Min) + "–" + e.withUnit(e.Max)
+	}
+	return formatNumber(lo, 4) + "–" + formatDef(e.Max, def, StandardAtmosphere, 4)
 }
 
+// withUnit writes v with the error's unit; a value in the SI unit of a
+// dimension is written in that dimension's readable unit (see Format).
 func (e *RangeError) withUnit(v float64) string {
+	if !isFinite(v) {
+		return formatNumber(v, 4)
+	}
+	if d, ok := siDim(e.Unit); ok {
+		return formatReadable(v, d, 4)
+	}
 	s := formatNumber(v, 4)
-	if e.Unit == "" || !isFinite(v) {
+	if e.Unit == "" {
 		return s
 	}
 	return s + " " + e.Unit
+}
+
+// siDim returns the first dimension whose SI symbol is unit ("" gives
+// DimNone, "K" an absolute temperature, "m²/s" a kinematic viscosity).
+func siDim(unit string) (Dimension, bool) {
+	for d := range dims {
+		if dims[d].si == unit {
+			return Dimension(d), true
+		}
+	}
+	return 0, false
 }
 
 // ParseError reports typed input that Parse could not accept. Its message

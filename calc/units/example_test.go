@@ -36,7 +36,7 @@ func ExampleParseWith() {
 	fmt.Println(units.Format(q.Value, units.DimPressure))
 	// Output:
 	// 300.15 K
-	// 290000 Pa
+	// 290 kPa
 }
 
 func ExampleFormat() {
@@ -49,7 +49,7 @@ func ExampleFormat() {
 	fmt.Println(s)
 	// Output:
 	// 440.3 Hz
-	// 1.013e7 Pa
+	// 10.13 MPa
 	// 440 ± 5 Hz
 	// 26.85 °C
 	// 30 barg

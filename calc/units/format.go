@@ -12,9 +12,9 @@ import (
 // should not pass such values; the dash keeps them off screens and files.
 const NotANumber = "—"
 
-// formatNumber writes v with sig significant digits, trailing zeros after
-// the decimal point removed. Plain notation is used for 1e-3 ≤ |v| < 1e6
-// and a short exponent ("1.013e7", "2.5e-5") outside.
+// formatNumber writes v with sig significant digits in plain decimal
+// notation, never with an exponent ("101300", "0.00002500" trimmed to
+// "0.000025"), trailing zeros after the decimal point removed.
 func formatNumber(v float64, sig int) string {
 	if !isFinite(v) {
 		return NotANumber
@@ -25,15 +25,9 @@ func formatNumber(v float64, sig int) string {
 	e := strconv.FormatFloat(v, 'e', sig-1, 64) // rounded: "-1.013e+05"
 	k := strings.IndexByte(e, 'e')
 	exp, _ := strconv.Atoi(e[k+1:])
-	if exp >= -3 && exp < 6 {
-		r, _ := strconv.ParseFloat(e, 64)
-		dec := sig - 1 - exp
-		if dec < 0 {
-			dec = 0
-		}
-		return trimZeros(strconv.FormatFloat(r, 'f', dec, 64))
-	}
-	return trimZeros(e[:k]) + "e" + strconv.Itoa(exp)
+	r, _ := strconv.ParseFloat(e, 64)
+	dec := max(sig-1-exp, 0)
+	return trimZeros(fixed(r, dec))
 }
 
 // trimZeros removes trailing zeros after a decimal point, and the point.
@@ -57,15 +51,15 @@ func joinUnit(num, symbol string) string {
 	return num + " " + symbol
 }
 
-// Format writes an SI value of dimension d in d's SI unit with 4
-// significant digits: "440.3 Hz", "101300 Pa", "1.013e7 Pa", "0.25 m".
-// Plain notation is used for 1e-3 ≤ |v| < 1e6, a short exponent outside.
-// NaN and ±Inf give "—".
+// Format writes an SI value of dimension d for people, with 4 significant
+// digits, in the unit of d that keeps the number short (see ReadableUnit):
+// "440.3 Hz", "101.3 kPa", "10.13 MPa", "250 mm", "243.9 µm",
+// "19.93 µPa·s". It never writes an exponent: a dimensionless number of a
+// million or more is written in words ("45.8 million"), a small one in
+// plain decimals ("0.00002500" as "0.000025"). Parse reads every result
+// back. NaN and ±Inf give "—".
 func Format(v float64, d Dimension) string {
-	if !isFinite(v) {
-		return NotANumber
-	}
-	return joinUnit(formatNumber(v, 4), SIUnit(d))
+	return formatReadable(v, d, 4)
 }
 
 // FormatIn writes the SI value v in the unit named unit with 4 significant
@@ -77,7 +71,7 @@ func FormatIn(v float64, unit string) (string, error) {
 	if err != nil {
 		return "", err
 	}
-	return formatDef(v, def, StandardAtmosphere), nil
+	return formatDef(v, def, StandardAtmosphere, 4), nil
 }
 
 // FormatInDim is FormatIn with the unit looked up within d:
@@ -87,7 +81,7 @@ func FormatInDim(v float64, d Dimension, unit string) (string, error) {
 	if err != nil {
 		return "", err
 	}
-	return formatDef(v, def, StandardAtmosphere), nil
+	return formatDef(v, def, StandardAtmosphere, 4), nil
 }
 
 // FormatGauge writes the absolute pressure abs (Pa) as a gauge pressure
@@ -110,10 +104,11 @@ func FormatGauge(abs, atm float64, unit string) (string, error) {
 	if atm <= 0 {
 		atm = StandardAtmosphere
 	}
-	return formatDef(abs, def, atm), nil
+	return formatDef(abs, def, atm, 4), nil
 }
 
-func formatDef(v float64, def *unitDef, atm float64) string {
+// formatDef writes the SI value v in def's unit with sig significant digits.
+func formatDef(v float64, def *unitDef, atm float64, sig int) string {
 	if !isFinite(v) {
 		return NotANumber
 	}
@@ -121,19 +116,38 @@ func formatDef(v float64, def *unitDef, atm float64) string {
 	if !isFinite(x) {
 		return NotANumber
 	}
-	return joinUnit(formatNumber(x, 4), def.symbol)
+	return joinUnit(formatNumber(x, sig), def.symbol)
 }
 
-// FormatPM writes a value and its standard uncertainty u (both SI) in d's
-// SI unit: "440 ± 5 Hz", "0.2500 ± 0.0012 m". The uncertainty keeps two
-// significant digits when its first digit is 1 or 2, one otherwise, and
-// the value is rounded to the same decimal place (common practice in
-// reporting measurements; see JCGM 100:2008 (GUM) 7.2.6, which asks for at
-// most two significant digits). Outside 1e-3 ≤ |v| < 1e6 both share one
-// exponent: "1.0132e5 ± 0.0008e5 Pa". u = 0 gives Format(v, d); NaN or Inf
-// in v gives "—".
+// FormatPM writes a value and its standard uncertainty u (both SI) in
+// the readable unit of d (chosen by the larger of |v| and u, see Format):
+// "440 ± 5 Hz", "147.0 ± 1.2 mm", "101.33 ± 0.08 kPa". The uncertainty
+// keeps two significant digits when its first digit is 1 or 2, one
+// otherwise, and the value is rounded to the same decimal place (common
+// practice in reporting measurements; see JCGM 100:2008 (GUM) 7.2.6, which
+// asks for at most two significant digits). No exponent is written. u = 0
+// gives Format(v, d); NaN or Inf in v gives "—".
 func FormatPM(v, u float64, d Dimension) string {
-	return pm(v, u, SIUnit(d))
+	if !isFinite(v) {
+		return NotANumber
+	}
+	if u == 0 || !isFinite(u) {
+		return Format(v, d)
+	}
+	big := roundSig(math.Max(math.Abs(v), math.Abs(u)), 4)
+	if d == DimNone {
+		for _, w := range scaleWords {
+			if big >= w.v {
+				return pm(v/w.v, u/w.v, w.word)
+			}
+		}
+		return pm(v, u, "")
+	}
+	def := readableUnit(big, d)
+	if def == nil {
+		return pm(v, u, SIUnit(d))
+	}
+	return pm(toUnit(v, def, StandardAtmosphere), u/def.factor, def.symbol)
 }
 
 // FormatPMIn is FormatPM in a chosen unit of d; the uncertainty is
@@ -181,19 +195,10 @@ func pm(v, u float64, symbol string) string {
 		// The uncertainty is far below the value's precision.
 		return joinUnit(formatNumber(v, 4)+" ± "+formatNumber(u, 2), symbol)
 	}
-	if top >= -3 && top < 6 {
-		dec := max(0, -last)
-		scale := math.Pow(10, float64(last))
-		vr := math.Round(v/scale) * scale
-		return joinUnit(fixed(vr, dec)+" ± "+fixed(ur, dec), symbol)
-	}
-	// Shared exponent: mantissas to the place of the last digit.
-	scale := math.Pow(10, float64(top))
-	dec := top - last
-	vm := math.Round(v/math.Pow(10, float64(last))) * math.Pow(10, float64(last)) / scale
-	um := ur / scale
-	exp := "e" + strconv.Itoa(top)
-	return joinUnit(fixed(vm, dec)+exp+" ± "+fixed(um, dec)+exp, symbol)
+	dec := max(0, -last)
+	scale := math.Pow(10, float64(last))
+	vr := math.Round(v/scale) * scale
+	return joinUnit(fixed(vr, dec)+" ± "+fixed(ur, dec), symbol)
 }
 
 // fixed writes x with dec decimals, "-0" as "0".

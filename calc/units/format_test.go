@@ -11,7 +11,8 @@ import (
 func TestFormat(t *testing.T) {
 	t.Parallel()
 	// Expected strings: our own output convention (4 significant digits,
-	// plain notation for 1e-3 ≤ |v| < 1e6), rounding worked by hand.
+	// no exponent, the unit of the ladder in readable.go), rounding worked
+	// by hand.
 	cases := []struct {
 		v    float64
 		dim  Dimension
@@ -20,19 +21,35 @@ func TestFormat(t *testing.T) {
 		{578.3, DimFrequency, "578.3 Hz"},
 		{578.34999, DimFrequency, "578.3 Hz"},
 		{578.35001, DimFrequency, "578.4 Hz"},
-		{101325, DimPressure, "101300 Pa"},
-		{1.01325e7, DimPressure, "1.013e7 Pa"},
-		{0.147, DimLength, "0.147 m"},
-		{0.25, DimLength, "0.25 m"},
-		{2.5e-5, DimLength, "2.5e-5 m"},
-		{0.001, DimLength, "0.001 m"},
-		{0.00099996, DimLength, "0.001 m"}, // rounds up into plain range
-		{999999.5, DimPressure, "1e6 Pa"},
+		{101325, DimPressure, "101.3 kPa"},
+		{1.01325e7, DimPressure, "10.13 MPa"},
+		{0.147, DimLength, "147 mm"},
+		{0.25, DimLength, "250 mm"},
+		{1.5, DimLength, "1.5 m"},
+		{2.5e-5, DimLength, "25 µm"},
+		{0.001, DimLength, "1 mm"},
+		{0.00099996, DimLength, "1 mm"}, // rounds up into the mm rung
+		{999999.5, DimPressure, "1 MPa"},
+		{1e6, DimPressure, "1 MPa"},
+		{1.38e8, DimStress, "138 MPa"},
 		{0, DimPressure, "0 Pa"},
 		{math.Copysign(0, -1), DimTemperatureDifference, "0 K"},
 		{-23.456, DimTemperatureDifference, "-23.46 K"},
 		{7900, DimDensity, "7900 kg/m³"},
-		{1.99e-5, DimDynamicViscosity, "1.99e-5 Pa·s"},
+		{1.99e-5, DimDynamicViscosity, "19.9 µPa·s"},
+		{1.605e-4, DimDensity, "160.5 mg/m³"},
+		{0.1625, DimDensity, "0.1625 kg/m³"},
+		{1.242e-5, DimKinematicViscosity, "12.42 mm²/s"},
+		{0.1869, DimKinematicViscosity, "0.1869 m²/s"},
+		{5e-4, DimKinematicViscosity, "5 cm²/s"},
+		{0.0262, DimThermalConductivity, "0.0262 W/(m·K)"},
+		{0.005, DimThermalConductivity, "5 mW/(m·K)"},
+		{4.58e7, DimNone, "45.8 million"},
+		{186900, DimNone, "186900"},
+		{1.234e-5, DimNone, "0.00001234"},
+		{2.5e12, DimNone, "2.5 trillion"},
+		{5.6e-4, DimRate, "2.016 /h"},
+		{1800, DimTime, "30 min"},
 		{0.3, DimNone, "0.3"},
 		{94, DimSoundLevel, "94 dB"},
 		{math.NaN(), DimLength, "—"},
@@ -133,10 +150,12 @@ func TestFormatPM(t *testing.T) {
 		{567.4, 8.3, DimFrequency, "567 ± 8 Hz"},
 		{571.46, 1.23, DimFrequency, "571.5 ± 1.2 Hz"},
 		{567, 0.96, DimFrequency, "567 ± 1 Hz"},
-		{0.147, 0.0012, DimLength, "0.1470 ± 0.0012 m"},
-		{101325, 80, DimPressure, "101330 ± 80 Pa"},
-		{1.01325e7, 800, DimPressure, "1.01325e7 ± 0.00008e7 Pa"},
-		{2.5e-5, 3e-7, DimLength, "2.50e-5 ± 0.03e-5 m"},
+		{0.147, 0.0012, DimLength, "147.0 ± 1.2 mm"},
+		{101325, 80, DimPressure, "101.33 ± 0.08 kPa"},
+		{1.01325e7, 800, DimPressure, "10.1325 ± 0.0008 MPa"},
+		{2.5e-5, 3e-7, DimLength, "25.0 ± 0.3 µm"},
+		{4.58e7, 3e5, DimNone, "45.8 ± 0.3 million"},
+		{0.001, 0.3, DimTemperatureDifference, "0.0 ± 0.3 K"},
 		{567, 0, DimFrequency, "567 Hz"},
 		{567, math.NaN(), DimFrequency, "567 Hz"},
 		{math.NaN(), 8, DimFrequency, "—"},
@@ -226,7 +245,7 @@ func TestRangeError(t *testing.T) {
 		{NewRangeError("temperature", 15, 20, 3000, "K"), "temperature 15 K is outside the valid range 20–3000 K"},
 		{&RangeError{Field: "temperature", Value: 15, Min: 20, Max: 3000, Unit: "K", Why: "helium model"},
 			"temperature 15 K is outside the valid range 20–3000 K (helium model)"},
-		{NewRangeError("length", -0.005, 0, math.Inf(1), "m"), "length -0.005 m must be at least 0 m"},
+		{NewRangeError("length", -0.005, 0, math.Inf(1), "m"), "length -5 mm must be at least 0 m"},
 		// a value on a bound was refused, so the bound is open (common
 		// practice in wording, no published source)
 		{NewRangeError("plate half gap", 0, 0, math.Inf(1), "m"), "plate half gap 0 m must be greater than zero"},
@@ -234,7 +253,8 @@ func TestRangeError(t *testing.T) {
 		{NewRangeError("solid fraction", 1, 0, 1, ""), "solid fraction 1 must be less than 1 (valid range 0–1, ends excluded)"},
 		{NewRangeError("porosity", 0, 0, 1, ""), "porosity 0 must be greater than 0 (valid range 0–1, ends excluded)"},
 		{NewRangeError("mole fraction", 1.2, math.Inf(-1), 1, ""), "mole fraction 1.2 must be at most 1"},
-		{NewRangeError("pressure", 123456789, 0, 1e8, "Pa"), "pressure 1.235e8 Pa is outside the valid range 0–1e8 Pa"},
+		{NewRangeError("pressure", 123456789, 0, 1e8, "Pa"), "pressure 123.5 MPa is outside the valid range 0–100 MPa"},
+		{NewRangeError("gap", 5e-5, 1e-4, 3, "m"), "gap 50 µm is outside the valid range 100 µm–3 m"},
 		{NewRangeError("", 2, math.Inf(-1), math.Inf(1), "m"), "value 2 m is not a finite number"},
 	}
 	for _, c := range cases {

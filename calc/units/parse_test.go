@@ -254,7 +254,7 @@ func TestParseErrors(t *testing.T) {
 		{"-1 bar", DimPressure, Options{}, []string{"below vacuum"}, true},
 		{"-2 barg", DimPressure, Options{}, []string{"below vacuum"}, true},
 		{"-2 barg", DimPressure, Options{AllowNegative: true}, []string{"below vacuum"}, true},
-		{"2e7 m", DimLength, Options{}, []string{"absurdly large", "1e6 m"}, true},
+		{"2e7 m", DimLength, Options{}, []string{"absurdly large", "at most 1000 km"}, true},
 		{"1e20 Pa", DimPressure, Options{}, []string{"absurdly large"}, true},
 		{"2e6 K", DimTemperature, Options{}, []string{"absurdly large"}, true},
 		{"567 Hz ± -8 Hz", DimFrequency, Options{}, []string{"negative uncertainty"}, true},
@@ -271,7 +271,7 @@ func TestParseErrors(t *testing.T) {
 		{"1 mhz", DimFrequency, Options{}, []string{`unknown frequency unit "mhz"`, "letter case matters here: MHz or mHz"}, false},
 		{"20 °", DimTemperature, Options{}, []string{"write °C or °F"}, false},
 		// Milli and mega, gram and giga are never confused by case folding.
-		{"5 MW", DimPower, Options{}, []string{`unknown power unit "MW"`, "did you mean mW?"}, false},
+		{"5 mw", DimPower, Options{}, []string{`unknown power unit "mw"`, "letter case matters here: mW or MW"}, false},
 		{"2 mpa", DimPressure, Options{}, []string{"did you mean MPa?"}, false},
 		{"3 ML", DimVolume, Options{}, []string{"did you mean mL?"}, false},
 		{"1 gpa", DimStress, Options{}, []string{"did you mean GPa?"}, false},

@@ -51,6 +51,10 @@ func q(d Dimension, name, symbol string, factor float64, spellings ...string) un
 var unitTable = []unitDef{
 	u(DimNone, "%", "%", 0.01, "percent"),
 	q(DimNone, "ppm", "ppm", 1e-6),
+	// Words for large plain numbers, as Format writes them (short scale).
+	q(DimNone, "million", "million", 1e6, "millions"),
+	q(DimNone, "billion", "billion", 1e9, "billions"),
+	q(DimNone, "trillion", "trillion", 1e12, "trillions"),
 
 	u(DimLength, "m", "m", 1, "metre", "metres", "meter", "meters"),
 	u(DimLength, "mm", "mm", 1e-3, "millimetre", "millimetres", "millimeter", "millimeters"),
@@ -67,6 +71,7 @@ var unitTable = []unitDef{
 	u(DimArea, "cm2", "cm²", 1e-4, "cm²"),
 	u(DimArea, "in2", "in²", inch*inch, "in²", "sq in", "square inch", "square inches"),
 	q(DimArea, "ft2", "ft²", foot*foot, "ft²", "sq ft", "square foot", "square feet"),
+	q(DimArea, "um2", "µm²", 1e-12, "µm²"),
 
 	u(DimVolume, "m3", "m³", 1, "m³"),
 	u(DimVolume, "L", "L", 1e-3, "l", "litre", "litres", "liter", "liters"),
@@ -104,6 +109,7 @@ var unitTable = []unitDef{
 	u(DimPressure, "torr", "torr", torrPa, "Torr"),
 	q(DimPressure, "hPa", "hPa", 100),
 	q(DimPressure, "mmHg", "mmHg", mmHgPa, "mm Hg"),
+	q(DimPressure, "GPa", "GPa", 1e9),
 	{name: "kPag", symbol: "kPag", dim: DimPressure, factor: 1e3, gauge: true, spellings: []string{"kPa(g)"}},
 	{name: "MPag", symbol: "MPag", dim: DimPressure, factor: 1e6, gauge: true, spellings: []string{"MPa(g)"}},
 	{name: "mbarg", symbol: "mbarg", dim: DimPressure, factor: 100, gauge: true, spellings: []string{"mbar(g)"}},
@@ -137,6 +143,8 @@ var unitTable = []unitDef{
 	u(DimDensity, "g/L", "g/L", 1, "g/l"),
 	q(DimDensity, "kg/L", "kg/L", 1e3, "kg/l"),
 	q(DimDensity, "lb/ft3", "lb/ft³", pound/(foot*foot*foot), "lb/ft³"),
+	q(DimDensity, "g/m3", "g/m³", 1e-3, "g/m³"),
+	q(DimDensity, "mg/m3", "mg/m³", 1e-6, "mg/m³"),
 
 	u(DimSpeed, "m/s", "m/s", 1),
 	u(DimSpeed, "km/h", "km/h", 1/3.6),
@@ -174,10 +182,13 @@ var unitTable = []unitDef{
 	u(DimEnergy, "kWh", "kWh", 3.6e6),
 	q(DimEnergy, "cal", "cal", calorieJ),
 	q(DimEnergy, "kcal", "kcal", 1e3*calorieJ),
+	q(DimEnergy, "mJ", "mJ", 1e-3),
+	q(DimEnergy, "GJ", "GJ", 1e9),
 
 	u(DimPower, "W", "W", 1, "watt", "watts"),
 	u(DimPower, "mW", "mW", 1e-3),
 	u(DimPower, "kW", "kW", 1e3),
+	q(DimPower, "MW", "MW", 1e6),
 
 	u(DimMass, "kg", "kg", 1),
 	u(DimMass, "g", "g", 1e-3, "gram", "grams"),

@@ -4,13 +4,20 @@ import (
 	"encoding/csv"
 	"fmt"
 	"io"
-	"strconv"
+
+	"tubewright/calc/units"
 )
+
+// csvDigits is the number of significant digits of a CSV value: the
+// methods behind the sweeps (property fits, the linear model, first-order
+// uncertainties) do not support more than about 7, and a relative rounding
+// of at most 5e-7 is far below any of their errors (our own choice).
+const csvDigits = 7
 
 // writeCSV writes a sweep as comma-separated values: one header line, then
 // one line per row. Header names should carry their unit ("temperature_K",
-// "frequency_Hz"). Numbers are written with the shortest text that reads
-// back to the same float64 (strconv 'g', precision -1). A row of the wrong
+// "frequency_Hz"). Numbers are written in plain decimals with csvDigits
+// significant digits, never with an exponent. A row of the wrong
 // length or a NaN or ±Inf value is an error and nothing is written.
 func writeCSV(w io.Writer, header []string, rows [][]float64) error {
 	if err := checkTable(header, rows); err != nil {
@@ -23,7 +30,7 @@ func writeCSV(w io.Writer, header []string, rows [][]float64) error {
 	rec := make([]string, len(header))
 	for _, row := range rows {
 		for j, v := range row {
-			rec[j] = strconv.FormatFloat(v, 'g', -1, 64)
+			rec[j] = units.Decimal(v, csvDigits)
 		}
 		if err := cw.Write(rec); err != nil {
 			return err

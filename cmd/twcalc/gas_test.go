@@ -137,7 +137,7 @@ func TestGasTable(t *testing.T) {
 	if code := run([]string{"gas", "--gas", "helium", "--temperature", "300K", "--pressure", "10bar"}, &o, &e); code != exitOK {
 		t.Fatalf("exit %d: %s", code, e.String())
 	}
-	for _, w := range []string{"sound_speed", "m/s", "kg/m³", "Pa·s", "W/(m·K)", "J/(kg·K)", "kg/mol", "m²/s", "prandtl"} {
+	for _, w := range []string{"sound_speed", "m/s", "kg/m³", "Pa·s", "W/(m·K)", "J/(kg·K)", "g/mol", "mm²/s", "prandtl"} {
 		if !strings.Contains(o.String(), w) {
 			t.Errorf("table lacks %q:\n%s", w, o.String())
 		}

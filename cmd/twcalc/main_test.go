@@ -258,7 +258,7 @@ func TestTableOutput(t *testing.T) {
 		"inputs", "results",
 		units.FormatPM(567, 8, units.DimFrequency),
 		units.Format(1e5, units.DimPressure),
-		"0.25 - 0.5i",
+		"0.25 − 0.5i",
 		"warnings", "a warning over two lines",
 		"CAUTION", "probe caution: defer to local codes",
 	} {

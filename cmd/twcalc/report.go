@@ -6,7 +6,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"strconv"
 	"strings"
 	"text/tabwriter"
 
@@ -22,12 +21,17 @@ import (
 //	 "results":{"NAME":{"value":N,"unit":"SI unit"[,"uncertainty":U]}},
 //	 "warnings":[...], "cautions":[...]}
 //
+// followed by "verdicts", and where there are any "notes", "details" (the
+// solver's diagnostics, {"NAME":{"value":V,"unit":""}}, which tools can
+// ignore) and a sweep's "table".
+//
 // Names keep their insertion order in both forms. A result that is NaN or
 // ±Inf is never printed: adding one records an error, and run() exits 1
 // with "internal: result NAME is not finite".
 type report struct {
 	inputs    []entry
 	results   []entry
+	details   []entry // diagnostics of the solve, apart from the results
 	warnings  []string
 	cautions  []string
 	tableData *sweepTable
@@ -118,15 +122,19 @@ func (r *report) inputSI(name string, v float64, dim units.Dimension) {
 	r.put(&r.inputs, "input", name, resultJSON{Value: v, Unit: units.SIUnit(dim)}, shownSI(v, 0, dim))
 }
 
-// exactSI formats an input's SI value as units.Format does when that is
-// exact, and otherwise with all the digits it needs ("101325 Pa" for 1 atm
-// rather than "101300 Pa"), so that the echo shows what was used.
+// exactSI formats an input's SI value in its readable unit (see
+// units.Format) with as many digits as it takes to show what was used
+// ("101.325 kPa" for 1 atm rather than "101.3 kPa"; at most 10), never with
+// an exponent.
 func exactSI(v float64, dim units.Dimension) string {
-	s := units.Format(v, dim)
-	if q, err := units.ParseWith(s, dim, units.Options{AllowNegative: true}); err == nil && q.Value == v {
-		return s
+	for sig := 4; sig < 10; sig++ {
+		s := units.FormatDigits(v, dim, sig)
+		q, err := units.ParseWith(s, dim, units.Options{AllowNegative: true})
+		if err == nil && math.Abs(q.Value-v) <= 1e-12*math.Abs(v) {
+			return s
+		}
 	}
-	return strconv.FormatFloat(v, 'g', 10, 64) + " " + units.SIUnit(dim)
+	return units.FormatDigits(v, dim, 10)
 }
 
 // resultJSON is the JSON form of one numeric result. Basis is "gauge" for a
@@ -148,9 +156,10 @@ var benchUnits = map[units.Dimension]string{
 	units.DimEnergy:      "kJ",
 }
 
-// shownSI formats v (or v ± u when u > 0) in the SI unit of dim and, where
+// shownSI formats v (or v ± u when u > 0) in the readable unit of dim and, where
 // the bench uses another unit, again in that unit in brackets:
-// "800000 Pa (8 bar)", "710.7 K (437.6 °C)", "2.439e-4 m (0.2439 mm)".
+// "800 kPa (8 bar)", "710.7 K (437.6 °C)", "243.9 µm (0.2439 mm)"; the
+// unit in brackets is left out where it is the one already shown.
 func shownSI(v, u float64, dim units.Dimension) string {
 	si := units.Format(v, dim)
 	if u > 0 {
@@ -170,7 +179,7 @@ func shownSI(v, u float64, dim units.Dimension) string {
 	} else {
 		alt, err = units.FormatInDim(v, dim, unit)
 	}
-	if err != nil || strings.ReplaceAll(alt, " ", "") == strings.ReplaceAll(si, " ", "") {
+	if err != nil || strings.HasSuffix(alt, " "+units.ReadableUnit(v, dim)) {
 		return si
 	}
 	return si + " (" + alt + ")"
@@ -230,15 +239,20 @@ func (r *report) addComplex(name string, c complex128) {
 		Re float64 `json:"re"`
 		Im float64 `json:"im"`
 	}
-	sign := "+"
-	if im < 0 || (im == 0 && math.Signbit(im)) {
-		sign = "-"
-	}
-	shown := strconv.FormatFloat(re, 'g', 4, 64) + " " + sign + " " + strconv.FormatFloat(math.Abs(im), 'g', 4, 64) + "i"
+	shown := units.FormatComplex(c)
 	r.put(&r.results, "result", name, struct {
 		Value reim   `json:"value"`
 		Unit  string `json:"unit"`
 	}{reim{re, im}, units.SIUnit(units.DimNone)}, shown)
+}
+
+// detail records a diagnostic of the solve (not an answer): JSON
+// {"value":v,"unit":""} under "details", the table's "details" block.
+func (r *report) detail(name string, v any, shown string) {
+	r.put(&r.details, "detail", name, struct {
+		Value any    `json:"value"`
+		Unit  string `json:"unit"`
+	}{v, ""}, shown)
 }
 
 // warn adds a model warning (a state outside a model's validated range, a
@@ -303,6 +317,10 @@ func (r *report) writeJSON(w io.Writer) error {
 		}
 		b.WriteString(`,"notes":`)
 		b.Write(raw)
+	}
+	if len(r.details) > 0 {
+		b.WriteString(`,"details":`)
+		writeObject(&b, r.details)
 	}
 	if t := r.tableData; t != nil {
 		raw, err := json.Marshal(struct {
@@ -381,6 +399,16 @@ func (r *report) writeText(w io.Writer) error {
 	}
 	for _, n := range r.notes {
 		fmt.Fprintf(&b, "note: %s\n", n)
+	}
+	if len(r.details) > 0 {
+		dw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+		fmt.Fprintf(dw, "details\n")
+		for _, e := range r.details {
+			fmt.Fprintf(dw, "  %s\t%s\n", e.name, e.shown)
+		}
+		if err := dw.Flush(); err != nil {
+			return err
+		}
 	}
 	if len(r.warnings) > 0 {
 		b.WriteString("warnings\n")

@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"encoding/json"
 	"fmt"
 	"math"
 	"strings"
@@ -81,13 +82,14 @@ func TestReportBenchUnits(t *testing.T) {
 		table string // expected in the table line
 		json  string // expected in the JSON
 	}{
-		{"pressure in bar", func(r *report) { r.add("p", 8e5, units.DimPressure) }, "800000 Pa (8 bar)", `"unit":"Pa"`},
-		{"stress in MPa", func(r *report) { r.add("s", 2.658e7, units.DimStress) }, "(26.58 MPa)", `"unit":"Pa"`},
+		{"pressure in bar", func(r *report) { r.add("p", 8e5, units.DimPressure) }, "800 kPa (8 bar)", `"unit":"Pa"`},
+		{"stress in MPa", func(r *report) { r.add("s", 2.658e7, units.DimStress) }, "s  26.58 MPa\n", `"unit":"Pa"`},
 		{"temperature in degC", func(r *report) { r.add("t", 373.15, units.DimTemperature) }, "373.1 K (100 °C)", `"unit":"K"`},
-		{"small length in mm", func(r *report) { r.add("l", 2.5e-4, units.DimLength) }, "(0.25 mm)", `"unit":"m"`},
+		{"small length in mm", func(r *report) { r.add("l", 2.5e-4, units.DimLength) }, "l  250 µm (0.25 mm)\n", `"unit":"m"`},
+		{"length in mm once", func(r *report) { r.add("l", 0.147, units.DimLength) }, "l  147 mm\n", `"unit":"m"`},
 		{"long length stays in m", func(r *report) { r.add("l", 2.5, units.DimLength) }, "l  2.5 m\n", `"unit":"m"`},
-		{"gauge pressure", func(r *report) { r.addGauge("g", 3e6) }, "3e6 Pa gauge (30 barg)", `"basis":"gauge"`},
-		{"derived input", func(r *report) { r.inputSI("i", 1e6, units.DimPressure) }, "1e6 Pa (10 bar)", `"unit":"Pa"`},
+		{"gauge pressure", func(r *report) { r.addGauge("g", 3e6) }, "3 MPa gauge (30 barg)", `"basis":"gauge"`},
+		{"derived input", func(r *report) { r.inputSI("i", 1e6, units.DimPressure) }, "1 MPa (10 bar)", `"unit":"Pa"`},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -153,8 +155,9 @@ func TestReportStringerValue(t *testing.T) {
 }
 
 // TestReportInputEcho: a typed input is echoed with the SI value it was read
-// as, with every digit that matters (1 atm = 101325 Pa exactly, BIPM SI
-// Brochure 2019; 20 °C = 293.15 K).
+// as, in a readable unit and with every digit that matters, never with an
+// exponent (1 atm = 101325 Pa exactly, 1 bar = 1e5 Pa, BIPM SI Brochure
+// 2019; 20 °C = 293.15 K); nothing is echoed where it would repeat the text.
 func TestReportInputEcho(t *testing.T) {
 	t.Parallel()
 	cases := []struct {
@@ -162,10 +165,14 @@ func TestReportInputEcho(t *testing.T) {
 		dim   units.Dimension
 		want  string
 	}{
-		{"1atm", units.DimPressure, "1atm absolute = 0 barg  (= 101325 Pa)"},
+		{"1atm", units.DimPressure, "1atm absolute = 0 barg  (= 101.325 kPa)"},
+		{"10 bar", units.DimPressure, "10 bar absolute = 8.987 barg  (= 1 MPa)"},
+		{"138MPa", units.DimStress, "138MPa\n"},
+		{"0.1mm", units.DimLength, "0.1mm  (= 100 µm)"},
 		{"20degC", units.DimTemperature, "20degC  (= 293.15 K)"},
-		{"12mm", units.DimLength, "12mm  (= 0.012 m)"},
-		{"0.5m", units.DimLength, "0.5m\n"},
+		{"12mm", units.DimLength, "12mm\n"},
+		{"0.5m", units.DimLength, "0.5m  (= 500 mm)"},
+		{"0.3", units.DimNone, "0.3\n"},
 	}
 	for _, c := range cases {
 		t.Run(c.typed, func(t *testing.T) {
@@ -184,5 +191,40 @@ func TestReportInputEcho(t *testing.T) {
 				t.Errorf("table %q does not contain %q", text.String(), c.want)
 			}
 		})
+	}
+}
+
+// TestReportDetails: a solver's diagnostics are kept apart from the
+// results: a "details" block after them in the table, a "details" object in
+// the JSON, and nothing of them among the results.
+func TestReportDetails(t *testing.T) {
+	t.Parallel()
+	r := newReport()
+	r.add("frequency", 262.2, units.DimFrequency)
+	r.detail("iterations", 5, "5")
+	var text, js bytes.Buffer
+	if err := r.writeText(&text); err != nil || r.err != nil {
+		t.Fatal(err, r.err)
+	}
+	if err := r.writeJSON(&js); err != nil {
+		t.Fatal(err)
+	}
+	if want := "results\n  frequency  262.2 Hz\ndetails\n  iterations  5\n"; !strings.Contains(text.String(), want) {
+		t.Errorf("table %q does not contain %q", text.String(), want)
+	}
+	var got struct {
+		Results map[string]any `json:"results"`
+		Details map[string]struct {
+			Value float64 `json:"value"`
+		} `json:"details"`
+	}
+	if err := json.Unmarshal(js.Bytes(), &got); err != nil {
+		t.Fatal(err)
+	}
+	if _, ok := got.Results["iterations"]; ok || len(got.Results) != 1 {
+		t.Errorf("results %v hold a diagnostic", got.Results)
+	}
+	if got.Details["iterations"].Value != 5 {
+		t.Errorf("details %v, want iterations 5", got.Details)
 	}
 }

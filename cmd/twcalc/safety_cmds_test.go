@@ -277,7 +277,7 @@ func TestSafetyCommandsRejectImpossibleInput(t *testing.T) {
 		{[]string{"oxygen", "--room", "30m3"}, "--release is required"},
 		{[]string{"oxygen", "--release-from-cylinder", "50L", "--room", "30m3"}, "--fill-pressure is required"},
 		{[]string{"oxygen", "--release-from-vessel", "50L", "--room", "30m3"}, "--vessel-pressure is required"},
-		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "0.5bara", "--room", "30m3"}, "--vessel-pressure \"0.5bara\": is 50000 Pa absolute, below the atmosphere"},
+		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "0.5bara", "--room", "30m3"}, "--vessel-pressure \"0.5bara\": is 50 kPa absolute, below the atmosphere"},
 		{[]string{"oxygen", "--release-from-vessel", "50L", "--vessel-pressure", "30barg", "--vessel-temperature", "5K", "--room", "30m3"}, "--vessel-temperature \"5K\""},
 		{[]string{"energy", "--gas", "helium", "--pressure", "1atm", "--volume", "50L"}, "no energy is stored"},
 		{[]string{"spl", "--amplitude", "0Pa"}, "pressure amplitude 0 Pa"},

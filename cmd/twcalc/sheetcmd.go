@@ -288,6 +288,9 @@ func sheetReport(res *sheet.Result) *report {
 			r.addObjectShown(row.Key, row.Any, row.Text)
 		}
 	}
+	for _, d := range res.Details {
+		r.detail(d.Key, d.Any, d.Text)
+	}
 	for _, w := range res.Warnings {
 		r.warn(w)
 	}

@@ -211,9 +211,10 @@ func TestPassText(t *testing.T) {
 			t.Errorf("text export lacks %q:\n%s", want, txt)
 		}
 	}
-	// A number without its display text falls back to value and SI unit.
+	// A number without its display text falls back to its value in a
+	// readable unit, without an exponent.
 	p.Items[1].Numbers[0].Shown = ""
-	if txt := p.Text(); !strings.Contains(txt, "hoop stress: 2.533e+07 Pa") {
+	if txt := p.Text(); !strings.Contains(txt, "hoop stress: 25.33 MPa\n") {
 		t.Errorf("fallback number text missing:\n%s", txt)
 	}
 }

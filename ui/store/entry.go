@@ -43,7 +43,7 @@ func EntryOf(s *sheet.Sheet, texts map[string]string, res *sheet.Result, note st
 				row.Shown += " gauge"
 			}
 		case sheet.Complex:
-			row.Shown = strconv.FormatFloat(real(r.Z), 'g', 4, 64) + " + " + strconv.FormatFloat(imag(r.Z), 'g', 4, 64) + "i"
+			row.Shown = units.FormatComplex(r.Z)
 		default:
 			row.Shown = r.Text
 		}

@@ -2,8 +2,9 @@ package store
 
 import (
 	"fmt"
-	"strconv"
 	"strings"
+
+	"tubewright/calc/units"
 )
 
 // Text renders a pass as plain text for printing or pasting into a lab
@@ -45,7 +46,7 @@ func (p *Pass) Text() string {
 		for _, n := range it.Numbers {
 			shown := n.Shown
 			if shown == "" {
-				shown = strconv.FormatFloat(n.Value, 'g', 4, 64) + " " + n.Unit
+				shown = units.FormatSI(n.Value, n.Unit)
 			}
 			fmt.Fprintf(&b, "      %s: %s\n", oneLine(n.Name), oneLine(shown))
 		}
