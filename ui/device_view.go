@@ -56,6 +56,7 @@ func newDeviceView(env *Env, s *sheet.Sheet, example string, n int) deviceView {
 		v.plots = append(v.plots, NewPlot(env))
 	}
 	v.takeDevice()
+	v.form.cs.point = v.operatingPoint
 	return v
 }
 
@@ -93,6 +94,7 @@ func (v *deviceView) update(gtx layout.Context) bool {
 	if !v.form.Update(gtx) {
 		return false
 	}
+	v.publish()
 	var devErr error
 	if fes := sheet.FieldErrors(v.form.Err()); len(fes) > 0 && fes[0].Key == keyDevice {
 		devErr = fes[0].Err
@@ -168,7 +170,7 @@ func evaluateWith(ctx context.Context, s *sheet.Sheet, texts map[string]string, 
 // results and their cautions, the screen's own inputs (by key), then the
 // example chips and the device editor.
 func (v *deviceView) top(gtx layout.Context, intro, heading string, keys ...string) []layout.Widget {
-	ws := []layout.Widget{Para(v.env, intro), Heading(v.env, heading), v.form.Results.Layout, v.form.CautionWidget}
+	ws := []layout.Widget{Para(v.env, intro), Heading(v.env, heading), v.form.resultCard, v.form.CautionWidget}
 	for _, k := range keys {
 		ws = append(ws, v.form.InputWidget(k))
 	}

@@ -26,6 +26,7 @@ func newDiagnoseScreen(env *Env) Screen {
 	s := &diagnoseScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
 		stash: map[string]string{}}
 	s.plot.Height = 240
+	s.form.cs.shown = s.inputKeys
 	return s
 }
 

@@ -91,6 +91,11 @@ type Bench struct {
 	// FrequencyPM is the standard uncertainty of a measured Frequency in
 	// Hz (set with SetMeasuredFrequency); 0 when none was given.
 	FrequencyPM float64
+
+	// values holds every carried value with the text it was given in and
+	// the screen it came from (ui/carry.go); the fields above mirror the
+	// four operating-point values.
+	values map[carryKind]Carried
 }
 
 // usable reports whether v is a finite, positive number.
@@ -99,7 +104,7 @@ func usable(v float64) bool { return v > 0 && !math.IsInf(v, 0) && !math.IsNaN(v
 // SetGas records the gas text. Empty text is ignored.
 func (b *Bench) SetGas(text string) {
 	if text != "" {
-		b.Gas = text
+		b.put(carryGas, Carried{Text: text})
 	}
 }
 
@@ -107,7 +112,7 @@ func (b *Bench) SetGas(text string) {
 // values are ignored.
 func (b *Bench) SetTemperature(k float64) {
 	if usable(k) {
-		b.Temperature = k
+		b.put(carryTemperature, Carried{SI: k})
 	}
 }
 
@@ -115,7 +120,7 @@ func (b *Bench) SetTemperature(k float64) {
 // non-positive values are ignored.
 func (b *Bench) SetPressure(pa float64) {
 	if usable(pa) {
-		b.Pressure = pa
+		b.put(carryPressure, Carried{SI: pa})
 	}
 }
 
@@ -123,9 +128,7 @@ func (b *Bench) SetPressure(pa float64) {
 // produced it; non-finite or non-positive values are ignored.
 func (b *Bench) SetFrequency(hz float64, from string) {
 	if usable(hz) {
-		b.Frequency = hz
-		b.FrequencyFrom = from
-		b.FrequencyPM = 0
+		b.put(carryFrequency, Carried{SI: hz, From: from})
 	}
 }
 
@@ -136,10 +139,13 @@ func (b *Bench) SetMeasuredFrequency(hz, pm float64, from string) {
 	if !usable(hz) {
 		return
 	}
-	b.SetFrequency(hz, from)
+	c := Carried{SI: hz, From: from}
 	if usable(pm) {
-		b.FrequencyPM = pm
+		c.PM = pm
+		c.Text = units.FormatPM(hz, pm, units.DimFrequency)
 	}
+	b.put(carryFrequency, c)
+	b.put(carryMeasured, c)
 }
 
 // Summary describes what the Bench holds for people, e.g. "helium, 300 K,
@@ -171,12 +177,4 @@ func (b *Bench) Summary() string {
 // it too, to see whether a Bench value differs from a field's).
 func near(a, b float64) bool {
 	return math.Abs(a-b) <= 1e-9*max(math.Abs(a), math.Abs(b))
-}
-
-// formatPressure writes a pressure in bar for a field's text.
-func formatPressure(pa float64) string {
-	if s, err := units.FormatIn(pa, "bar"); err == nil {
-		return s
-	}
-	return units.Format(pa, units.DimPressure)
 }

@@ -8,7 +8,6 @@ import (
 	"gioui.org/widget"
 
 	"tubewright/calc/sheet"
-	"tubewright/calc/units"
 )
 
 // Form is a calculator's inputs as widgets, built from its description in
@@ -27,7 +26,8 @@ type Form struct {
 	result  *sheet.Result
 	err     error
 	dirty   bool
-	kept    formKeep // last inputs restored and remembered; see keep_form.go
+	kept    formKeep   // last inputs restored and remembered; see keep_form.go
+	cs      carryState // carried values and the operating point; see carry_form.go
 }
 
 // formItem is the widget of one input; exactly one of the pointers is set.
@@ -37,6 +37,7 @@ type formItem struct {
 	gas   *GasPicker
 	pick  *Choice
 	on    *widget.Bool
+	mark  *carryMark // set while the value is one carried from another screen
 }
 
 // NewForm builds the widgets of s's inputs with their defaults (or
@@ -162,6 +163,10 @@ func (f *Form) Invalidate() { f.dirty = true }
 // Update handles the widgets' events and recomputes when an input changed;
 // it reports whether it recomputed.
 func (f *Form) Update(gtx layout.Context) bool {
+	if f.updateMarks(gtx) {
+		f.dirty = true
+		f.kept.touch()
+	}
 	for i := range f.items {
 		it := &f.items[i]
 		changed := false
@@ -178,10 +183,14 @@ func (f *Form) Update(gtx layout.Context) bool {
 		if changed {
 			f.dirty = true
 			f.kept.touch()
+			if it.mark != nil && it.mark.info == "" {
+				it.mark = nil // the user's own text now
+			}
 		}
 	}
 	if f.kept.restore(f) {
 		f.dirty = true
+		f.retake()
 	}
 	if !f.dirty {
 		return false
@@ -224,69 +233,18 @@ func (f *Form) Compute() {
 	f.share()
 }
 
-// share carries the values of shared inputs to the Bench.
-func (f *Form) share() {
-	b := f.env.Bench
-	v := f.result.Values
-	for _, it := range f.items {
-		if !v.Has(it.in.Key) {
-			continue
-		}
-		switch it.in.Share {
-		case sheet.ShareGas:
-			b.SetGas(it.text())
-		case sheet.ShareTemperature:
-			b.SetTemperature(v.SI(it.in.Key))
-		case sheet.SharePressure:
-			b.SetPressure(v.SI(it.in.Key))
-		case sheet.ShareFrequency:
-			b.SetFrequency(v.SI(it.in.Key), f.Sheet.Title)
-		}
-	}
-}
+// share carries the values of shared inputs to the Bench (carry_form.go).
+func (f *Form) share() { f.shareCarried() }
 
-// Enter takes the shared values the Bench holds into the inputs that share
-// them, where they differ, and reports whether anything changed.
+// Enter takes the values the Bench holds into the inputs that take them,
+// where they differ, marking each with where it came from
+// (carry_form.go), and reports whether anything changed.
 func (f *Form) Enter() bool {
-	b := f.env.Bench
-	changed := false
-	for i := range f.items {
-		it := &f.items[i]
-		switch it.in.Share {
-		case sheet.ShareGas:
-			if it.gas != nil && b.Gas != "" && b.Gas != it.gas.Text() && it.gas.SetText(b.Gas) == nil {
-				changed = true
-			}
-		case sheet.ShareTemperature:
-			changed = takeValue(it.field, b.Temperature, units.Format(b.Temperature, units.DimTemperature)) || changed
-		case sheet.SharePressure:
-			changed = takeValue(it.field, b.Pressure, formatPressure(b.Pressure)) || changed
-		case sheet.ShareFrequency:
-			text := units.Format(b.Frequency, units.DimFrequency)
-			if b.FrequencyPM > 0 && it.in.PM {
-				// a measured frequency arrives with its ±
-				text = units.FormatPM(b.Frequency, b.FrequencyPM, units.DimFrequency)
-			}
-			changed = takeValue(it.field, b.Frequency, text) || changed
-		}
-	}
+	changed := f.takeCarried()
 	if changed {
 		f.dirty = true
 	}
 	return changed
-}
-
-// takeValue sets fd to text when the Bench value v is set and differs from
-// the field's.
-func takeValue(fd *Field, v float64, text string) bool {
-	if fd == nil || v <= 0 {
-		return false
-	}
-	if cur, ok := fd.Value(); ok && near(cur, v) {
-		return false
-	}
-	fd.SetText(text)
-	return true
 }
 
 // Inputs returns the input widgets in order, advanced ones last.
@@ -308,6 +266,11 @@ func (f *Form) Inputs() []layout.Widget {
 func (f *Form) InputWidget(key string) layout.Widget { return f.item(key).widget(f.env) }
 
 func (it *formItem) widget(env *Env) layout.Widget {
+	return it.markedWidget(env, it.plainWidget(env))
+}
+
+// plainWidget is the input's widget without its carry mark.
+func (it *formItem) plainWidget(env *Env) layout.Widget {
 	switch {
 	case it.gas != nil:
 		return it.gas.Layout
@@ -325,7 +288,7 @@ func (it *formItem) widget(env *Env) layout.Widget {
 // Outputs returns the results card, the cautions (when there are any),
 // the result's notes and the calculator's model note.
 func (f *Form) Outputs() []layout.Widget {
-	ws := []layout.Widget{f.Results.Layout, f.CautionWidget}
+	ws := []layout.Widget{f.resultCard, f.CautionWidget}
 	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 		if f.result == nil || len(f.result.Notes) == 0 {
 			return layout.Dimensions{}

@@ -2,11 +2,8 @@ package ui
 
 import (
 	"gioui.org/layout"
-	"gioui.org/widget"
-	"gioui.org/widget/material"
 
 	"tubewright/calc/sheet"
-	"tubewright/calc/units"
 )
 
 // resonanceScreen is "Tube resonance", built from its description in
@@ -14,16 +11,15 @@ import (
 // target frequency), a tube of hot and cold zones, or a Helmholtz
 // resonator. It shows only the inputs of the resonator chosen, edits the
 // zones one field each, draws the frequency against the gas temperature
-// (or the sweep asked for) and carries the frequency to other screens.
+// (or the sweep asked for) and carries the frequency and the tube to
+// other screens (carry_screens.go).
 type resonanceScreen struct {
-	env     *Env
-	page    *Page
-	side    *Page
-	form    *Form
-	zones   *zoneEditor
-	plot    *Plot
-	carry   widget.Clickable
-	carried string
+	env   *Env
+	page  *Page
+	side  *Page
+	form  *Form
+	zones *zoneEditor
+	plot  *Plot
 	// stash holds the texts of hidden inputs by key (see hideInputs).
 	stash map[string]string
 }
@@ -33,6 +29,7 @@ func newResonanceScreen(env *Env) Screen {
 	s := &resonanceScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
 		stash: map[string]string{}}
 	s.zones = newZoneEditor(env, s.form)
+	s.form.cs.shown = s.inputKeys
 	s.plot.Height = 240
 	return s
 }
@@ -57,36 +54,13 @@ func (s *resonanceScreen) update(gtx layout.Context) {
 		changed = s.form.Update(gtx) || changed
 	}
 	if changed {
-		s.carried = ""
+		s.publish()
 		if res := s.form.Result(); res != nil && s.kind() == sheet.ResonatorZones {
 			showModes(s.form.Results, res)
 		}
 		s.plot.Set(curveChart(sheet.ResonanceCurve(s.form.Result())))
 	}
 	s.zones.sync()
-	if s.carry.Clicked(gtx) {
-		if f := s.frequency(); f > 0 {
-			s.env.Bench.SetFrequency(f, s.Title())
-			s.carried = "Carried over: " + units.Format(f, units.DimFrequency) + ". The penetration-depth and stack screens will offer it."
-		}
-	}
-}
-
-// frequency is the resonance frequency of the result (Hz): the one solved
-// for, the lowest mode of a zoned tube, or the target frequency a length
-// was solved for; 0 when there is no result.
-func (s *resonanceScreen) frequency() float64 {
-	res := s.form.Result()
-	if res == nil {
-		return 0
-	}
-	if row, ok := res.Row("frequency"); ok {
-		return row.Value
-	}
-	if _, ok := res.Row("length"); ok {
-		return res.Values.SI("frequency")
-	}
-	return 0
 }
 
 // inputKeys lists the inputs of the resonator chosen, in order; the zone
@@ -119,26 +93,7 @@ func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 	}
 	out := s.form.Outputs()
 	outputs := append([]layout.Widget{}, out[:2]...)
-	outputs = append(outputs, s.carryWidget, s.plot.Layout)
+	outputs = append(outputs, s.plot.Layout)
 	outputs = append(outputs, out[2:]...)
 	return splitLayout(gtx, s.env, s.page, s.side, formHeadline(s.env, s.form), inputs, outputs)
-}
-
-// carryWidget is the button that carries the frequency to other screens,
-// and what it carried.
-func (s *resonanceScreen) carryWidget(gtx layout.Context) layout.Dimensions {
-	if s.frequency() == 0 {
-		return layout.Dimensions{}
-	}
-	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return material.Button(s.env.Theme, &s.carry, "Use this frequency on other screens").Layout(atTarget(gtx))
-		}),
-		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			if s.carried == "" {
-				return layout.Dimensions{}
-			}
-			return layout.Inset{Top: 6}.Layout(gtx, Note(s.env, s.carried))
-		}),
-	)
 }

@@ -55,7 +55,8 @@ func headline(env *Env, label, value string) layout.Widget {
 }
 
 // formHeadline is the headline of a form's first result row: its label
-// and its value as the results card shows it.
+// and its value as the results card shows it, with the operating point it
+// was worked out at beneath (see withPoint).
 func formHeadline(env *Env, f *Form) layout.Widget {
 	res := f.Result()
 	if res == nil || len(res.Rows) == 0 {
@@ -63,7 +64,7 @@ func formHeadline(env *Env, f *Form) layout.Widget {
 	}
 	row := res.Rows[0]
 	value, _ := f.Results.Value(row.Label)
-	return headline(env, row.Label, value)
+	return withPoint(f, headline(env, row.Label, value))
 }
 
 // curveChart draws a calculator's curve with its result marked; nil when

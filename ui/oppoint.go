@@ -1,0 +1,170 @@
+package ui
+
+import (
+	"regexp"
+	"strings"
+
+	"gioui.org/layout"
+	"gioui.org/widget/material"
+
+	"tubewright/calc/sheet"
+	"tubewright/calc/units"
+)
+
+// carryState is what a Form keeps about carried values and the operating
+// point line.
+type carryState struct {
+	// entered is set once the screen took values from the Bench, so that
+	// values carried in before the storage loaded win over the kept ones.
+	entered bool
+	// headed is set when a headline shows the operating point, so that the
+	// results card does not repeat it.
+	headed bool
+	// shown lists the inputs on screen (nil: all); hidden inputs are left
+	// out of the operating point.
+	shown func() []string
+	// point, when set, writes the operating point instead of the Form's
+	// inputs (the device screens, whose point is in the device).
+	point func() string
+}
+
+// opKinds are the values of an operating point, in the order the line
+// names them.
+var opKinds = []carryKind{carryGas, carryPressure, carryTemperature, carryFrequency}
+
+// opPart is one value of the operating point: what it is, as shown, and
+// the screen it came from ("" when typed here).
+type opPart struct {
+	kind  carryKind
+	value string
+	from  string
+}
+
+// exponent finds a number written with an exponent ("1e5"), which the
+// screen never shows.
+var exponent = regexp.MustCompile(`\d[eE][-+]?\d`)
+
+// OperatingPoint returns the line that says at which gas, pressure,
+// temperature and frequency the result was worked out and where each came
+// from, e.g. "At helium, 10 bar, 300 K, 400 Hz · frequency from Tube
+// resonance, the rest typed here"; "" when there is no result.
+func (f *Form) OperatingPoint() string {
+	if f.result == nil {
+		return ""
+	}
+	if f.cs.point != nil {
+		return f.cs.point()
+	}
+	return pointLine(f.pointParts(), "typed here")
+}
+
+// pointParts are the operating-point values of the Form's inputs shown,
+// in the order of opKinds.
+func (f *Form) pointParts() []opPart {
+	var shown map[string]bool
+	if f.cs.shown != nil {
+		shown = map[string]bool{}
+		for _, k := range f.cs.shown() {
+			shown[k] = true
+		}
+	}
+	v := f.result.Values
+	var parts []opPart
+	for _, k := range opKinds {
+		for i := range f.items {
+			it := &f.items[i]
+			key := it.in.Key
+			fk := f.kind(it)
+			if fk == carryMeasured {
+				fk = carryFrequency
+			}
+			if fk != k || (shown != nil && !shown[key]) || !v.Has(key) {
+				continue
+			}
+			p := opPart{kind: k, value: shownValue(v.Get(key)), from: it.carriedFrom()}
+			parts = append(parts, p)
+			break
+		}
+	}
+	return parts
+}
+
+// shownValue writes an input's value for the operating point: as typed
+// when that reads plainly, else formatted with its unit.
+func shownValue(val *sheet.Value) string {
+	if val.In.Kind == sheet.Gas {
+		return val.Mix.String()
+	}
+	t := strings.TrimSpace(val.Text)
+	if t != "" && !exponent.MatchString(t) && strings.ContainsAny(t, "abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ°") {
+		return t
+	}
+	if w := writtenIn(val.Q.Value, val.In.Dim); len(w) > 0 {
+		return w[0]
+	}
+	return units.Format(val.Q.Value, val.In.Dim)
+}
+
+// pointLine joins the parts into the operating-point line; rest says
+// where the values without a source came from ("typed here").
+func pointLine(parts []opPart, rest string) string {
+	if len(parts) == 0 {
+		return ""
+	}
+	vals := make([]string, len(parts))
+	var srcs []string
+	carried := 0
+	for i, p := range parts {
+		vals[i] = p.value
+		if p.from != "" {
+			srcs = append(srcs, string(p.kind)+" from "+p.from)
+			carried++
+		}
+	}
+	line := "At " + strings.Join(vals, ", ") + " · "
+	switch {
+	case carried == 0:
+		return line + "all " + rest
+	case carried == len(parts):
+		return line + strings.Join(srcs, ", ")
+	}
+	return line + strings.Join(srcs, ", ") + ", the rest " + rest
+}
+
+// PointWidget draws the operating-point line, or nothing without a
+// result. It is described "Operating point" for tests and screen readers.
+func (f *Form) PointWidget(gtx layout.Context) layout.Dimensions {
+	line := f.OperatingPoint()
+	if line == "" {
+		return layout.Dimensions{}
+	}
+	l := material.Body2(f.env.Theme, line)
+	l.Color = f.env.Colors.Text
+	return Described("Operating point", l.Layout)(gtx)
+}
+
+// resultCard is the results card with the operating point on top, unless
+// a headline already shows it.
+func (f *Form) resultCard(gtx layout.Context) layout.Dimensions {
+	if f.cs.headed || f.OperatingPoint() == "" {
+		return f.Results.Layout(gtx)
+	}
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(f.PointWidget),
+		layout.Rigid(layout.Spacer{Height: 6}.Layout),
+		layout.Rigid(f.Results.Layout),
+	)
+}
+
+// withPoint draws the headline w with the Form's operating point under it;
+// the results card then leaves the point out.
+func withPoint(f *Form, w layout.Widget) layout.Widget {
+	f.cs.headed = true
+	return func(gtx layout.Context) layout.Dimensions {
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+			layout.Rigid(w),
+			layout.Rigid(layout.Spacer{Height: 4}.Layout),
+			layout.Rigid(f.PointWidget),
+		)
+	}
+}
