@@ -122,6 +122,7 @@ func carryText(in *sheet.Input, c Carried) string {
 	if c.Text != "" {
 		cands = append(cands, c.Text, withoutPM(c.Text))
 	}
+	exact := len(cands) // the first ones are the text as given
 	if c.PM > 0 && in.PM {
 		cands = append(cands, units.FormatPM(c.SI, c.PM, in.Dim))
 	}
@@ -132,7 +133,7 @@ func carryText(in *sheet.Input, c Carried) string {
 			continue
 		}
 		tol := 1e-9
-		if i > 0 {
+		if i >= exact {
 			tol = 1e-3 // written with 4 significant digits
 		}
 		if math.Abs(v.Q.Value-c.SI) <= tol*math.Abs(c.SI) {
