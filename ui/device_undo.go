@@ -162,12 +162,15 @@ func (e *deviceEditor) removedBar(gtx layout.Context) layout.Dimensions {
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
 	return Described("Part removed", func(gtx layout.Context) layout.Dimensions {
 		return background(gtx, env.Colors.Selected, env.Colors.Outline, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
+			gtx.Constraints.Min.X = gtx.Constraints.Max.X
 			return layout.UniformInset(10).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				return keepFlow(gtx,
+				dims := keepFlow(gtx,
 					keepMessage(env, "Removed part", u.what, false),
 					func(gtx layout.Context) layout.Dimensions {
 						return keepButton(env, gtx, &u.button, "Undo", true)
 					})
+				dims.Size.X = max(dims.Size.X, gtx.Constraints.Min.X)
+				return dims
 			})
 		})
 	})(gtx)
