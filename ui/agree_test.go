@@ -27,6 +27,9 @@ type agreeCase struct {
 	// errKey, when set, is the input the case's error must name: the app
 	// marks that field, the terminal names that flag.
 	errKey string
+	// taps are chips the app's screen needs tapped before the texts are
+	// typed (a radius instead of a diameter); the terminal has flags.
+	taps []string
 }
 
 // agreeCases are the cases of every calculator; each calculator's cases
@@ -133,6 +136,10 @@ func runApp(t *testing.T, s *sheet.Sheet, c agreeCase) *Form {
 	}
 	f := scr.Form()
 	h := newHarness(t, image.Pt(1000, 9000), scr.Layout)
+	for _, label := range c.taps {
+		h.tap(label)
+		h.frames(2)
+	}
 	for _, in := range s.Inputs {
 		text, ok := c.texts[in.Key]
 		if !ok {

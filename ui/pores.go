@@ -5,7 +5,9 @@ import (
 
 	"gioui.org/layout"
 
+	"tubewright/calc/linear"
 	"tubewright/calc/sheet"
+	"tubewright/calc/units"
 )
 
 // poresScreen is the pores-and-packing calculator built from its
@@ -23,13 +25,20 @@ type poresScreen struct {
 	packing *Choice
 	// stash holds the texts of hidden geometry inputs by key.
 	stash map[string]string
+	// halves says, by shape, whether its sizes are typed whole (a gap, a
+	// diameter) or as their half (a half gap, a radius).
+	halves map[string]*Choice
 }
 
 // newPoresScreen builds the pores-and-packing screen.
 func newPoresScreen(env *Env) Screen {
 	d, _ := sheet.Lookup(sheet.IDPores)
 	s := &poresScreen{env: env, page: NewPage(env), form: NewForm(env, d), stash: map[string]string{},
-		packing: NewChoice(env, "Fibre packing given by", []string{"fraction", "mass"}, []string{"Solid fraction", "Packed mass"})}
+		packing: NewChoice(env, "Fibre packing given by", []string{"fraction", "mass"}, []string{"Solid fraction", "Packed mass"}),
+		halves:  map[string]*Choice{}}
+	for shape, chips := range poreHalfChips {
+		s.halves[shape] = NewChoice(env, "Sizes given as", []string{sizeWhole, sizeHalf}, chips[:])
+	}
 	s.sync()
 	return s
 }
@@ -47,7 +56,15 @@ func (s *poresScreen) Enter() { s.form.Enter() }
 // and gives back the texts of those shown again; it reports whether
 // anything changed.
 func (s *poresScreen) sync() bool {
-	shown := poreFieldsShown(s.form.Text("shape"), s.packing.Selected(), s.form.Text("material"))
+	// A half typed with no whole beside it (kept inputs, a setup) shows
+	// as the half rather than hiding behind an empty whole.
+	shape := s.form.Text("shape")
+	for _, p := range poreHalves[shape] {
+		if c := s.halves[shape]; !s.half(shape) && s.form.Text(p.whole) == "" && s.form.Text(p.half) != "" {
+			c.Select(sizeHalf)
+		}
+	}
+	shown := s.shown()
 	changed := false
 	for _, key := range poreGeometryKeys(s.form.Sheet) {
 		in := s.form.Sheet.Input(key)
@@ -67,9 +84,75 @@ func (s *poresScreen) sync() bool {
 	return changed
 }
 
+// half reports whether the shape's sizes are typed as their half.
+func (s *poresScreen) half(shape string) bool {
+	c := s.halves[shape]
+	return c != nil && c.Selected() == sizeHalf
+}
+
+// shown lists the geometry inputs shown for the current choices.
+func (s *poresScreen) shown() []string {
+	shape := s.form.Text("shape")
+	return poreFieldsShown(shape, s.packing.Selected(), s.form.Text("material"), s.half(shape))
+}
+
+// switchHalves converts the sizes of shape to the form just chosen (a gap
+// to its half gap, a radius to its diameter), so the size never changes
+// by a factor of two; it reports whether it did.
+func (s *poresScreen) switchHalves(gtx layout.Context, shape string) bool {
+	c := s.halves[shape]
+	if c == nil || !c.Update(gtx) {
+		return false
+	}
+	for _, p := range poreHalves[shape] {
+		from, to, k := p.whole, p.half, 0.5
+		if !s.half(shape) {
+			from, to, k = p.half, p.whole, 2
+		}
+		t := s.form.Text(from)
+		if w, ok := linear.ScaleLength(t, k); ok {
+			t = w
+		}
+		s.form.SetText(to, t)
+		s.form.SetText(from, "")
+		delete(s.stash, from)
+		delete(s.stash, to)
+	}
+	return true
+}
+
+// both is the line under a size: the whole and the half together, "gap
+// 2y0 = 0.5 mm (half gap y0 = 0.25 mm)"; empty when the text does not read.
+func (s *poresScreen) both(shape, key string) layout.Widget {
+	return func(gtx layout.Context) layout.Dimensions {
+		for _, p := range poreHalves[shape] {
+			if key != p.whole && key != p.half {
+				continue
+			}
+			q, err := units.Parse(s.form.Text(key), units.DimLength)
+			if err != nil || !(q.Value > 0) || q.Uncertainty != 0 {
+				return layout.Dimensions{}
+			}
+			w := q.Value
+			if key == p.half {
+				w *= 2
+			}
+			text := p.wholeWords + " " + lengthWords(w) + " (" + p.halfWords + " " + lengthWords(w/2) + ")"
+			if shape == "plates" {
+				text = linear.GapWords(w / 2)
+			}
+			return Described("Both sizes of "+key, Note(s.env, text))(gtx)
+		}
+		return layout.Dimensions{}
+	}
+}
+
 // Layout implements Screen.
 func (s *poresScreen) Layout(gtx layout.Context) layout.Dimensions {
 	picked := s.packing.Update(gtx)
+	if s.switchHalves(gtx, s.form.Text("shape")) {
+		picked = true
+	}
 	s.form.Update(gtx)
 	if s.sync() || picked {
 		s.form.Update(gtx)
@@ -80,8 +163,11 @@ func (s *poresScreen) Layout(gtx layout.Context) layout.Dimensions {
 	if shape == "fibres" {
 		ws = append(ws, s.packing.Layout)
 	}
-	for _, key := range poreFieldsShown(shape, s.packing.Selected(), f.Text("material")) {
-		ws = append(ws, f.InputWidget(key))
+	if c := s.halves[shape]; c != nil {
+		ws = append(ws, c.Layout)
+	}
+	for _, key := range s.shown() {
+		ws = append(ws, f.InputWidget(key), s.both(shape, key))
 	}
 	ws = append(ws, f.Outputs()...)
 	ws = append(ws, Heading(s.env, "Gas and operating point"))

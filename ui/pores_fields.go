@@ -3,20 +3,27 @@ package ui
 import "tubewright/calc/sheet"
 
 // poreFieldsShown lists the geometry inputs the pores screen shows for a
-// shape: the full sizes people measure (a gap, a diameter), the mesh count
-// in any unit, and for fibres either the solid fraction or the packed
-// mass, volume and material (with its density for material "other"). The
-// half sizes and the mesh per mm are the terminal's alternatives.
-func poreFieldsShown(shape, packing, material string) []string {
+// shape: the whole sizes people measure (a gap, a diameter) or, with half
+// set, their halves (a half gap, a radius), the mesh count in any unit,
+// and for fibres either the solid fraction or the packed mass, volume and
+// material (with its density for material "other"). The mesh per mm is
+// the terminal's alternative.
+func poreFieldsShown(shape, packing, material string, half bool) []string {
+	pick := func(whole, halfKey string) string {
+		if half {
+			return halfKey
+		}
+		return whole
+	}
 	switch shape {
 	case "plates":
-		return []string{"gap", "plate-thickness"}
+		return []string{pick("gap", "half-gap"), "plate-thickness"}
 	case "circular":
-		return []string{"diameter"}
+		return []string{pick("diameter", "radius")}
 	case "rectangular":
-		return []string{"width", "height"}
+		return []string{pick("width", "half-width"), pick("height", "half-height")}
 	case "pins":
-		return []string{"pin-diameter", "pitch"}
+		return []string{pick("pin-diameter", "pin-radius"), "pitch"}
 	case "screens":
 		return []string{"mesh-per-inch", "wire-diameter", "porosity"}
 	case "fibres":
@@ -44,4 +51,22 @@ func poreGeometryKeys(d *sheet.Sheet) []string {
 		keys = append(keys, sheet.PoreShapeInputs(c.Key)...)
 	}
 	return keys
+}
+
+// poreHalves are the sizes the pores screen offers whole or as their half,
+// by shape: the whole key, the half key, and the words of both for the
+// line under the field ("gap 2y0", "half gap y0").
+var poreHalves = map[string][]struct{ whole, half, wholeWords, halfWords string }{
+	"plates":      {{"gap", "half-gap", "gap 2y0", "half gap y0"}},
+	"circular":    {{"diameter", "radius", "Ø", "radius"}},
+	"rectangular": {{"width", "half-width", "width", "half width"}, {"height", "half-height", "height", "half height"}},
+	"pins":        {{"pin-diameter", "pin-radius", "pin Ø", "pin radius"}},
+}
+
+// poreHalfChips are the chips of the whole-or-half choice by shape.
+var poreHalfChips = map[string][2]string{
+	"plates":      {"Gap 2y0", "Half gap y0"},
+	"circular":    {"Diameter", "Radius"},
+	"rectangular": {"Width and height", "Halves"},
+	"pins":        {"Pin diameter", "Pin radius"},
 }

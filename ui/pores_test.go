@@ -33,11 +33,11 @@ func TestPoresScreen(t *testing.T) {
 	}
 
 	// a tighter gap: too tight, and the suggestion says what gap would do
-	h.retype("Gap between plates", "0.5 mm", "0.1 mm")
+	h.retype("Gap between plates 2y0", "0.5 mm", "0.1 mm")
 	if got, _ := h.shown("Verdict for a stack"); !strings.Contains(got, "too tight") {
 		t.Fatalf("verdict after 0.1 mm gap: %q", got)
 	}
-	if got, _ := h.shown("What would hit the aim"); !strings.Contains(got, "plate spacing (gap)") {
+	if got, _ := h.shown("What would hit the aim"); !strings.Contains(got, "plates with gap 2y0 = ") || !strings.Contains(got, "(half gap y0 = ") {
 		t.Fatalf("suggestion after 0.1 mm gap: %q", got)
 	}
 
@@ -51,7 +51,7 @@ func TestPoresScreen(t *testing.T) {
 	if got, _ := h.shown("What would hit the aim"); !strings.Contains(got, "mesh per inch") {
 		t.Fatalf("suggestion for screens: %q", got)
 	}
-	if _, ok := h.byDesc("Gap between plates"); ok {
+	if _, ok := h.byDesc("Gap between plates 2y0"); ok {
 		t.Error("the plates' gap is still shown for screens")
 	}
 	screens, _ := pore.Screens(200/0.0254, 41e-6, 0)

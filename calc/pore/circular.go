@@ -42,7 +42,9 @@ func CircularPores(radius, porosity float64) (Shape, error) {
 
 func (c *circular) HydraulicRadius() float64 { return c.r / 2 }
 func (c *circular) Porosity() float64        { return c.phi }
-func (c *circular) Describe() string         { return "circular pores, radius " + mm(c.r) }
+func (c *circular) Describe() string {
+	return "round pores, diameter " + mm(2*c.r) + " (radius " + mm(c.r) + ")"
+}
 
 func (c *circular) F(delta float64) complex128 {
 	if badDelta(delta) {

@@ -48,7 +48,7 @@ func PlatesFromPitch(pitch, thickness float64) (Shape, error) {
 func (p *plates) HydraulicRadius() float64 { return p.y0 }
 func (p *plates) Porosity() float64        { return p.y0 / (p.y0 + p.half) }
 func (p *plates) Describe() string {
-	return "parallel plates, gap " + mm(2*p.y0) + ", plate thickness " + mm(2*p.half)
+	return "parallel plates, gap 2y0 = " + mm(2*p.y0) + " (half gap y0 = " + mm(p.y0) + "), plate thickness " + mm(2*p.half)
 }
 
 func (p *plates) F(delta float64) complex128 {

@@ -153,9 +153,9 @@ func suggest(s Shape, t float64) string {
 	aim := "To aim for r_h = " + mm(t)
 	switch p := s.(type) {
 	case *plates:
-		return aim + ": plate spacing (gap) " + mm(2*t) + ", keeping the plate thickness " + mm(2*p.half) + "."
+		return aim + ": plates with gap 2y0 = " + mm(2*t) + " (half gap y0 = " + mm(t) + "), keeping the plate thickness " + mm(2*p.half) + "."
 	case *circular:
-		return aim + ": pore diameter " + mm(4*t) + "."
+		return aim + ": pore diameter " + mm(4*t) + " (radius " + mm(2*t) + ")."
 	case *rectangular:
 		k := t / p.HydraulicRadius()
 		return aim + ": channels " + mm(2*p.a*k) + " × " + mm(2*p.b*k) + " (same aspect ratio)."

@@ -2,7 +2,9 @@ package sheet
 
 import (
 	"fmt"
+	"strings"
 
+	"tubewright/calc/linear"
 	"tubewright/calc/pore"
 	"tubewright/calc/units"
 )
@@ -57,8 +59,8 @@ func runDepths(v *Values) (*Result, error) {
 		{"thermal_penetration_depth", "Thermal penetration depth δκ", "mm", ""},
 		{"viscous_penetration_depth", "Viscous penetration depth δν", "mm", ""},
 		{"wavelength", "Wavelength", "", ""},
-		{"stack_plate_gap_low", fmt.Sprintf("Stack plate gap, narrow end (%g δκ)", 2*stack.Low), "mm", depthsStackNote},
-		{"stack_plate_gap_high", fmt.Sprintf("Stack plate gap, wide end (%g δκ)", 2*stack.High), "mm", ""},
+		{"stack_plate_gap_low", fmt.Sprintf("Stack plate gap 2y0, narrow end (%g δκ; half gap y0 = %g δκ)", 2*stack.Low, stack.Low), "mm", depthsStackNote},
+		{"stack_plate_gap_high", fmt.Sprintf("Stack plate gap 2y0, wide end (%g δκ; half gap y0 = %g δκ)", 2*stack.High, stack.High), "mm", ""},
 		{"regenerator_hydraulic_radius_low", fmt.Sprintf("Regenerator hydraulic radius, narrow end (%g δκ)", regen.Low), "mm", depthsRegenNote},
 		{"regenerator_hydraulic_radius_high", fmt.Sprintf("Regenerator hydraulic radius, wide end (%g δκ)", regen.High), "mm", ""},
 	}
@@ -69,6 +71,9 @@ func runDepths(v *Values) (*Result, error) {
 		}
 		added := r.AddPM(row.key, row.label, vals[k], sig[k], units.DimLength)
 		added.Show, added.Note = row.show, row.note
+		if k == 3 || k == 4 { // the plate gaps: the half gap beside them
+			added.Note = strings.TrimSuffix(linear.GapWords(vals[k]/2)+"; "+row.note, "; ")
+		}
 	}
 	r.Add("viscous_over_thermal_depth", "δν / δκ (= √Prandtl)", op.DN/op.DK, units.DimNone)
 	r.Add("prandtl", "Prandtl number", op.Props.Prandtl, units.DimNone)
