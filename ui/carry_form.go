@@ -13,6 +13,7 @@ import (
 // before, which Undo puts back.
 type carryMark struct {
 	from string // title of the screen the value came from
+	what string // what the value is there, when the field's label does not say
 	text string // the text the carry set
 	prev string // the text before the carry, for Undo
 	undo widget.Clickable
@@ -91,7 +92,7 @@ func (f *Form) takeCarried() bool {
 		if from == "" {
 			from = "another screen"
 		}
-		it.mark = &carryMark{from: from, text: it.text(), prev: prev}
+		it.mark = &carryMark{from: from, what: carryWhat[k], text: it.text(), prev: prev}
 		changed = true
 	}
 	return changed
@@ -183,4 +184,13 @@ func (it *formItem) carriedFrom() string {
 		return m.from
 	}
 	return ""
+}
+
+// carryWhat says what a carried value was on the screen it came from,
+// where the field that takes it names something else (an engine's fill
+// pressure arrives as a design pressure to start from).
+var carryWhat = map[carryKind]string{
+	carryRigPressure: "the engine's cold fill pressure; it rises as the engine heats, so design above it",
+	carryRigRadius:   "half the engine's widest duct",
+	carryRigVolume:   "the gas the engine's parts hold",
 }

@@ -35,7 +35,11 @@ func (it *formItem) markedWidget(env *Env, w layout.Widget) layout.Widget {
 				gtx.Constraints.Max.X = min(gtx.Constraints.Max.X, gtx.Dp(fieldWidth))
 				return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
 					layout.Flexed(1, Described(label+" carried", func(gtx layout.Context) layout.Dimensions {
-						l := material.Body2(env.Theme, "from "+m.from)
+						text := "from " + m.from
+						if m.what != "" {
+							text += ": " + m.what
+						}
+						l := material.Body2(env.Theme, text)
 						l.Color = env.Colors.Text
 						l.Font.Weight = 600
 						return l.Layout(gtx)

@@ -47,7 +47,7 @@ var exponent = regexp.MustCompile(`\d[eE][-+]?\d`)
 // OperatingPoint returns the line that says at which gas, pressure,
 // temperature and frequency the result was worked out and where each came
 // from, e.g. "At helium, 10 bar, 300 K, 400 Hz · frequency from Tube
-// resonance, the rest typed here"; "" when there is no result.
+// resonance; the rest set here"; "" when there is no result.
 func (f *Form) OperatingPoint() string {
 	if f.result == nil {
 		return ""
@@ -55,7 +55,7 @@ func (f *Form) OperatingPoint() string {
 	if f.cs.point != nil {
 		return f.cs.point()
 	}
-	return pointLine(f.pointParts(), "typed here")
+	return pointLine(f.pointParts(), "set here")
 }
 
 // pointParts are the operating-point values of the Form's inputs shown,
@@ -105,30 +105,48 @@ func shownValue(val *sheet.Value) string {
 	return units.Format(val.Q.Value, val.In.Dim)
 }
 
-// pointLine joins the parts into the operating-point line; rest says
-// where the values without a source came from ("typed here").
+// pointLine joins the parts into the operating-point line, naming each
+// source once ("temperature and frequency from Tube resonance"); rest
+// says where the values without a source came from ("set here").
 func pointLine(parts []opPart, rest string) string {
 	if len(parts) == 0 {
 		return ""
 	}
 	vals := make([]string, len(parts))
-	var srcs []string
+	var froms []string
+	kinds := map[string][]string{}
 	carried := 0
 	for i, p := range parts {
 		vals[i] = p.value
-		if p.from != "" {
-			srcs = append(srcs, string(p.kind)+" from "+p.from)
-			carried++
+		if p.from == "" {
+			continue
 		}
+		if _, ok := kinds[p.from]; !ok {
+			froms = append(froms, p.from)
+		}
+		kinds[p.from] = append(kinds[p.from], string(p.kind))
+		carried++
+	}
+	srcs := make([]string, len(froms))
+	for i, from := range froms {
+		srcs[i] = andList(kinds[from]) + " from " + from
 	}
 	line := "At " + strings.Join(vals, ", ") + " · "
 	switch {
 	case carried == 0:
 		return line + "all " + rest
 	case carried == len(parts):
-		return line + strings.Join(srcs, ", ")
+		return line + strings.Join(srcs, "; ")
 	}
-	return line + strings.Join(srcs, ", ") + ", the rest " + rest
+	return line + strings.Join(srcs, "; ") + "; the rest " + rest
+}
+
+// andList joins words as people do: "a", "a and b", "a, b and c".
+func andList(w []string) string {
+	if len(w) < 2 {
+		return strings.Join(w, "")
+	}
+	return strings.Join(w[:len(w)-1], ", ") + " and " + w[len(w)-1]
 }
 
 // PointWidget draws the operating-point line, or nothing without a
