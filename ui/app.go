@@ -21,14 +21,8 @@ import (
 //	go build -ldflags "-X tubewright/ui.Version=1.2.3" ./cmd/tubewright
 var Version = "dev"
 
-// wideAt is the window width from which the catalog stays beside the screen
-// (a tablet held upright, 768 dp, gets the single column).
-const wideAt = unit.Dp(840)
-
-// sideWidth is the width of the catalog beside the screen on wide windows.
-const sideWidth = unit.Dp(320)
-
-// readable is the widest a screen's column grows on large windows.
+// readable is the widest a single column grows on large windows (see
+// Page.Layout).
 const readable = unit.Dp(760)
 
 // App is the whole user interface: the catalog, the back stack of open
@@ -41,6 +35,7 @@ type App struct {
 	list    widget.List
 	back    widget.Clickable
 	theme   themeToggle
+	side    sideToggle
 	welcome *Page
 }
 
@@ -150,6 +145,7 @@ func (a *App) update(gtx layout.Context) {
 		a.Back()
 	}
 	a.theme.update(gtx, a.env)
+	a.side.update(gtx, gtx.Constraints.Max)
 	for i := range a.entries {
 		if a.entries[i].Clicked(gtx) {
 			a.openRoot(catalog[i].ID)
@@ -178,23 +174,26 @@ func (a *App) update(gtx layout.Context) {
 	}
 }
 
-// Layout handles events and draws the app into the whole window.
+// Layout handles events and draws the app into the whole window: the top
+// bar, and below it the catalog beside the screen on wide windows (unless
+// hidden), or the screen alone (the catalog when none is open).
 func (a *App) Layout(gtx layout.Context) layout.Dimensions {
 	a.update(gtx)
 	fill(gtx, a.env.Colors.Background, gtx.Constraints.Max)
 	gtx.Constraints.Min = gtx.Constraints.Max
-	wide := gtx.Constraints.Max.X >= gtx.Dp(wideAt)
+	window := gtx.Constraints.Max
+	wide := a.side.beside(gtx, window)
 	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-		layout.Rigid(a.layoutBar),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions { return a.layoutBar(gtx, window) }),
 		layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
 			gtx.Constraints.Min = gtx.Constraints.Max
 			if !wide {
 				if s := a.Screen(a.Current()); s != nil {
-					return a.layoutScreen(gtx, s)
+					return a.layoutCentred(gtx, s)
 				}
 				return a.layoutCatalog(gtx, true)
 			}
-			side := gtx.Dp(sideWidth)
+			side := sideWidth(gtx, window.X)
 			return layout.Flex{}.Layout(gtx,
 				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 					gtx.Constraints = layout.Exact(image.Pt(side, gtx.Constraints.Max.Y))
@@ -208,23 +207,31 @@ func (a *App) Layout(gtx layout.Context) layout.Dimensions {
 				}),
 				layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
 					gtx.Constraints.Min = gtx.Constraints.Max
-					return layout.N.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						w := min(gtx.Constraints.Max.X, gtx.Dp(readable))
-						gtx.Constraints = layout.Exact(image.Pt(w, gtx.Constraints.Max.Y))
-						if s := a.Screen(a.Current()); s != nil {
-							return a.layoutScreen(gtx, s)
-						}
-						return a.layoutWelcome(gtx)
-					})
+					if s := a.Screen(a.Current()); s != nil {
+						return a.layoutCentred(gtx, s)
+					}
+					return a.layoutWelcome(gtx)
 				}),
 			)
 		}),
 	)
 }
 
-// layoutBar draws the top bar: Back when a screen is open, the title and
-// the theme button.
-func (a *App) layoutBar(gtx layout.Context) layout.Dimensions {
+// layoutCentred draws the screen s at most screenMax wide, centred in the
+// space it is given.
+func (a *App) layoutCentred(gtx layout.Context, s Screen) layout.Dimensions {
+	gtx.Constraints.Min = gtx.Constraints.Max
+	return layout.N.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		w := min(gtx.Constraints.Max.X, gtx.Dp(screenMax))
+		gtx.Constraints = layout.Exact(image.Pt(w, gtx.Constraints.Max.Y))
+		return a.layoutScreen(gtx, s)
+	})
+}
+
+// layoutBar draws the top bar of a window of size window: Back when a
+// screen is open, the title, the list button (wide windows) and the theme
+// button.
+func (a *App) layoutBar(gtx layout.Context, window image.Point) layout.Dimensions {
 	th := a.env.Theme
 	title := "Tubewright"
 	if s := a.Screen(a.Current()); s != nil {
@@ -266,6 +273,8 @@ func (a *App) layoutBar(gtx layout.Context) layout.Dimensions {
 		})
 	}))
 	children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		return a.side.layout(gtx, a.env, window)
+	}), layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 		return a.theme.layout(gtx, a.env)
 	}))
 	layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)

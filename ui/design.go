@@ -18,7 +18,8 @@ import (
 // opens the design in the Engine onset editor.
 type designScreen struct {
 	env  *Env
-	page *Page
+	page *Page // the one column, or the inputs' column when wide
+	side *Page // the design's column when wide
 	form *Form
 	run  *designRun
 
@@ -62,7 +63,7 @@ func newDesignScreen(env *Env) Screen {
 	if !ok {
 		panic("ui: no design calculator in the catalog")
 	}
-	s := &designScreen{env: env, page: NewPage(env), run: newDesignRun(env),
+	s := &designScreen{env: env, page: NewPage(env), side: NewPage(env), run: newDesignRun(env),
 		head: NewResults(env), parts: NewResults(env), strip: &deviceStrip{env: env}}
 	desc := *base
 	desc.Run = func(v *sheet.Values) (*sheet.Result, error) { return s.run.run(typed(v)) }
@@ -214,19 +215,20 @@ func (s *designScreen) state() designState {
 // the parts, the sensitivity table and the method.
 func (s *designScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	ws := []layout.Widget{
-		Para(s.env, "Say what you want and what you have; the design runs in the background after every change. "+
-			"It places and sizes the stack for the lowest onset and tunes the tube to your frequency."),
-	}
+	intro := Para(s.env, "Say what you want and what you have; the design runs in the background after every change. "+
+		"It places and sizes the stack for the lowest onset and tunes the tube to your frequency.")
 	top, details := s.outcome()
 	heading := "The design"
 	if s.fail {
 		heading = "Nearest design"
 	}
-	ws = append(ws, Heading(s.env, heading))
-	ws = append(ws, top...)
-	ws = append(ws, Heading(s.env, "What you want"))
-	ws = append(ws, s.inputs()...)
-	ws = append(ws, details...)
-	return s.page.Layout(gtx, ws...)
+	top = append([]layout.Widget{Heading(s.env, heading)}, top...)
+	inputs := append([]layout.Widget{Heading(s.env, "What you want")}, s.inputs()...)
+	if splitWide(gtx) {
+		// Beside the design, the intro leads the inputs it is about.
+		inputs = append([]layout.Widget{intro}, inputs...)
+	} else {
+		top = append([]layout.Widget{intro}, top...)
+	}
+	return splitLayout(gtx, s.page, s.side, top, inputs, details)
 }

@@ -248,8 +248,8 @@ func defaultPart(kind, diameter string) linear.PartFile {
 	return p
 }
 
-// Layout draws the editor: the save buttons, the strip, the parts, the add
-// row, and the gas and fill fields.
+// Layout draws the editor: the save buttons, the strip, the parts and the
+// add row (the gas and fill fields are Conditions).
 func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.Widget {
 	e.strip.dev = dev
 	th := e.env.Theme
@@ -285,10 +285,15 @@ func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.W
 			b := material.Button(th, &e.add, "Add part")
 			return b.Layout(atTarget(gtx))
 		},
-		Heading(e.env, "Gas and fill"),
-		e.gas.Layout, e.pressure.Layout, e.ambient.Layout,
 	)
 	return ws
+}
+
+// Conditions returns the fields of the gas and the fill (mean pressure,
+// ambient temperature), which the screens show above the parts, with the
+// other operating conditions.
+func (e *deviceEditor) Conditions() []layout.Widget {
+	return []layout.Widget{e.gas.Layout, e.pressure.Layout, e.ambient.Layout}
 }
 
 // stripLegend says what the strip's shapes and colours mean (see

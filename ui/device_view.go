@@ -20,7 +20,8 @@ import (
 // stale run.
 type deviceView struct {
 	env    *Env
-	page   *Page
+	page   *Page // the one column, or the inputs' column when wide
+	side   *Page // the results' column when wide
 	editor *deviceEditor
 	form   *Form
 	dev    *linear.Device // last valid device, for the strip
@@ -48,6 +49,7 @@ func newDeviceView(env *Env, s *sheet.Sheet, example string, n int) deviceView {
 	v := deviceView{
 		env:    env,
 		page:   NewPage(env),
+		side:   NewPage(env),
 		editor: newDeviceEditor(env, example),
 		form:   NewForm(env, s),
 		job:    NewJob[*deviceTables](env.Invalidate),
@@ -166,16 +168,26 @@ func evaluateWith(ctx context.Context, s *sheet.Sheet, texts map[string]string, 
 	return s.Evaluate(t)
 }
 
-// top returns the first widgets of the screen: the intro, the heading, the
-// results and their cautions, the screen's own inputs (by key), then the
-// example chips and the device editor.
-func (v *deviceView) top(gtx layout.Context, intro, heading string, keys ...string) []layout.Widget {
-	ws := []layout.Widget{Para(v.env, intro), Heading(v.env, heading), v.form.resultCard, v.form.CautionWidget}
-	for _, k := range keys {
-		ws = append(ws, v.form.InputWidget(k))
+// columns returns the widgets of the screen's results column (top: the
+// heading, the results and their cautions) and of its inputs column: the
+// operating conditions (the gas and fill, then the screen's own inputs,
+// by key), the example chips and the device editor. The intro, which says
+// how to build the device, leads the inputs beside the results on wide
+// windows and the whole page on a phone.
+func (v *deviceView) columns(gtx layout.Context, intro, heading string, keys ...string) (top, inputs []layout.Widget) {
+	top = []layout.Widget{Heading(v.env, heading), v.form.resultCard, v.form.CautionWidget}
+	if splitWide(gtx) {
+		inputs = append(inputs, Para(v.env, intro))
+	} else {
+		top = append([]layout.Widget{Para(v.env, intro)}, top...)
 	}
-	ws = append(ws, v.form.InputWidget(keyExample))
-	return append(ws, v.editor.Layout(gtx, v.dev)...)
+	inputs = append(inputs, Heading(v.env, "Operating conditions"))
+	inputs = append(inputs, v.editor.Conditions()...)
+	for _, k := range keys {
+		inputs = append(inputs, v.form.InputWidget(k))
+	}
+	inputs = append(inputs, Heading(v.env, "The device"), v.form.InputWidget(keyExample))
+	return top, append(inputs, v.editor.Layout(gtx, v.dev)...)
 }
 
 // statusLine shows what runs in the background, or nothing.

@@ -71,5 +71,5 @@ func (s *diagnoseScreen) Layout(gtx layout.Context) layout.Dimensions {
 	outputs := append([]layout.Widget{}, out[:2]...)
 	outputs = append(outputs, s.plot.Layout)
 	outputs = append(outputs, out[2:]...)
-	return splitLayout(gtx, s.env, s.page, s.side, formHeadline(s.env, s.form), inputs, outputs)
+	return splitLayout(gtx, s.page, s.side, []layout.Widget{formHeadline(s.env, s.form)}, inputs, outputs)
 }

@@ -314,17 +314,18 @@ func (f *Form) CautionWidget(gtx layout.Context) layout.Dimensions {
 }
 
 // sheetScreen is the screen of a calculator that needs nothing beyond its
-// description: its inputs, then its results.
+// description: its inputs, then its results (beside them on wide windows).
 type sheetScreen struct {
 	env  *Env
-	page *Page
+	page *Page // the one column, or the inputs' column when wide
+	side *Page // the results' column when wide
 	form *Form
 }
 
 // newSheetScreen returns the constructor of s's plain screen.
 func newSheetScreen(s *sheet.Sheet) func(env *Env) Screen {
 	return func(env *Env) Screen {
-		return &sheetScreen{env: env, page: NewPage(env), form: NewForm(env, s)}
+		return &sheetScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, s)}
 	}
 }
 
@@ -337,5 +338,5 @@ func (s *sheetScreen) Enter() { s.form.Enter() }
 // Layout implements Screen.
 func (s *sheetScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.form.Update(gtx)
-	return s.page.Layout(gtx, append(s.form.Inputs(), s.form.Outputs()...)...)
+	return splitLayout(gtx, s.page, s.side, nil, s.form.Inputs(), s.form.Outputs())
 }

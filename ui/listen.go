@@ -297,7 +297,7 @@ func (s *listenScreen) Layout(gtx layout.Context) layout.Dimensions {
 	if s.analysing() {
 		head = headline(s.env, "", "")
 	}
-	return splitLayout(gtx, s.env, s.page, s.side, head, inputs, outputs)
+	return splitLayout(gtx, s.page, s.side, []layout.Widget{head}, inputs, outputs)
 }
 
 // intro says what to do, for the platform's way in.

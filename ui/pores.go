@@ -17,7 +17,8 @@ import (
 // wrong shape, and come back when their shape is chosen again.
 type poresScreen struct {
 	env  *Env
-	page *Page
+	page *Page // the one column, or the inputs' column when wide
+	side *Page // the results' column when wide
 	form *Form
 	// packing says how fibres are given: by solid fraction or by packed
 	// mass and volume (a choice of the screen only; the description
@@ -33,7 +34,7 @@ type poresScreen struct {
 // newPoresScreen builds the pores-and-packing screen.
 func newPoresScreen(env *Env) Screen {
 	d, _ := sheet.Lookup(sheet.IDPores)
-	s := &poresScreen{env: env, page: NewPage(env), form: NewForm(env, d), stash: map[string]string{},
+	s := &poresScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), stash: map[string]string{},
 		packing: NewChoice(env, "Fibre packing given by", []string{"fraction", "mass"}, []string{"Solid fraction", "Packed mass"}),
 		halves:  map[string]*Choice{}}
 	for shape, chips := range poreHalfChips {
@@ -169,10 +170,14 @@ func (s *poresScreen) Layout(gtx layout.Context) layout.Dimensions {
 	for _, key := range s.shown() {
 		ws = append(ws, f.InputWidget(key), s.both(shape, key))
 	}
-	ws = append(ws, f.Outputs()...)
-	ws = append(ws, Heading(s.env, "Gas and operating point"))
+	gas := []layout.Widget{Heading(s.env, "Gas and operating point")}
 	for _, key := range []string{"gas", "temperature", "pressure", "frequency", "non-ideal"} {
-		ws = append(ws, f.InputWidget(key))
+		gas = append(gas, f.InputWidget(key))
 	}
-	return s.page.Layout(gtx, ws...)
+	if !splitWide(gtx) {
+		// On a phone the verdict follows the geometry it is about.
+		ws = append(append(ws, f.Outputs()...), gas...)
+		return s.page.Layout(gtx, ws...)
+	}
+	return splitLayout(gtx, s.page, s.side, nil, append(ws, gas...), f.Outputs())
 }

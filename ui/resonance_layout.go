@@ -8,30 +8,6 @@ import (
 	"tubewright/calc/sheet"
 )
 
-// wideMin is the width from which calculator screens put inputs and
-// results side by side (the app gives a screen at most 760 dp, and about
-// 700 dp on a tablet beside the catalog).
-const wideMin = 680
-
-// splitLayout lays a calculator screen out: on a narrow window one
-// scrolling column with the headline answer on top, then the inputs, then
-// the outputs; from wideMin dp on, inputs on the left and the headline and
-// outputs on the right, each column scrolling on its own.
-func splitLayout(gtx layout.Context, env *Env, left, right *Page, head layout.Widget, inputs, outputs []layout.Widget) layout.Dimensions {
-	if gtx.Constraints.Max.X < gtx.Dp(wideMin) {
-		all := append(append([]layout.Widget{head}, inputs...), outputs...)
-		return left.Layout(gtx, all...)
-	}
-	return layout.Flex{}.Layout(gtx,
-		layout.Flexed(0.45, func(gtx layout.Context) layout.Dimensions {
-			return left.Layout(gtx, inputs...)
-		}),
-		layout.Flexed(0.55, func(gtx layout.Context) layout.Dimensions {
-			return right.Layout(gtx, append([]layout.Widget{head}, outputs...)...)
-		}),
-	)
-}
-
 // headline shows the main answer large, or nothing when there is none.
 func headline(env *Env, label, value string) layout.Widget {
 	return func(gtx layout.Context) layout.Dimensions {

@@ -65,8 +65,9 @@ type stepPart struct {
 type sheetStep struct {
 	env   *Env
 	parts []*stepPart
-	// base are the cautions the step always shows: the general one and
-	// the checklist item's own.
+	// base are the cautions the step always shows: the checklist item's
+	// own. The general caution is the screen's, once at the top of every
+	// step (see safetyScreen.Layout), not again in the step's box.
 	base    []string
 	caution *Caution
 	// before runs before the forms update: carry-over from other steps.
@@ -75,9 +76,9 @@ type sheetStep struct {
 
 // newSheetStep returns a step with the item's cautions and the parts.
 func newSheetStep(env *Env, heading string, item []string, parts ...*stepPart) *sheetStep {
-	base := []string{safety.CautionGeneral}
+	var base []string
 	for _, c := range item {
-		if !slices.Contains(base, c) {
+		if c != safety.CautionGeneral && !slices.Contains(base, c) {
 			base = append(base, c)
 		}
 	}
@@ -379,8 +380,9 @@ func (s *sheetStep) Checks() []store.ItemVerdict {
 	return out
 }
 
-// Cautions implements inlineCalc: the general and the item's cautions,
-// those of the parts' results, and those of the gases picked (hydrogen
+// Cautions implements inlineCalc: the item's cautions, those of the
+// parts' results (the general caution, which the screen shows once at the
+// top of the step, left out), and those of the gases picked (hydrogen
 // burns, carbon dioxide is toxic), which stand whether or not the other
 // inputs give a result.
 func (s *sheetStep) Cautions() []string {
@@ -394,7 +396,11 @@ func (s *sheetStep) Cautions() []string {
 	}
 	for _, p := range s.parts {
 		if p.shown != nil {
-			add(p.shown.Cautions...)
+			for _, l := range p.shown.Cautions {
+				if l != safety.CautionGeneral {
+					add(l)
+				}
+			}
 		}
 		for _, k := range p.keys {
 			if g := p.form.Gas(k); g != nil {

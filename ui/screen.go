@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"image"
+
 	"gioui.org/io/semantic"
 	"gioui.org/layout"
 	"gioui.org/op"
@@ -51,8 +53,21 @@ func NewPage(env *Env) *Page {
 }
 
 // Layout draws the children top to bottom, 12 dp apart, with 16 dp margins,
-// scrolling when they do not fit.
+// scrolling when they do not fit, in a column at most readable wide,
+// centred.
 func (p *Page) Layout(gtx layout.Context, children ...layout.Widget) layout.Dimensions {
+	if w := gtx.Dp(readable); gtx.Constraints.Max.X > w {
+		size := gtx.Constraints.Max
+		gtx.Constraints = layout.Exact(image.Pt(w, size.Y))
+		defer op.Offset(image.Pt((size.X-w)/2, 0)).Push(gtx.Ops).Pop()
+		p.layout(gtx, children)
+		return layout.Dimensions{Size: size}
+	}
+	return p.layout(gtx, children)
+}
+
+// layout draws the children into the whole width.
+func (p *Page) layout(gtx layout.Context, children []layout.Widget) layout.Dimensions {
 	return material.List(p.env.Theme, &p.list).Layout(gtx, len(children), func(gtx layout.Context, i int) layout.Dimensions {
 		in := layout.Inset{Left: 16, Right: 16, Top: 6, Bottom: 6}
 		if i == 0 {

@@ -1,22 +1,30 @@
 package ui
 
 // The screenshot harness renders screens with Gio's headless GPU window
-// (Mesa's software rasteriser on machines without a GPU) at three sizes:
+// (Mesa's software rasteriser on machines without a GPU). TestScreenshot
+// takes the catalog and every catalog screen at five sizes
 //
-//	phone   412 × 915
-//	tablet  1024 × 768
-//	desktop 1440 × 900
+//	phone            412 × 915
+//	phone-landscape  915 × 412   (a phone held sideways)
+//	tablet          1024 × 768
+//	tablet-upright   768 × 1024
+//	desktop         1440 × 900
 //
-// Run it with a folder to look at the pictures:
+// in the bright theme, and at the phone and desktop sizes the same app,
+// results and all, again in the dark one (cheap: a theme change starts no
+// new solve). Tests of
+// particular states picture them at shotSizes, the phone, tablet and
+// desktop sizes. Run it with a folder to look at the pictures:
 //
 //	SHOT_DIR=/tmp/shots go test -run Screenshot ./ui/
 //
-// which writes SHOT_DIR/<name>-<size>.png for the catalog home and for every
-// catalog screen in its starting state, and SHOT_DIR/<id>-tall.png, every
-// screen whole on a 412 dp wide window. Without SHOT_DIR the pictures are
-// still rendered and checked (top bar and margin colours, some dark text
-// pixels). Where no renderer can be had the tests skip with the reason,
-// except under CI (CI set), where they fail.
+// which writes SHOT_DIR/<name>-<size>.png (and <name>-<size>-dark.png) for
+// the catalog home and for every catalog screen in its starting state,
+// and SHOT_DIR/<id>-tall.png, every screen whole on a 412 dp wide window.
+// Without SHOT_DIR the pictures are still rendered and checked (top bar,
+// side list and margin colours, enough text pixels).
+// Where no renderer can be had the tests skip with the reason, except
+// under CI (CI set), where they fail.
 //
 // To picture your screen in a particular state, build it, drive it, and
 // call shoot from your own test:
@@ -65,32 +73,48 @@ type shotSize struct {
 	size image.Point
 }
 
+// shotSizes are the sizes tests of particular states picture them at.
 var shotSizes = []shotSize{
 	{"phone", image.Pt(412, 915)},
 	{"tablet", image.Pt(1024, 768)},
 	{"desktop", image.Pt(1440, 900)},
 }
 
-// TestScreenshot pictures the catalog home and every catalog screen.
+// allShotSizes are the sizes TestScreenshot pictures every screen at.
+var allShotSizes = []shotSize{
+	shotSizes[0],
+	{"phone-landscape", image.Pt(915, 412)},
+	shotSizes[1],
+	{"tablet-upright", image.Pt(768, 1024)},
+	shotSizes[2],
+}
+
+// darkShotSizes are the sizes TestScreenshot also pictures in the dark
+// theme: the narrowest and the widest layout. The dark palette colours
+// the same widgets the same way at every size, so two sizes show it; the
+// test runs under -race in make test, where every picture costs.
+var darkShotSizes = map[string]bool{"phone": true, "desktop": true}
+
+// TestScreenshot pictures the catalog home and every catalog screen at
+// every size in the bright theme, and at darkShotSizes in the dark one.
 func TestScreenshot(t *testing.T) {
 	t.Run("home", func(t *testing.T) {
-		for _, sz := range shotSizes {
+		for _, sz := range allShotSizes {
 			t.Run(sz.name, func(t *testing.T) {
-				a := NewApp(nil)
-				shootApp(t, "home-"+sz.name, sz.size, a)
+				shootThemes(t, "home-"+sz.name, sz.size, NewApp(nil))
 			})
 		}
 	})
 	for _, e := range Catalog() {
 		t.Run(string(e.ID), func(t *testing.T) {
-			for _, sz := range shotSizes {
+			for _, sz := range allShotSizes {
 				t.Run(sz.name, func(t *testing.T) {
 					a := NewApp(nil)
 					a.Open(e.ID)
 					if a.Current() != e.ID {
 						t.Fatalf("could not open %q", e.ID)
 					}
-					shootApp(t, string(e.ID)+"-"+sz.name, sz.size, a)
+					shootThemes(t, string(e.ID)+"-"+sz.name, sz.size, a)
 				})
 			}
 		})
@@ -134,9 +158,44 @@ func shoot(t *testing.T, name string, env *Env, s Screen) {
 	}
 }
 
-// shootApp renders a at size (three frames, so changes found during layout
-// settle), checks the picture and writes it when SHOT_DIR is set.
+// shootApp renders a at size, checks the picture and writes it when
+// SHOT_DIR is set.
 func shootApp(t *testing.T, file string, size image.Point, a *App) {
+	t.Helper()
+	win := shotWindow(t, size)
+	defer win.Release()
+	shotFrame(t, win, file, size, a, 500*time.Millisecond)
+}
+
+// shootThemes renders a at size in the bright theme as file, then, at
+// darkShotSizes, in the dark theme as file-dark, in one window.
+func shootThemes(t *testing.T, file string, size image.Point, a *App) {
+	t.Helper()
+	win := shotWindow(t, size)
+	defer win.Release()
+	a.env.SetDark(false)
+	shotFrame(t, win, file, size, a, 500*time.Millisecond)
+	if !darkShotSizes[sizeName(size)] {
+		return
+	}
+	a.env.SetDark(true)
+	// A theme change starts no solve: a short quiet spell is enough.
+	shotFrame(t, win, file+"-dark", size, a, 100*time.Millisecond)
+}
+
+// sizeName returns the name of the shot size size, "" for another.
+func sizeName(size image.Point) string {
+	for _, sz := range allShotSizes {
+		if sz.size == size {
+			return sz.name
+		}
+	}
+	return ""
+}
+
+// shotWindow returns a headless window of size, or skips (fails under CI)
+// where no renderer can be had.
+func shotWindow(t *testing.T, size image.Point) *headless.Window {
 	t.Helper()
 	win, err := headless.NewWindow(size.X, size.Y)
 	if err != nil {
@@ -145,9 +204,17 @@ func shootApp(t *testing.T, file string, size image.Point, a *App) {
 		}
 		t.Skipf("no headless renderer here (%v); install Mesa's libegl1 libegl-mesa0 libgl1-mesa-dri libgles2", err)
 	}
-	defer win.Release()
+	return win
+}
+
+// shotFrame lays a out at size (three frames, so changes found during
+// layout settle, then again for as long as background jobs ask, until
+// quiet has passed without a request), draws it in win, checks the
+// picture and writes it as file when SHOT_DIR is set.
+func shotFrame(t *testing.T, win *headless.Window, file string, size image.Point, a *App, quiet time.Duration) {
+	t.Helper()
 	// Background jobs ask for a frame when they finish: lay out again until
-	// no frame has been asked for in half a second (at most 20 s), so the
+	// no frame has been asked for in the quiet spell (at most 20 s), so the
 	// picture shows results rather than "working".
 	asked := make(chan struct{}, 1)
 	a.env.setInvalidate(func() {
@@ -181,7 +248,7 @@ wait:
 		select {
 		case <-asked:
 			frame(i)
-		case <-time.After(500 * time.Millisecond):
+		case <-time.After(quiet):
 			break wait
 		case <-deadline:
 			t.Logf("%s: still asking for frames after 20 s; picturing the last one", file)
@@ -202,8 +269,9 @@ wait:
 }
 
 // checkShot looks at pixels away from text: the top bar's colour at its left
-// end, the side list and its divider on wide windows or the page margin on
-// phones at the bottom left, and enough dark pixels for text to have been
+// end, the side list and its divider when the list is beside the screen or
+// the page margin otherwise at the bottom left, and enough pixels far from
+// the background's shade (text, in either theme) for text to have been
 // drawn. Shots are taken at one pixel per dp.
 func checkShot(t *testing.T, a *App, img *image.RGBA) {
 	t.Helper()
@@ -212,10 +280,11 @@ func checkShot(t *testing.T, a *App, img *image.RGBA) {
 	if got := img.RGBAAt(2, 2); !same(got, c.Accent) {
 		t.Errorf("top bar pixel (2,2) = %v, want the accent colour %v", got, c.Accent)
 	}
-	if b.Dx() >= int(wideAt) {
+	gtx := layout.Context{Metric: unit.Metric{PxPerDp: 1, PxPerSp: 1}}
+	if a.side.beside(gtx, b.Size()) {
 		// The side list's right edge is the app's divider line; at its
 		// left the list (plain or a selected entry).
-		if got := img.RGBAAt(int(sideWidth), b.Max.Y-3); !same(got, c.Divider) {
+		if got := img.RGBAAt(sideWidth(gtx, b.Dx()), b.Max.Y-3); !same(got, c.Divider) {
 			t.Errorf("divider pixel = %v, want %v", got, c.Divider)
 		}
 		if got := img.RGBAAt(2, b.Max.Y-3); !same(got, c.Surface) && !same(got, c.Selected) {
@@ -224,17 +293,18 @@ func checkShot(t *testing.T, a *App, img *image.RGBA) {
 	} else if got := img.RGBAAt(2, b.Max.Y-3); !same(got, c.Background) && !same(got, c.Surface) {
 		t.Errorf("bottom-left margin pixel = %v, want background %v or surface %v", got, c.Background, c.Surface)
 	}
-	dark := 0
+	bg := int(c.Background.R) + int(c.Background.G) + int(c.Background.B)
+	text := 0
 	for y := b.Min.Y; y < b.Max.Y; y++ {
 		for x := b.Min.X; x < b.Max.X; x++ {
 			p := img.RGBAAt(x, y)
-			if int(p.R)+int(p.G)+int(p.B) < 3*110 {
-				dark++
+			if d := int(p.R) + int(p.G) + int(p.B) - bg; d > 3*100 || d < -3*100 {
+				text++
 			}
 		}
 	}
-	if dark < 500 {
-		t.Errorf("only %d dark pixels: was any text drawn?", dark)
+	if text < 500 {
+		t.Errorf("only %d pixels far from the background's shade: was any text drawn?", text)
 	}
 }
 

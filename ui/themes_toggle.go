@@ -1,11 +1,8 @@
 package ui
 
 import (
-	"gioui.org/io/semantic"
 	"gioui.org/layout"
-	"gioui.org/unit"
 	"gioui.org/widget"
-	"gioui.org/widget/material"
 )
 
 // themeToggle is the top bar's theme button: it names the theme a tap
@@ -46,22 +43,5 @@ func (t *themeToggle) layout(gtx layout.Context, env *Env) layout.Dimensions {
 	if env.Dark() {
 		word, desc = "Bright", "Theme: dark. Switch to the bright theme"
 	}
-	return t.click.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-		semantic.Button.Add(gtx.Ops)
-		semantic.DescriptionOp(desc).Add(gtx.Ops)
-		gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
-		return layout.Center.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			return layout.Inset{Left: 12, Right: 14}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				c := env.Colors
-				return background(gtx, c.Accent, c.OnAccent, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-					return layout.Inset{Left: 10, Right: 10, Top: 6, Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						l := material.Label(env.Theme, unit.Sp(15), word)
-						l.Color = c.OnAccent
-						l.Font.Weight = 600
-						return l.Layout(gtx)
-					})
-				})
-			})
-		})
-	})
+	return barButton(gtx, env, &t.click, word, desc)
 }
