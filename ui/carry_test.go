@@ -143,6 +143,13 @@ func TestCarryResonanceDepthsPores(t *testing.T) {
 		t.Fatalf("pores gave no result: %v", pores.Err())
 	}
 	undo(t, h, pores, "frequency", "Frequency", "100 Hz")
+
+	// a frequency typed on the pores is theirs: Stack placement takes it
+	// from there, and the temperature still from Tube resonance
+	h.retype("Frequency", "100 Hz", "150 Hz")
+	place := openScreen(a, h, sheet.IDPlacement)
+	wantCarried(t, h, place, "frequency", "Frequency", "150 Hz", "Pores and packing")
+	wantCarried(t, h, place, "temperature", "Mean temperature", "20 degC", "Tube resonance")
 }
 
 // TestCarryDepthsToPores: 400 Hz typed on Penetration depths is the

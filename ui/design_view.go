@@ -58,7 +58,7 @@ func (s *designScreen) outcome() (top, details []layout.Widget) {
 	if s.fail {
 		top = append(top, Para(s.env, "The target is out of reach. Below is the nearest design found, with what it misses by."))
 	}
-	top = append(top, s.head.Layout, s.strip.Layout)
+	top = append(top, s.form.PointWidget, s.head.Layout, s.strip.Layout)
 	if s.pump {
 		top = append(top, Note(s.env, "Build it in the Heat pump editor part by part from the sizes below, driver first."))
 	} else {
