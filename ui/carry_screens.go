@@ -78,15 +78,15 @@ func (v *deviceView) operatingPoint() string {
 	}
 	vals := []string{v.dev.Gas.String(), writtenIn(v.dev.MeanPressure, units.DimPressure)[0],
 		writtenIn(v.dev.AmbientTemperature, units.DimTemperature)[0] + " ambient"}
-	how := "gas, fill and ambient from the device below"
+	how := "gas, fill and ambient as set under Operating conditions"
 	if row, ok := res.Row("frequency"); ok && usable(row.Value) {
 		vals = append(vals, units.Format(row.Value, units.DimFrequency))
 		how += ", frequency solved"
 		switch {
 		case v.form.Sheet.Input("frequency") != nil && res.Values.Has("frequency"):
-			how = "gas, fill and ambient from the device below, frequency typed here"
+			how = "gas, fill and ambient as set under Operating conditions, frequency typed here"
 		case v.form.Sheet.ID == sheet.IDHeatPump:
-			how = "gas, fill and ambient from the device below, frequency the driver's"
+			how = "gas, fill and ambient as set under Operating conditions, frequency the driver's"
 		}
 	}
 	return "At " + strings.Join(vals, ", ") + " · " + how

@@ -239,7 +239,7 @@ func TestCarryOnsetToDepthsAndSafety(t *testing.T) {
 	if onset.Result() == nil {
 		t.Fatalf("no onset result: %v", onset.Err())
 	}
-	wantPoint(t, h, sheet.IDOnset, "8 bar", "295 K ambient", "from the device")
+	wantPoint(t, h, sheet.IDOnset, "8 bar", "295 K ambient", "as set under Operating conditions")
 	row, _ := onset.Result().Row("frequency")
 	hot, _ := onset.Result().Row("hot_temperature")
 	hz := units.Format(row.Value, units.DimFrequency)
@@ -295,7 +295,7 @@ func TestCarryHeatPumpToPores(t *testing.T) {
 	if !ok {
 		t.Fatalf("no heat-pump result: %v", hp.Err())
 	}
-	wantPoint(t, h, sheet.IDHeatPump, "from the device", "frequency the driver's")
+	wantPoint(t, h, sheet.IDHeatPump, "as set under Operating conditions", "frequency the driver's")
 	pores := openScreen(a, h, sheet.IDPores)
 	wantCarried(t, h, pores, "frequency", "Frequency", units.Format(row.Value, units.DimFrequency), "Heat pump span")
 }
