@@ -40,6 +40,8 @@ type safetyScreen struct {
 	jumps              []widget.Clickable
 	save, setAside     widget.Clickable
 	openLog, restart   widget.Clickable
+	undoBtn            widget.Clickable
+	undo               *passUndo // what Start a new pass cleared; see restartWithUndo
 	rig                widget.Editor
 
 	forms *safetyForms // the calculators the steps show
@@ -150,6 +152,7 @@ func (s *safetyScreen) update(gtx layout.Context) {
 		if s.ticks[i].Update(gtx) {
 			s.pass.Done[i] = s.ticks[i].Value
 			s.saved = false
+			s.undo = nil
 		}
 	}
 	for i := range s.notes {
@@ -158,9 +161,11 @@ func (s *safetyScreen) update(gtx layout.Context) {
 			if !ok {
 				break
 			}
-			if _, ok := ev.(widget.ChangeEvent); ok {
+			// Text set by code (a new pass, Undo) is not a change.
+			if _, ok := ev.(widget.ChangeEvent); ok && s.notes[i].Text() != s.pass.Notes[i] {
 				s.pass.Notes[i] = s.notes[i].Text()
 				s.saved = false
+				s.undo = nil
 			}
 		}
 	}
@@ -193,7 +198,10 @@ func (s *safetyScreen) update(gtx layout.Context) {
 		s.env.Open(sheet.IDBenchLog)
 	}
 	if s.restart.Clicked(gtx) {
-		s.reset()
+		s.restartWithUndo()
+	}
+	if s.undoBtn.Clicked(gtx) {
+		s.undoRestart()
 	}
 }
 
@@ -271,6 +279,7 @@ func (s *safetyScreen) saveTo(aside bool) {
 func (s *safetyScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
 	ws := []layout.Widget{s.general.Layout, s.progress}
+	ws = append(ws, s.undoWidgets()...)
 	if s.step >= s.items() {
 		ws = append(ws, s.reviewWidgets()...)
 	} else {

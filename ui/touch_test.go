@@ -163,6 +163,9 @@ func touchStates(t *testing.T, a *App, h *harness, id sheet.ID) int {
 		s.saveTo(false)
 		h.frames(2)
 		n += checkTargets(t, h, "safety review, saved")
+		s.restartWithUndo()
+		h.frames(2)
+		n += checkTargets(t, h, "safety, a new pass with Undo")
 	case *onsetScreen:
 		n += touchParts(t, h, s.editor, "onset")
 	case *heatPumpScreen:
