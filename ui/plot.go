@@ -122,6 +122,9 @@ type Plot struct {
 	readoutW       layout.Widget
 	readoutStr     string // readoutText for readoutFor
 	readoutFor     pick
+	summary        string      // Summary of summaryFor at summarySize
+	summaryFor     *Chart      // the chart summary describes
+	summarySize    image.Point // the cache size it was written at
 }
 
 // pick names a point of the chart: line l, index i (l = -1: mark i).
@@ -133,7 +136,7 @@ type pick struct {
 // NewPlot returns an empty plot widget; Set gives it a chart.
 func NewPlot(env *Env) *Plot {
 	w := &Plot{env: env}
-	w.drawing = Described("Plot drawing", w.layoutDrawing)
+	w.drawing = w.layoutLabelled
 	w.readout = w.layoutReadout
 	w.headerWidgets()
 	return w
