@@ -22,6 +22,10 @@ var safetyAgreeCases = []agreeCase{
 		"wall-thickness": "6 mm", "allowable-stress": "138 MPa", "code-family": "eu", "mawp": "30 barg"}},
 	{id: sheet.IDVessel, name: "joint efficiency over 1", texts: map[string]string{"pressure": "30 barg", "inner-radius": "50 mm",
 		"wall-thickness": "6 mm", "allowable-stress": "138 MPa", "joint-efficiency": "1.2"}, errKey: "joint-efficiency"},
+	{id: sheet.IDVessel, name: "outside diameter agreeing, ±", texts: map[string]string{"pressure": "30 barg", "inner-radius": "50 mm ± 0.1 mm",
+		"outside-diameter": "112 mm", "wall-thickness": "6 mm +- 0.2 mm", "allowable-stress": "138 MPa"}},
+	{id: sheet.IDVessel, name: "outside diameter disagreeing", texts: map[string]string{"pressure": "30 barg", "inner-radius": "50 mm",
+		"outside-diameter": "120 mm", "wall-thickness": "6 mm", "allowable-stress": "138 MPa"}, errKey: "outside-diameter"},
 	{id: sheet.IDVessel, name: "relief below the atmosphere", texts: map[string]string{"pressure": "30 barg", "inner-radius": "50 mm",
 		"wall-thickness": "6 mm", "allowable-stress": "138 MPa", "relief-set": "0.5 bara"}, errKey: "relief-set"},
 

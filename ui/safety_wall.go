@@ -6,8 +6,8 @@ import "tubewright/calc/safety"
 // material, its stresses, UG-27 minimum wall and the wall's own MAWP.
 func newWallStep(env *Env, f *safetyForms, item safety.Item) *sheetStep {
 	return newSheetStep(env, "Beside these stresses", item.Cautions, &stepPart{form: f.vessel, warnings: true,
-		keys: []string{"pressure", "inner-radius", "wall-thickness", "allowable-stress", "joint-efficiency", "corrosion-allowance", "code-family"},
-		rows: []string{"stress_check", "wall_adequate", "hoop_stress", "longitudinal_stress", "radial_stress", "stress_intensity", "hoop_stress_ratio",
+		keys: []string{"pressure", "inner-radius", "outside-diameter", "wall-thickness", "allowable-stress", "joint-efficiency", "corrosion-allowance", "code-family"},
+		rows: []string{"stress_check", "wall_adequate", "inside_diameter", "outside_diameter", "wall_thickness", "hoop_stress", "longitudinal_stress", "radial_stress", "stress_intensity", "hoop_stress_ratio",
 			"thin_wall_hoop_stress", "code_family", "code_reference", "minimum_wall_thickness", "max_allowable_pressure", "thickness_clause"},
 	})
 }

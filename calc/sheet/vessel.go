@@ -3,6 +3,7 @@ package sheet
 import (
 	"errors"
 	"fmt"
+	"maps"
 
 	"tubewright/calc/safety"
 	"tubewright/calc/units"
@@ -24,12 +25,9 @@ var vesselSheet = &Sheet{
 	ID:      IDVessel,
 	Title:   "Vessel wall",
 	Summary: "Wall stresses, minimum wall and MAWP of a cylindrical vessel, the relief set pressure against the MAWP, and reference test pressures (safety)",
-	Inputs: []Input{
-		withPM(SafetyPressureInput("pressure", "Design pressure", "", "30 barg", "internal design pressure")),
-		{Key: "inner-radius", Label: "Inner radius", Kind: Quantity, Dim: units.DimLength, Example: "50 mm",
-			Hint: "inside radius of the shell, e.g. 50 mm, 2 in; ± or +- for an uncertainty", Min: 1e-4, Max: 1e3, PM: true},
-		{Key: "wall-thickness", Label: "Wall thickness", Kind: Quantity, Dim: units.DimLength, Example: "6 mm",
-			Hint: "the thinnest wall, e.g. 6 mm, 0.25 in; ± or +- for an uncertainty", Min: 1e-5, Max: 1e3, PM: true},
+	Inputs: append(append([]Input{
+		withPM(SafetyPressureInput("pressure", "Design pressure", "", "30 barg", "internal design pressure"))},
+		shellInputs()...), []Input{
 		{Key: "allowable-stress", Label: "Allowable stress at the hot-end temperature", Kind: Quantity, Dim: units.DimStress,
 			Hint: "your material's allowable stress at the hottest wall temperature, e.g. 138 MPa, 20 ksi", Min: 0, Max: 1e10, MinOpen: true, PM: true},
 		{Key: "joint-efficiency", Label: "Joint efficiency", Kind: Number, Default: "1",
@@ -42,14 +40,14 @@ var vesselSheet = &Sheet{
 		optional(SafetyPressureInput("relief-set", "Relief set pressure", "", "", "set pressure of the relief valve or bursting disc, from its tag, e.g. 33 barg")),
 		{Key: "stress-ratio", Label: "Stress ratio, test to design temperature", Kind: Number, Default: "1",
 			Hint: "allowable stress at the test temperature / at the design temperature; 1 if unsure", Min: 0.01, Max: 100, Advanced: true},
-	},
+	}...),
 	About: "Lamé's thick-wall stresses at the inner surface and thin-wall membrane stresses on the mean radius (Roark, Table 13.1); " +
 		"ASME BPVC VIII-1 UG-27(c) and Appendix 1-2 for the minimum wall and the wall's MAWP; relief set at or below the MAWP (UG-134(a)); " +
 		"test pressures UG-99(b), UG-100(b) and PED 2014/68/EU Annex I 7.4. " +
 		"The vessel's MAWP is the lowest of its parts: the lower of the nameplate MAWP and the shell wall's own; the design pressure is checked against it, never used for it.",
 	Examples: []string{
 		"twcalc vessel --pressure 30barg --inner-radius 50mm --wall-thickness 6mm --allowable-stress 138MPa",
-		"twcalc vessel --pressure 435psig --inner-radius 2in --wall-thickness 0.25in --allowable-stress 20ksi --json",
+		"twcalc vessel --pressure 435psig --inside-diameter 4in --outside-diameter 4.5in --allowable-stress 20ksi --json",
 		"twcalc vessel --pressure 30barg --inner-radius 50mm --wall-thickness 6mm --allowable-stress 138MPa --mawp 40barg --relief-set 38barg",
 	},
 	Run: runVessel,
@@ -104,14 +102,24 @@ var vesselRows = []struct {
 	{"thin_wall_longitudinal_stress", "Longitudinal stress (thin-wall)", units.DimStress, "MPa"},
 	{"thin_wall_hoop_stress_ratio", "Thin-wall hoop stress / allowable", units.DimNone, ""},
 	{"minimum_wall_thickness", "Minimum wall for this pressure", units.DimLength, "mm"},
+	{shellRows[0].key, shellRows[0].label, units.DimLength, "mm"},
+	{shellRows[1].key, shellRows[1].label, units.DimLength, "mm"},
+	{shellRows[2].key, shellRows[2].label, units.DimLength, "mm"},
 }
 
-// vesselNumbers computes the rows of vesselRows from x = (P gauge, ri, t,
-// S); E and c are fixed. The thin-wall rows are zero when thinErr is set,
-// the minimum wall when asme is false or no wall can hold P (shell.NoWall).
-func vesselNumbers(x []float64, E, c float64, asme bool) (out []float64, lame, thin safety.WallStress, shell safety.Shell, thinErr, err error) {
+// vesselShellRow is the index in vesselRows of the first shell size.
+const vesselShellRow = 9
+
+// vesselNumbers computes the rows of vesselRows from x = (P gauge, the
+// two shell sizes given as g reads them, S); E and c are fixed. The
+// thin-wall rows are zero when thinErr is set, the minimum wall when asme
+// is false or no wall can hold P (shell.NoWall).
+func vesselNumbers(x []float64, g shellGeometry, E, c float64, asme bool) (out []float64, lame, thin safety.WallStress, shell safety.Shell, thinErr, err error) {
 	P := safety.GaugePressure(x[0])
 	out = make([]float64, len(vesselRows))
+	ri, t := g.radiusAndWall(x[1], x[2])
+	copy(out[vesselShellRow:], shellSizes(ri, t))
+	x = []float64{x[0], ri, t, x[3]}
 	lame, err = safety.ThickWallStress(P, x[1], x[2], x[3])
 	if err != nil {
 		return
@@ -140,29 +148,39 @@ func runVessel(v *Values) (*Result, error) {
 	}
 	fam := v.Pick("code-family").(safety.CodeFamily)
 	asme := fam == safety.FamilyASME
-	ri, t, S := v.Q("inner-radius"), v.Q("wall-thickness"), v.Q("allowable-stress")
-	E, c := v.Number("joint-efficiency"), v.SI("corrosion-allowance")
-	x := []float64{float64(P), ri.Value, t.Value, S.Value}
-	nums, lame, thin, shell, thinErr, err := vesselNumbers(x, E, c, asme)
+	g, err := readShell(v)
 	if err != nil {
-		return nil, blameField(v, err, vesselFields)
+		return nil, err
 	}
+	S := v.Q("allowable-stress")
+	E, c := v.Number("joint-efficiency"), v.SI("corrosion-allowance")
+	x := []float64{float64(P), g.a, g.b, S.Value}
+	nums, lame, thin, shell, thinErr, err := vesselNumbers(x, g, E, c, asme)
+	if err != nil {
+		fields := maps.Clone(vesselFields)
+		maps.Copy(fields, g.radiusKeys)
+		return nil, blameField(v, err, fields)
+	}
+	_, wall := g.radiusAndWall(g.a, g.b)
 	r := &Result{}
 	deriveReading(r, v, "pressure")
 	r.Derive("pressure_gauge", "Pressure on the wall (gauge)", float64(P), units.DimPressure)
 	r.DeriveWords("pressure_basis", "Pressure basis", "gauge: pressures below are above the atmosphere (101325 Pa)")
 
 	sig, ok := Spread(func(x, out []float64) error {
-		o, _, _, _, _, err := vesselNumbers(x, E, c, asme)
+		o, _, _, _, _, err := vesselNumbers(x, g, E, c, asme)
 		copy(out, o)
 		return err
-	}, x, []float64{v.Q("pressure").Uncertainty, ri.Uncertainty, t.Uncertainty, S.Uncertainty}, len(vesselRows))
+	}, x, []float64{v.Q("pressure").Uncertainty, g.ua, g.ub, S.Uncertainty}, len(vesselRows))
 	add := func(k int) {
 		row := vesselRows[k]
 		if !ok[k] {
 			r.Warn(noSpreadWarning(row.key))
 		}
 		r.AddPM(row.key, row.label, nums[k], sig[k], row.dim).Show = row.show
+	}
+	for k := vesselShellRow; k < len(vesselRows); k++ {
+		add(k)
 	}
 	for k := range 5 {
 		add(k)
@@ -194,7 +212,7 @@ func runVessel(v *Values) (*Result, error) {
 		}
 		wallMAWP = shell.MAWP
 		r.AddGauge("max_allowable_pressure", "MAWP of this wall (gauge)", float64(shell.MAWP))
-		wallCheck(r, shell, t.Value, P, S.Value*E)
+		wallCheck(r, shell, wall, P, S.Value*E)
 		r.AddWords("thickness_clause", "Thickness formula", shell.ClauseThickCircum+" / "+shell.ClauseThickLong)
 		r.AddWords("pressure_clause", "MAWP formula", shell.ClauseMAWPCircum+" / "+shell.ClauseMAWPLong)
 		r.Warn(shell.Warnings...)
