@@ -229,8 +229,8 @@ func (a *App) layoutCentred(gtx layout.Context, s Screen) layout.Dimensions {
 }
 
 // layoutBar draws the top bar of a window of size window: Back when a
-// screen is open, the title, the list button (wide windows) and the theme
-// button.
+// screen is open, the title, the list button (a screen open on a wide
+// window) and the theme button.
 func (a *App) layoutBar(gtx layout.Context, window image.Point) layout.Dimensions {
 	th := a.env.Theme
 	title := "Tubewright"
@@ -272,9 +272,13 @@ func (a *App) layoutBar(gtx layout.Context, window image.Point) layout.Dimension
 			})
 		})
 	}))
+	if len(a.stack) > 0 {
+		// At home the catalog is the page itself: nothing to hide.
+		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			return a.side.layout(gtx, a.env, window)
+		}))
+	}
 	children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-		return a.side.layout(gtx, a.env, window)
-	}), layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 		return a.theme.layout(gtx, a.env)
 	}))
 	layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)

@@ -28,7 +28,8 @@ import (
 // show parts of them.
 type safetyScreen struct {
 	env     *Env
-	page    *Page
+	page    *Page // the one column, or the step's inputs when wide
+	side    *Page // a step's verdict and numbers when wide
 	pass    *safety.Pass
 	step    int // 0..len(items)-1, len(items) = review
 	ticks   []widget.Bool
@@ -63,6 +64,7 @@ func newSafetyScreen(env *Env) Screen {
 	s := &safetyScreen{
 		env:     env,
 		page:    NewPage(env),
+		side:    NewPage(env),
 		pass:    p,
 		ticks:   make([]widget.Bool, n),
 		notes:   make([]widget.Editor, n),
@@ -282,11 +284,17 @@ func (s *safetyScreen) Layout(gtx layout.Context) layout.Dimensions {
 	ws = append(ws, s.undoWidgets()...)
 	if s.step >= s.items() {
 		ws = append(ws, s.reviewWidgets()...)
-	} else {
-		ws = append(ws, s.itemWidgets(s.step)...)
+		return s.page.Layout(gtx, append(ws, s.navigation)...)
 	}
-	ws = append(ws, s.navigation)
-	return s.page.Layout(gtx, ws...)
+	// On wide windows a step's numbers, its verdict on top, sit beside
+	// its inputs.
+	wide := splitWide(gtx)
+	item, numbers := s.itemWidgets(s.step, wide)
+	ws = append(append(ws, item...), s.navigation)
+	if len(numbers) == 0 {
+		return s.page.Layout(gtx, ws...)
+	}
+	return splitLayout(gtx, s.page, s.side, nil, ws, numbers)
 }
 
 // progress is the "Item 3 of 11 · 2 ticked" line.
@@ -298,12 +306,14 @@ func (s *safetyScreen) progress(gtx layout.Context) layout.Dimensions {
 	return Note(s.env, txt)(gtx)
 }
 
-// itemWidgets draws checklist item i.
-func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
+// itemWidgets draws checklist item i. With wide set, the verdict, the
+// numbers and their caution box are returned apart (numbers), for a
+// column of their own beside the inputs; otherwise numbers is empty.
+func (s *safetyScreen) itemWidgets(i int, wide bool) (ws, numbers []layout.Widget) {
 	it := s.pass.Items[i]
-	ws := []layout.Widget{Heading(s.env, it.Title)}
+	ws = []layout.Widget{Heading(s.env, it.Title)}
 	c := s.calcs[i]
-	if c != nil {
+	if c != nil && !wide {
 		// The step's worst outcome first, where it cannot be missed.
 		ws = append(ws, c.Verdict())
 	}
@@ -314,7 +324,11 @@ func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
 		// The numbers and their caution box side by side where the width
 		// allows, so that the box is in view with the numbers.
 		out := c.Outputs()
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, out) })
+		if wide {
+			numbers = append([]layout.Widget{c.Verdict()}, out...)
+		} else {
+			ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, out) })
+		}
 	} else if len(it.Cautions) > 0 {
 		ws = append(ws, NewCaution(s.env, "", it.Cautions...).Layout)
 	}
@@ -324,7 +338,7 @@ func (s *safetyScreen) itemWidgets(i int) []layout.Widget {
 		},
 		s.noteEditor(i),
 	)
-	return ws
+	return ws, numbers
 }
 
 // noteEditor draws the optional note of item i.
