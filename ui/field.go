@@ -267,16 +267,16 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 			// minTarget tall.
 			return editorBox(f.env, gtx, &f.editor, f.Label, func(gtx layout.Context) layout.Dimensions {
 				return background(gtx, c.Surface, edge, gtx.Dp(6), bw, func(gtx layout.Context) layout.Dimensions {
-					in := layout.Inset{Left: 12, Right: 12, Top: 14, Bottom: 14}
-					gtx.Constraints.Min.Y = gtx.Dp(minTarget)
-					return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						return in.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-							e := material.Editor(th, &f.editor, f.hint())
-							e.Color = c.Text
-							e.HintColor = c.Muted
-							e.SelectionColor = c.Selected
-							return e.Layout(gtx)
-						})
+					// An inset keeps the minimum it is given: the text's
+					// minimum is what the padding leaves of minTarget.
+					pad := unit.Dp(14)
+					gtx.Constraints.Min.Y = max(0, gtx.Dp(minTarget)-2*gtx.Dp(pad))
+					return layout.Inset{Left: 12, Right: 12, Top: pad, Bottom: pad}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						e := material.Editor(th, &f.editor, f.hint())
+						e.Color = c.Text
+						e.HintColor = c.Muted
+						e.SelectionColor = c.Selected
+						return e.Layout(gtx)
 					})
 				})
 			})

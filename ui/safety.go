@@ -368,13 +368,13 @@ func (s *safetyScreen) textBox(gtx layout.Context, ed *widget.Editor, label, hin
 			}
 			return editorBox(s.env, gtx, ed, label, func(gtx layout.Context) layout.Dimensions {
 				return background(gtx, c.Surface, edge, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-					gtx.Constraints.Min.Y = gtx.Dp(minTarget)
-					return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						return layout.UniformInset(12).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-							e := material.Editor(th, ed, hint)
-							e.Color, e.HintColor = c.Text, c.Muted
-							return e.Layout(gtx)
-						})
+					// An inset keeps the minimum it is given: the text's
+					// minimum is what the padding leaves of minTarget.
+					gtx.Constraints.Min.Y = max(0, gtx.Dp(minTarget)-2*gtx.Dp(12))
+					return layout.UniformInset(12).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						e := material.Editor(th, ed, hint)
+						e.Color, e.HintColor = c.Text, c.Muted
+						return e.Layout(gtx)
 					})
 				})
 			})

@@ -1,6 +1,9 @@
 package ui
 
 import (
+	"image"
+
+	"gioui.org/f32"
 	"gioui.org/io/event"
 	"gioui.org/io/key"
 	"gioui.org/io/pointer"
@@ -8,6 +11,7 @@ import (
 	"gioui.org/layout"
 	"gioui.org/op"
 	"gioui.org/op/clip"
+	"gioui.org/op/paint"
 	"gioui.org/unit"
 	"gioui.org/widget"
 	"gioui.org/widget/material"
@@ -76,19 +80,70 @@ func editorBox(env *Env, gtx layout.Context, ed *widget.Editor, desc string, w l
 	return dims
 }
 
-// targetRow makes a row (a tick with its words, a list entry) at least
-// minTarget tall with w centred vertically in it.
+// targetRow makes a row (a list entry, a line of the review) at least
+// minTarget tall with w centred vertically in it; w gets no minimum
+// height.
 func targetRow(gtx layout.Context, w layout.Widget) layout.Dimensions {
-	gtx.Constraints.Min.Y = min(max(gtx.Constraints.Min.Y, gtx.Dp(minTarget)), gtx.Constraints.Max.Y)
-	return layout.W.Layout(gtx, w)
+	cgtx := gtx
+	cgtx.Constraints.Min.Y = 0
+	m := op.Record(gtx.Ops)
+	d := w(cgtx)
+	call := m.Stop()
+	h := max(d.Size.Y, min(gtx.Dp(minTarget), gtx.Constraints.Max.Y))
+	st := op.Offset(image.Pt(0, (h-d.Size.Y)/2)).Push(gtx.Ops)
+	call.Add(gtx.Ops)
+	st.Pop()
+	return layout.Dimensions{Size: image.Pt(d.Size.X, h), Baseline: d.Baseline}
 }
 
+// tickSize is the side of a tick's box.
+const tickSize = unit.Dp(24)
+
 // tick draws a check box with its words as one row the full width and at
-// least minTarget tall, so that a tap anywhere along it toggles b.
+// least minTarget tall, so that a tap anywhere along it toggles b. The box
+// is drawn here (not material's icon) so that it lines up with the first
+// line of the words: an outlined square, filled with the accent and ticked
+// when b is set.
 func tick(env *Env, gtx layout.Context, b *widget.Bool, label string) layout.Dimensions {
-	cb := material.CheckBox(env.Theme, b, label)
-	cb.Color = env.Colors.Text
-	cb.IconColor = env.Colors.Accent
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
-	return cb.Layout(atTarget(gtx))
+	return b.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		semantic.CheckBox.Add(gtx.Ops)
+		return targetRow(gtx, func(gtx layout.Context) layout.Dimensions {
+			gtx.Constraints.Min.X = gtx.Constraints.Max.X
+			return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
+				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+					return layout.Inset{Left: 4, Right: 12}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						return tickBox(gtx, env.Colors, b.Value)
+					})
+				}),
+				layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+					return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+						l := material.Body1(env.Theme, label)
+						l.Color = env.Colors.Text
+						return l.Layout(gtx)
+					})
+				}),
+			)
+		})
+	})
+}
+
+// tickBox draws the square of a tick: outlined when clear, filled with
+// the accent and carrying a check mark when set.
+func tickBox(gtx layout.Context, c Colors, on bool) layout.Dimensions {
+	s := gtx.Dp(tickSize)
+	size := image.Pt(s, s)
+	if !on {
+		box(gtx, size, c.Surface, c.Outline, gtx.Dp(4), gtx.Dp(2))
+		return layout.Dimensions{Size: size}
+	}
+	box(gtx, size, c.Accent, c.Accent, gtx.Dp(4), 0)
+	var p clip.Path
+	p.Begin(gtx.Ops)
+	f := float32(s)
+	p.MoveTo(f32.Pt(f*0.22, f*0.52))
+	p.LineTo(f32.Pt(f*0.42, f*0.72))
+	p.LineTo(f32.Pt(f*0.78, f*0.30))
+	paint.FillShape(gtx.Ops, c.OnAccent, clip.Stroke{Path: p.End(), Width: float32(gtx.Dp(3))}.Op())
+	return layout.Dimensions{Size: size}
 }
