@@ -80,12 +80,12 @@ func (f *Form) takeCarried() bool {
 		if text == "" {
 			continue
 		}
-		prev := it.text()
+		prev, earlier := it.text(), it.carriedFrom() != ""
 		f.SetText(it.in.Key, text)
 		if it.text() == prev {
 			continue // the picker or the chips refused it
 		}
-		if it.mark != nil {
+		if earlier {
 			prev = it.mark.prev // Undo goes back to the user's own text
 		}
 		from := c.From
@@ -147,8 +147,9 @@ func (f *Form) updateMarks(gtx layout.Context) bool {
 // Carried returns where the value of input key came from ("" when it was
 // typed here or is the default) and the text Undo would restore.
 func (f *Form) Carried(key string) (from, prev string) {
-	if m := f.item(key).mark; m != nil {
-		return m.from, m.prev
+	it := f.item(key)
+	if from := it.carriedFrom(); from != "" {
+		return from, it.mark.prev
 	}
 	return "", ""
 }
@@ -173,7 +174,7 @@ func (f *Form) takeNote(it *formItem) bool {
 	}
 	t := writtenIn(c.SI, units.DimTemperature)[0]
 	it.mark = &carryMark{from: c.From, text: it.text(),
-		info: "The hot end reaches " + t + " at onset (from " + c.From + "): take the allowable stress at that temperature."}
+		info: "The engine's hot end reaches " + t + " (from " + c.From + "): take the allowable stress at that temperature."}
 	return true
 }
 
