@@ -75,16 +75,25 @@ func newDeviceEditor(env *Env, example string) *deviceEditor {
 
 // load replaces the device with a built-in example.
 func (e *deviceEditor) load(name string) error {
-	b, err := linear.ExampleFile(name)
+	f, err := exampleDevice(name)
 	if err != nil {
 		return err
 	}
+	e.set(f)
+	return nil
+}
+
+// exampleDevice returns the built-in example name as a device file.
+func exampleDevice(name string) (*linear.DeviceFile, error) {
+	b, err := linear.ExampleFile(name)
+	if err != nil {
+		return nil, err
+	}
 	var f linear.DeviceFile
 	if err := jsonDecode(b, &f); err != nil {
-		return err
+		return nil, err
 	}
-	e.set(&f)
-	return nil
+	return &f, nil
 }
 
 // set fills the editor from a device file (code, not a user change, but

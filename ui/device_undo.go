@@ -64,15 +64,11 @@ func (e *deviceEditor) open(f *linear.DeviceFile, what string) {
 // openExample replaces the editor's device with the built-in example
 // name, with Undo.
 func (e *deviceEditor) openExample(name string) error {
-	b, err := linear.ExampleFile(name)
+	f, err := exampleDevice(name)
 	if err != nil {
 		return err
 	}
-	var f linear.DeviceFile
-	if err := jsonDecode(b, &f); err != nil {
-		return err
-	}
-	e.open(&f, "Loaded the example "+exampleWords(name)+".")
+	e.open(f, "Loaded the example "+exampleWords(name)+".")
 	return nil
 }
 
