@@ -56,7 +56,11 @@ func wantCarried(t *testing.T, h *harness, f *Form, key, label, text, from strin
 // input key reads want again, with no mark left.
 func undo(t *testing.T, h *harness, f *Form, key, label, want string) {
 	t.Helper()
-	h.click(h.mustDesc(label + " undo").Desc.Bounds)
+	r := h.mustDesc(label + " undo").Desc.Bounds
+	if r.Dx() < 48 || r.Dy() < 48 { // the harness draws 1 px per dp
+		t.Errorf("%s: Undo under %s is %v dp, under 48 × 48", f.Sheet.ID, label, r.Size())
+	}
+	h.click(r)
 	h.frames(2)
 	if got := f.Text(key); got != want {
 		t.Errorf("%s: after Undo %s reads %q, want %q", f.Sheet.ID, key, got, want)
