@@ -103,7 +103,7 @@ func (r *report) inputQuantity(name string, q units.Quantity, typed string) {
 		si = units.FormatPM(q.Value, q.Uncertainty, q.Dim)
 	}
 	shown := typed
-	if strings.ReplaceAll(si, " ", "") != strings.ReplaceAll(typed, " ", "") {
+	if q.Value != 0 && strings.ReplaceAll(si, " ", "") != strings.ReplaceAll(typed, " ", "") {
 		shown += "  (= " + si + ")"
 	}
 	if q.Dim == units.DimPressure {

@@ -173,6 +173,7 @@ func TestReportInputEcho(t *testing.T) {
 		{"12mm", units.DimLength, "12mm\n"},
 		{"0.5m", units.DimLength, "0.5m  (= 500 mm)"},
 		{"0.3", units.DimNone, "0.3\n"},
+		{"0 mm", units.DimLength, "0 mm\n"},
 	}
 	for _, c := range cases {
 		t.Run(c.typed, func(t *testing.T) {
