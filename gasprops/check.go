@@ -56,7 +56,7 @@ func (m *Mixture) limits(t float64) (lo, hi float64, who *Species) {
 
 func fmtK(t float64) string { return fmtNum(t) + " K" }
 
-func fmtNum(v float64) string { return strconv.FormatFloat(v, 'g', 4, 64) }
+func fmtNum(v float64) string { return units.Number(v, 4) }
 
 // nonIdealLimit is the largest |B p/(R T)| for which the second-virial
 // correction is applied; beyond it the truncated series is no estimate at
@@ -91,7 +91,7 @@ func (m *Mixture) checkPressure(t, pa float64, nonIdeal bool, warn []string) ([]
 	case nonIdeal && math.Abs(d) > nonIdealLimit:
 		e := units.NewRangeError("pressure", pa, 0, nonIdealLimit*R*t/math.Abs(b), "Pa").Of(units.SubjectPressure)
 		e.Why = "the second-virial correction for " + m.String() + " holds only while |Bp/RT| ≤ " +
-			strconv.FormatFloat(nonIdealLimit, 'g', 2, 64) + "; denser gas is close to condensing or supercritical"
+			units.Number(nonIdealLimit, 2) + "; denser gas is close to condensing or supercritical"
 		return nil, e
 	case math.Abs(d) > nonIdealWarnAt && !nonIdeal:
 		warn = append(warn, "at this pressure the real gas departs from the ideal gas by about "+

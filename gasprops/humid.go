@@ -158,7 +158,7 @@ func humidAirX(T units.Temperature, p units.Pressure, x float64, o *Options) (Pr
 		Warnings:             dry.Warnings,
 	}
 	if !finite(h) {
-		return Properties{}, fmt.Errorf("gasprops: humid air properties overflow at %g K, %g Pa", t, pa)
+		return Properties{}, fmt.Errorf("gasprops: humid air properties overflow at %s, %s", units.Format(t, units.DimTemperature), units.Format(pa, units.DimPressure))
 	}
 	return h, nil
 }

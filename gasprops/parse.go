@@ -6,6 +6,8 @@ import (
 	"math"
 	"strconv"
 	"strings"
+
+	"tubewright/calc/units"
 )
 
 // This file reads gas names and mixture specifications typed by people.
@@ -101,7 +103,7 @@ func ParseMixture(s string) (Mixture, error) {
 		return Mixture{}, fmt.Errorf("gas mixture %q: give a mole fraction for every gas, e.g. helium:0.7,argon:0.3", txt)
 	}
 	if math.Abs(sum-1) > 0.01 {
-		return Mixture{}, fmt.Errorf("mole fractions in %q sum to %s; they must sum to 1 (or 100 %%) within 1 %%", txt, strconv.FormatFloat(sum, 'g', 4, 64))
+		return Mixture{}, fmt.Errorf("mole fractions in %q sum to %s; they must sum to 1 (or 100 %%) within 1 %%", txt, units.Number(sum, 4))
 	}
 	for _, it := range items[:n] {
 		if it.x == 0 {
@@ -152,7 +154,7 @@ func parseFraction(s string) (float64, error) {
 	}
 	v *= scale
 	if v < 0 || v > 1.01 {
-		return 0, fmt.Errorf("%s is outside 0–1 (0–100 %%)", strconv.FormatFloat(v, 'g', 4, 64))
+		return 0, fmt.Errorf("%s is outside 0–1 (0–100 %%)", units.Number(v, 4))
 	}
 	return v, nil
 }
@@ -177,7 +179,7 @@ func (m Mixture) String() string {
 		}
 		b.WriteString(c.Species.Name)
 		b.WriteByte(' ')
-		b.WriteString(strconv.FormatFloat(c.X*100, 'g', 4, 64))
+		b.WriteString(units.Number(c.X*100, 4))
 		b.WriteString(" %")
 	}
 	return b.String()

@@ -2,7 +2,6 @@ package ui
 
 import (
 	"fmt"
-	"strconv"
 	"strings"
 
 	"gioui.org/layout"
@@ -80,7 +79,7 @@ func (g *GasPicker) SetText(s string) error {
 		return nil
 	case len(cs) == 2 && g.first.Select(cs[0].Species.Name) && g.second.Select(cs[1].Species.Name):
 		g.gas.Select(mixKey)
-		g.frac.SetText(strconv.FormatFloat(cs[1].X, 'g', 6, 64))
+		g.frac.SetText(units.Decimal(cs[1].X, 6))
 		return nil
 	}
 	return fmt.Errorf("gas %q: the picker offers one gas or two noble gases", s)
@@ -97,7 +96,7 @@ func (g *GasPicker) Text() string {
 	if !ok || x < 0 || x > 1 {
 		return ""
 	}
-	f := func(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
+	f := func(v float64) string { return units.Decimal(v, 6) }
 	return g.first.Selected() + ":" + f(1-x) + "," + g.second.Selected() + ":" + f(x)
 }
 

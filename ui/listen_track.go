@@ -4,12 +4,13 @@ import (
 	"encoding/csv"
 	"io"
 	"math"
-	"strconv"
 	"strings"
 
 	"gioui.org/io/clipboard"
 
 	"tubewright/calc/sheet"
+
+	"tubewright/calc/units"
 )
 
 // This file draws the listen screen's track (pitch and level against
@@ -39,8 +40,8 @@ func (s *listenScreen) showPlots() {
 }
 
 // trackCSV writes the track table as comma-separated values with its
-// header line, numbers in the shortest form that reads back the same:
-// what twcalc listen --track prints.
+// header line, numbers in plain decimals with 7 significant digits: what
+// twcalc listen --track prints.
 func trackCSV(t *sheet.Table) string {
 	var b strings.Builder
 	w := csv.NewWriter(&b)
@@ -48,7 +49,7 @@ func trackCSV(t *sheet.Table) string {
 	rec := make([]string, len(t.Header))
 	for _, r := range t.Rows {
 		for j, v := range r {
-			rec[j] = strconv.FormatFloat(v, 'g', -1, 64)
+			rec[j] = units.Decimal(v, 7)
 		}
 		_ = w.Write(rec)
 	}

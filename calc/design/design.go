@@ -405,7 +405,7 @@ func (sv *solver) notes(res *Result) string {
 		units.Format(t.Ambient, units.DimTemperature), t.Ends, t.Stack)
 }
 
-func trim(v float64) string { return fmt.Sprintf("%.4g", v) }
+func trim(v float64) string { return units.Decimal(v, 4) }
 
 // gapOf returns the gap of kind k at hydraulic radius rh.
 func gapOf(k StackKind, rh, wire float64) float64 {

@@ -467,7 +467,7 @@ func positive(text string, dim units.Dimension, field string, part int, kind str
 	}
 	if !(v >= lo && v <= hi) {
 		u := units.SIUnit(dim)
-		return 0, &FieldError{Part: part, Kind: kind, Field: field, Msg: fmt.Sprintf("= %s must be between %g and %g %s", text, lo, hi, u)}
+		return 0, &FieldError{Part: part, Kind: kind, Field: field, Msg: fmt.Sprintf("= %s must be between %s and %s %s", text, units.Number(lo, 6), units.Number(hi, 6), u)}
 	}
 	return v, nil
 }

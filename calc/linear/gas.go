@@ -1,7 +1,6 @@
 package linear
 
 import (
-	"fmt"
 	"math"
 
 	"tubewright/calc/units"
@@ -97,5 +96,5 @@ func (g PowerLawGas) Name() string {
 	if g.Label != "" {
 		return g.Label
 	}
-	return fmt.Sprintf("power-law gas M = %g kg/mol", g.MolarMass)
+	return "power-law gas M = " + units.Format(g.MolarMass, units.DimMolarMass)
 }

@@ -5,6 +5,8 @@ import (
 	"fmt"
 	"math"
 	"math/cmplx"
+
+	"tubewright/calc/units"
 )
 
 // HeatPumpSettings adds the heat pump's own inputs to Settings.
@@ -113,7 +115,7 @@ func pumpDrive(dev *Device, in *HeatPumpSettings) (*Part, float64, error) {
 		return nil, 0, &FieldError{Part: 0, Kind: KindDriver, Field: "frequency", Msg: "is missing: the heat pump needs the drive frequency"}
 	}
 	if !(in.CoolingLoad >= 0) || math.IsInf(in.CoolingLoad, 0) {
-		return nil, 0, fmt.Errorf("heat pump: cooling load %g W must be zero or positive", in.CoolingLoad)
+		return nil, 0, fmt.Errorf("heat pump: cooling load %s must be zero or positive", units.Format(in.CoolingLoad, units.DimPower))
 	}
 	return drv, f, nil
 }

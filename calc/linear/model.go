@@ -7,6 +7,8 @@ import (
 	"math/cmplx"
 
 	"tubewright/calc/numeric"
+
+	"tubewright/calc/units"
 )
 
 // This file turns a Device into segments and integrates the linear wave
@@ -254,7 +256,7 @@ func (m *model) derivative(x float64, y, d []complex128) {
 	}
 	if !(T > 0) {
 		if m.err == nil {
-			m.err = fmt.Errorf("mean temperature fell to %.3g K in part %d (stack)", T, s.part+1)
+			m.err = fmt.Errorf("mean temperature fell to %s in part %d (stack)", units.Format(T, units.DimTemperature), s.part+1)
 		}
 		d[0], d[1], d[2] = 0, 0, 0
 		return

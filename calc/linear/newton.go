@@ -5,6 +5,8 @@ import (
 	"math"
 
 	"gonum.org/v1/gonum/mat"
+
+	"tubewright/calc/units"
 )
 
 // newtonProblem is a small square nonlinear system solved by damped Newton
@@ -101,7 +103,7 @@ func (p *newtonProblem) solve() error {
 			f /= 2
 		}
 		if !accepted {
-			return fmt.Errorf("no step reduces the residual (norm %.3g)", p.norm)
+			return fmt.Errorf("no step reduces the residual (norm %s)", units.Number(p.norm, 3))
 		}
 		copy(p.x, xt)
 		copy(r, rt)
@@ -111,5 +113,5 @@ func (p *newtonProblem) solve() error {
 		}
 	}
 	p.iterations = p.maxIter
-	return fmt.Errorf("the iteration limit was reached with residual norm %.3g", p.norm)
+	return fmt.Errorf("the iteration limit was reached with residual norm %s", units.Number(p.norm, 3))
 }

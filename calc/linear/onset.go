@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+
+	"tubewright/calc/units"
 )
 
 // Settings adjusts the solves. A nil *Settings means the defaults.
@@ -75,7 +77,7 @@ type ConvergenceError struct {
 func (e *ConvergenceError) Error() string {
 	s := fmt.Sprintf("%s solve did not converge after %d iterations (%s); last iterate:", e.Solve, e.Iterations, e.Why)
 	for i, v := range e.Last {
-		s += fmt.Sprintf(" %s %.6g", e.Names[i], v)
+		s += " " + e.Names[i] + " " + units.Number(v, 6)
 		if i < len(e.Last)-1 {
 			s += ","
 		}
@@ -307,7 +309,7 @@ func (m *model) warnings(f, th float64) []string {
 		}
 		dn := math.Sqrt(2 * g.Viscosity / (g.Density * omega))
 		if dn > 0.1*s.rh {
-			w = append(w, fmt.Sprintf("part %d (tube): viscous penetration depth %.3g mm is not small against the hydraulic radius %.3g mm; the boundary-layer losses are rough", s.part+1, dn*1e3, s.rh*1e3))
+			w = append(w, fmt.Sprintf("part %d (tube): viscous penetration depth %s is not small against the hydraulic radius %s; the boundary-layer losses are rough", s.part+1, units.Format(dn, units.DimLength), units.Format(s.rh, units.DimLength)))
 		}
 		if ka := omega / g.SoundSpeed * s.radius; ka > 0.5 && s.part == len(m.segs)-2 && m.dev.Parts[len(m.dev.Parts)-1].Kind == KindOpenEnd {
 			w = append(w, fmt.Sprintf("open end: ka = %.2f is not small; the low-frequency radiation impedance is rough", ka))

@@ -56,7 +56,7 @@ func checkPorosity(i int, kind string, porosity float64, p Pores) error {
 		from = fmt.Sprintf("the pins (diameter %s, pitch %s) give %.3f", mmText(2*p.PinRadius), mmText(p.Pitch), geo)
 	}
 	return &FieldError{Part: i, Kind: kind, Field: "porosity", Msg: fmt.Sprintf(
-		"= %.3g contradicts the pore geometry: %s; write \"%.3f\" or correct the pores", porosity, from, geo)}
+		"= %s contradicts the pore geometry: %s; write \"%.3f\" or correct the pores", units.Number(porosity, 3), from, geo)}
 }
 
 // GapWords shows the gap between plates and its half together, the way

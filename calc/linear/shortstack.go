@@ -3,6 +3,8 @@ package linear
 import (
 	"fmt"
 	"math"
+
+	"tubewright/calc/units"
 )
 
 // CriticalGradient returns the critical mean-temperature gradient (K/m) of a
@@ -88,11 +90,11 @@ func ShortStack(in ShortStackInput) (ShortStackResult, error) {
 		{"sound speed", in.SoundSpeed}, {"frequency", in.Frequency}, {"position", in.Position},
 		{"length", in.Length}, {"half gap", in.HalfGap}, {"thermal penetration depth", in.ThermalDepth}} {
 		if !(f.v > 0) || math.IsInf(f.v, 0) {
-			return ShortStackResult{}, fmt.Errorf("short stack: %s must be positive and finite (γ above 1), got %g", f.name, f.v)
+			return ShortStackResult{}, fmt.Errorf("short stack: %s must be positive and finite (γ above 1), got %s", f.name, units.Number(f.v, 4))
 		}
 	}
 	if !(in.Phase >= 0) || math.IsInf(in.Phase, 0) {
-		return ShortStackResult{}, fmt.Errorf("short stack: phase must be zero or positive and finite, got %g", in.Phase)
+		return ShortStackResult{}, fmt.Errorf("short stack: phase must be zero or positive and finite, got %s", units.Number(in.Phase, 4))
 	}
 	r := ShortStackResult{MeanTemperature: in.MeanTemperature}
 	k := 2 * math.Pi * in.Frequency / in.SoundSpeed

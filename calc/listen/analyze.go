@@ -111,7 +111,7 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	sp := newSpectrum(seg[:1<<(bits.Len(uint(len(seg)))-1)], fs)
 	lo, hi := sp.band(lowHz, highHz)
 	if lo > hi {
-		return nil, fmt.Errorf("%w: the loud part (%.3f s) is too short to resolve %g Hz", ErrEmpty, float64(len(seg))/fs, lowHz)
+		return nil, fmt.Errorf("%w: the loud part (%s) is too short to resolve %s", ErrEmpty, units.Format(float64(len(seg))/fs, units.DimTime), units.Format(lowHz, units.DimFrequency))
 	}
 	k0 := sp.peak(lo, hi)
 	bin := 2 * math.Pi * sp.binHz / fs // coarse bin, rad/sample
@@ -164,7 +164,7 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	f := omega * fs / (2 * math.Pi)
 	res.Frequency = f
 	if k0 == lo || k0 == hi {
-		res.Warnings = append(res.Warnings, fmt.Sprintf("The strongest peak (%.1f Hz) is at the edge of the searched band %g–%g Hz; the resonance may lie outside it.", f, lowHz, highHz))
+		res.Warnings = append(res.Warnings, fmt.Sprintf("The strongest peak (%.1f Hz) is at the edge of the searched band %s–%s; the resonance may lie outside it.", f, units.Format(lowHz, units.DimFrequency), units.Format(highHz, units.DimFrequency)))
 	}
 	for i := range g {
 		fw[i] *= g[i]

@@ -189,7 +189,7 @@ func (it *Integrator) Integrate(f func(x float64, y, dydx []complex128), x0, x1 
 	f(x, y, k1)
 	res.Evaluations++
 	if !finiteC(k1) {
-		return res, fmt.Errorf("derivative at x = %g: %w", x, ErrNonFinite)
+		return res, fmt.Errorf("derivative at x = %s: %w", num(x), ErrNonFinite)
 	}
 	if h == 0 {
 		h = it.startStep(f, x, y, dir, rtol, atol, hmax, &res)
@@ -200,7 +200,7 @@ func (it *Integrator) Integrate(f func(x float64, y, dydx []complex128), x0, x1 
 	for attempts := 0; ; attempts++ {
 		if attempts >= maxSteps {
 			res.X = x
-			return res, fmt.Errorf("%d steps from x = %g reached x = %g, not %g: %w", maxSteps, x0, x, x1, ErrMaxSteps)
+			return res, fmt.Errorf("%d steps from x = %s reached x = %s, not %s: %w", maxSteps, num(x0), num(x), num(x1), ErrMaxSteps)
 		}
 		last := false
 		if dir*(x+dir*h-x1) >= 0 {
@@ -209,7 +209,7 @@ func (it *Integrator) Integrate(f func(x float64, y, dydx []complex128), x0, x1 
 		}
 		if h <= 4*math.Abs(x)*rkEps || h == 0 {
 			res.X = x
-			return res, fmt.Errorf("at x = %g: %w", x, ErrStepTooSmall)
+			return res, fmt.Errorf("at x = %s: %w", num(x), ErrStepTooSmall)
 		}
 		hs := dir * h
 		for i := 0; i < n; i++ {
@@ -257,7 +257,7 @@ func (it *Integrator) Integrate(f func(x float64, y, dydx []complex128), x0, x1 
 			lastRejected = true
 			if h <= 4*math.Abs(x)*rkEps || h < 1e-300 {
 				res.X = x
-				return res, fmt.Errorf("at x = %g: %w", x, ErrNonFinite)
+				return res, fmt.Errorf("at x = %s: %w", num(x), ErrNonFinite)
 			}
 			continue
 		}

@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+
+	"tubewright/calc/units"
 )
 
 // ErrNoBracket is returned by Brent when f(a) and f(b) have the same sign
@@ -92,7 +94,7 @@ func Brent(f func(float64) float64, a, b float64, s *RootSettings) (RootResult, 
 	res.Evaluations = 2
 	if !finite(fa) || !finite(fb) {
 		res.X = a
-		return res, fmt.Errorf("%w at the interval ends [%g, %g]", ErrNoBracket, a, b)
+		return res, fmt.Errorf("%w at the interval ends [%s, %s]", ErrNoBracket, num(a), num(b))
 	}
 	if fa == 0 {
 		res.X, res.Converged = a, true
@@ -107,7 +109,7 @@ func Brent(f func(float64) float64, a, b float64, s *RootSettings) (RootResult, 
 		if math.Abs(fb) < math.Abs(fa) {
 			res.X = b
 		}
-		return res, fmt.Errorf("%w: f(%g) = %g, f(%g) = %g", ErrNoBracket, a, fa, b, fb)
+		return res, fmt.Errorf("%w: f(%s) = %s, f(%s) = %s", ErrNoBracket, num(a), num(fa), num(b), num(fb))
 	}
 
 	// b is the best estimate, a the previous one, c the point with f of
@@ -177,14 +179,14 @@ func Brent(f func(float64) float64, a, b float64, s *RootSettings) (RootResult, 
 		res.Evaluations++
 		if !finite(fb) {
 			res.X = a
-			return res, fmt.Errorf("%w: f(%g) = %g", ErrNotFinite, b, fb)
+			return res, fmt.Errorf("%w: f(%s) = %s", ErrNotFinite, num(b), num(fb))
 		}
 	}
 	res.X = b
 	if math.Abs(fc) < math.Abs(fb) {
 		res.X = c
 	}
-	return res, fmt.Errorf("%w after %d iterations (bracket [%g, %g])", ErrNotConverged, maxIter, math.Min(b, c), math.Max(b, c))
+	return res, fmt.Errorf("%w after %d iterations (bracket [%s, %s])", ErrNotConverged, maxIter, num(math.Min(b, c)), num(math.Max(b, c)))
 }
 
 // FindBrackets scans [a, b] in n equal sub-intervals and returns, in
@@ -258,3 +260,12 @@ func isPole(fs []float64, i int) bool {
 }
 
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// num writes a number of a message plainly, without an exponent (these
+// messages can reach a screen).
+func num(v float64) string {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return fmt.Sprint(v)
+	}
+	return units.Number(v, 6)
+}

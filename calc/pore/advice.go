@@ -3,6 +3,8 @@ package pore
 import (
 	"fmt"
 	"math"
+
+	"tubewright/calc/units"
 )
 
 // Device is what the stack is for, for placement advice.
@@ -47,11 +49,11 @@ func PositionAdvice(d Device, pl Placement) string {
 	case pl.KX > math.Pi/4:
 		where = "between λ/8 and the velocity antinode (λ/4)"
 	}
-	head := fmt.Sprintf("The stack centre is %s (kx = %.3g; λ/8 is kx = 0.785). ", where, pl.KX)
+	head := fmt.Sprintf("The stack centre is %s (kx = %s; λ/8 is kx = 0.785). ", where, units.Number(pl.KX, 3))
 	if d == HeatPump {
 		return head + "A heat pump pumps the most heat per unit drive at λ/8 (heat-flux factor 1; here " +
-			fmt.Sprintf("%.2g", pl.HeatFluxFactor) + "), while viscous loss grows toward the velocity antinode " +
-			"(loss factor here " + fmt.Sprintf("%.2g", pl.ViscousFactor) + "); refrigerator stacks are commonly placed " +
+			units.Number(pl.HeatFluxFactor, 2) + "), while viscous loss grows toward the velocity antinode " +
+			"(loss factor here " + units.Number(pl.ViscousFactor, 2) + "); refrigerator stacks are commonly placed " +
 			"a little nearer the pressure antinode than λ/8 for a better coefficient of performance (common practice, no published source)."
 	}
 	return head + "An engine needs a steeper temperature gradient to start the nearer it sits to the pressure antinode " +

@@ -3,6 +3,8 @@ package pore
 import (
 	"math"
 	"math/cmplx"
+
+	"tubewright/calc/units"
 )
 
 // matrix is a random porous matrix (screens, fibres) described by its
@@ -116,8 +118,9 @@ func SolidFraction(packedMass, materialDensity, packedVolume float64) (float64, 
 	}
 	s := packedMass / (materialDensity * packedVolume)
 	if s >= 1 {
-		return 0, impossible("packed mass %.4g kg is not less than the mass of solid material filling the packed volume (%.4g kg = %.4g kg/m³ × %.4g m³)",
-			packedMass, materialDensity*packedVolume, materialDensity, packedVolume)
+		return 0, impossible("packed mass %s is not less than the mass of solid material filling the packed volume (%s = %s × %s)",
+			units.Format(packedMass, units.DimMass), units.Format(materialDensity*packedVolume, units.DimMass),
+			units.Format(materialDensity, units.DimDensity), units.Format(packedVolume, units.DimVolume))
 	}
 	return s, nil
 }

@@ -3,7 +3,6 @@ package pore
 import (
 	"fmt"
 	"math"
-	"strconv"
 
 	"tubewright/calc/units"
 )
@@ -67,7 +66,7 @@ func mm(v float64) string {
 
 // trimFloat formats v with 4 significant digits and no trailing zeros.
 func trimFloat(v float64) string {
-	return strconv.FormatFloat(v, 'g', 4, 64)
+	return units.Number(v, 4)
 }
 
 // unitsRangeUnit is a RangeError with a unit.

@@ -126,8 +126,8 @@ func Judge(s Shape, role Role, deltaKappa float64) (Verdict, error) {
 
 // words phrases the verdict.
 func words(v Verdict) string {
-	band := fmt.Sprintf("%.3g–%.3g δκ", v.Rule.Low, v.Rule.High)
-	head := fmt.Sprintf("%s for a %s: the hydraulic radius is %.3g δκ, the usual range is %s.", capital(v.Call.String()), v.Role, v.RhOverDelta, band)
+	band := units.Number(v.Rule.Low, 3) + "–" + units.Number(v.Rule.High, 3) + " δκ"
+	head := fmt.Sprintf("%s for a %s: the hydraulic radius is %s δκ, the usual range is %s.", capital(v.Call.String()), v.Role, units.Number(v.RhOverDelta, 3), band)
 	switch {
 	case v.Role == RoleStack && v.Call == TooTight:
 		return head + " The gas is held close to the wall's temperature, so little heat is pumped per cycle and viscous loss grows."

@@ -2,8 +2,8 @@ package resonator
 
 import (
 	"errors"
+	"fmt"
 	"math"
-	"strconv"
 
 	"tubewright/calc/units"
 	"tubewright/gasprops"
@@ -26,14 +26,10 @@ type positiveError struct{ *units.RangeError }
 
 func (e *positiveError) Error() string {
 	r := e.RangeError
-	v := strconv.FormatFloat(r.Value, 'g', 4, 64)
 	if math.IsNaN(r.Value) || math.IsInf(r.Value, 0) {
-		return r.Field + " " + v + " is not a finite number"
+		return r.Field + " " + fmt.Sprintf("%+v", r.Value) + " is not a finite number"
 	}
-	if r.Unit != "" {
-		v += " " + r.Unit
-	}
-	return r.Field + " " + v + " must be greater than zero"
+	return r.Field + " " + units.FormatSI(r.Value, r.Unit) + " must be greater than zero"
 }
 
 func (e *positiveError) Unwrap() error { return e.RangeError }

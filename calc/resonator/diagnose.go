@@ -68,7 +68,7 @@ func (s Setup) DiagnoseTemperature(fMeas float64) (Estimate, error) {
 		h := func(T float64) float64 { return s.frequencyOf(t, s.Gas, T, x[3]) - x[0] }
 		res, err := numeric.Brent(h, tmin, tmax, &numeric.RootSettings{RelTol: 1e-12})
 		if err != nil {
-			return 0, 0, nil, s.noSolution(x[0], h, tmin, tmax, fmt.Sprintf("gas temperatures %g–%g K", tmin, tmax), err)
+			return 0, 0, nil, s.noSolution(x[0], h, tmin, tmax, "gas temperatures "+units.Number(tmin, 6)+"–"+units.Format(tmax, units.DimTemperature), err)
 		}
 		if g, err := s.properties(res.X, x[3]); err == nil {
 			warn = g.Warnings
@@ -216,11 +216,11 @@ func (s Setup) frequencyOf(t Tube, mix gasprops.Mixture, T, p float64) float64 {
 func (s Setup) noSolution(fMeas float64, h func(float64) float64, lo, hi float64, what string, cause error) error {
 	const field = "measured frequency"
 	if !errors.Is(cause, numeric.ErrNoBracket) {
-		return fmt.Errorf("%s %.4g Hz: the solver failed: %w", field, fMeas, cause)
+		return fmt.Errorf("%s %s: the solver failed: %w", field, units.Format(fMeas, units.DimFrequency), cause)
 	}
 	fa, fb := h(lo)+fMeas, h(hi)+fMeas
 	if !finite(fa) || !finite(fb) {
-		return fmt.Errorf("%s %.4g Hz: %w (the model cannot be evaluated at the ends of %s)", field, fMeas, ErrNoSolution, what)
+		return fmt.Errorf("%s %s: %w (the model cannot be evaluated at the ends of %s)", field, units.Format(fMeas, units.DimFrequency), ErrNoSolution, what)
 	}
 	e := units.NewRangeError(field, fMeas, math.Min(fa, fb), math.Max(fa, fb), "Hz")
 	e.Why = fmt.Sprintf("%v: this tube resonates only in that band for %s", ErrNoSolution, what)

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"strings"
+
+	"tubewright/calc/units"
 )
 
 // Ends says which ends of a uniform tube are closed (rigid) and which are
@@ -173,11 +175,11 @@ func CorrectionLength(c EndCorrection, a, ka float64) (delta float64, warning st
 func kaWarning(ka, fitMax float64) string {
 	switch {
 	case ka >= CutoffKA:
-		return fmt.Sprintf("ka = %.3g is above the first cross-mode cutoff 1.841: the tube is too wide for plane waves at this frequency and the result is not reliable", ka)
+		return "ka = " + units.Number(ka, 3) + " is above the first cross-mode cutoff 1.841: the tube is too wide for plane waves at this frequency and the result is not reliable"
 	case ka > fitMax:
-		return fmt.Sprintf("ka = %.3g is beyond the end-correction fit (ka < %.3g); the correction at the fit's end is used", ka, fitMax)
+		return "ka = " + units.Number(ka, 3) + " is beyond the end-correction fit (ka < " + units.Number(fitMax, 3) + "); the correction at the fit's end is used"
 	case ka > lumpedWarnKA:
-		return fmt.Sprintf("ka = %.3g is above 0.5: the open end radiates strongly and the end correction is only approximate", ka)
+		return "ka = " + units.Number(ka, 3) + " is above 0.5: the open end radiates strongly and the end correction is only approximate"
 	}
 	return ""
 }

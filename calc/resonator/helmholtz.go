@@ -138,10 +138,10 @@ func HelmholtzFrequency(h Helmholtz, g gasprops.Properties) (HelmholtzResult, er
 		r.Warnings = append(r.Warnings, wOut)
 	}
 	if side := math.Cbrt(h.Volume); side > r.Wavelength/10 {
-		r.Warnings = append(r.Warnings, fmt.Sprintf("the cavity (size %.3g m) is not small compared with the wavelength %.3g m: the lumped Helmholtz model is only approximate", side, r.Wavelength))
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the cavity (size %s) is not small compared with the wavelength %s: the lumped Helmholtz model is only approximate", units.Format(side, units.DimLength), units.Format(r.Wavelength, units.DimLength)))
 	}
 	if r.EffectiveLength > r.Wavelength/10 {
-		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck (effective length %.3g m) is not short compared with the wavelength %.3g m: the lumped Helmholtz model is only approximate", r.EffectiveLength, r.Wavelength))
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck (effective length %s) is not short compared with the wavelength %s: the lumped Helmholtz model is only approximate", units.Format(r.EffectiveLength, units.DimLength), units.Format(r.Wavelength, units.DimLength)))
 	}
 	r.neckChecks(h, g)
 	r.Warnings = append(r.Warnings, g.Warnings...)
@@ -163,7 +163,7 @@ func (r *HelmholtzResult) neckChecks(h Helmholtz, g gasprops.Properties) {
 		r.DistributedFrequency = res.X * c / (2 * math.Pi * leff)
 	}
 	if d := r.Frequency/r.DistributedFrequency - 1; d > 0.01 {
-		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck holds %.0f %% of the cavity's volume (with its end corrections): the lumped Helmholtz formula is %.1f %% high; the neck treated as a short tube gives %.4g Hz", 100*r.NeckVolumeRatio, 100*d, r.DistributedFrequency))
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck holds %.0f %% of the cavity's volume (with its end corrections): the lumped Helmholtz formula is %.1f %% high; the neck treated as a short tube gives %s", 100*r.NeckVolumeRatio, 100*d, units.Format(r.DistributedFrequency, units.DimFrequency)))
 	}
 	_, dn := Depths(g, r.Frequency)
 	r.ViscousDepth = dn
@@ -174,6 +174,6 @@ func (r *HelmholtzResult) neckChecks(h Helmholtz, g gasprops.Properties) {
 	m := real(1 / (1 - sh.F(dn)))
 	r.NeckViscousShift = 1/math.Sqrt((L*m+r.InnerCorrection+r.OuterCorrection)/leff) - 1
 	if r.NeckViscousShift < -0.02 {
-		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck radius is only %.3g viscous penetration depths (δν = %.3g mm): the boundary layer's added mass lowers the frequency by about %.0f %% and damps it strongly; the lumped formula does not include this", a/dn, dn*1e3, -100*r.NeckViscousShift))
+		r.Warnings = append(r.Warnings, fmt.Sprintf("the neck radius is only %s viscous penetration depths (δν = %s): the boundary layer's added mass lowers the frequency by about %.0f %% and damps it strongly; the lumped formula does not include this", units.Number(a/dn, 3), units.Format(dn, units.DimLength), -100*r.NeckViscousShift))
 	}
 }

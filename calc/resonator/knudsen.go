@@ -5,6 +5,8 @@ import (
 	"math"
 
 	"tubewright/gasprops"
+
+	"tubewright/calc/units"
 )
 
 // KnudsenLimit is the Knudsen number above which the continuum model of
@@ -38,5 +40,5 @@ func knudsenWarning(g gasprops.Properties, a float64) string {
 	if !(a > 0) || lam/a <= KnudsenLimit {
 		return ""
 	}
-	return fmt.Sprintf("the mean free path of the gas (%.3g µm) is %.2g of the radius, above the continuum limit 0.01 (Knudsen number): the gas slips at the wall and the wall losses and frequency are only approximate; raise the pressure or widen the tube", lam*1e6, lam/a)
+	return fmt.Sprintf("the mean free path of the gas (%s) is %s of the radius, above the continuum limit 0.01 (Knudsen number): the gas slips at the wall and the wall losses and frequency are only approximate; raise the pressure or widen the tube", units.Format(lam, units.DimLength), units.Number(lam/a, 2))
 }

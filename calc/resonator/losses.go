@@ -5,6 +5,8 @@ import (
 	"math"
 
 	"tubewright/gasprops"
+
+	"tubewright/calc/units"
 )
 
 // Depths returns the thermal and viscous penetration depths (m) of a gas at
@@ -47,7 +49,7 @@ func KirchhoffAttenuation(g gasprops.Properties, a, f float64) (alpha float64, w
 	w := 2 * math.Pi * f
 	alpha = w / (2 * g.SoundSpeed * a) * (dn + (g.Gamma-1)*dk)
 	if a < 10*dn {
-		warning = fmt.Sprintf("radius %.3g m is less than 10 viscous penetration depths (δν = %.3g m): the boundary-layer (Kirchhoff) loss is only approximate", a, dn)
+		warning = fmt.Sprintf("radius %s is less than 10 viscous penetration depths (δν = %s): the boundary-layer (Kirchhoff) loss is only approximate", units.Format(a, units.DimLength), units.Format(dn, units.DimLength))
 	}
 	return alpha, warning, nil
 }

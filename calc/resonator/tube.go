@@ -216,7 +216,7 @@ func TubeLength(t Tube, f float64, g gasprops.Properties) (Result, error) {
 			fmax = r.X
 		}
 		e := units.NewRangeError("frequency", f, 0, fmax, "Hz")
-		e.Why = fmt.Sprintf("the end corrections of a %.3g m radius are longer than the acoustic length of mode %d above that", t.Radius, t.Mode)
+		e.Why = fmt.Sprintf("the end corrections of a %s radius are longer than the acoustic length of mode %d above that", units.Format(t.Radius, units.DimLength), t.Mode)
 		return Result{}, e
 	}
 	t.Length = L
@@ -250,7 +250,7 @@ type NoResonanceError struct {
 
 // Error says why there is no frequency to give and what would help.
 func (e *NoResonanceError) Error() string {
-	return fmt.Sprintf("no resonance: the quality factor is %.2g, below 1; the wall and end losses damp the sound within a cycle, so this tube has no frequency to speak of (a wider tube or a higher pressure helps)", e.Q)
+	return fmt.Sprintf("no resonance: the quality factor is %s, below 1; the wall and end losses damp the sound within a cycle, so this tube has no frequency to speak of (a wider tube or a higher pressure helps)", units.Number(e.Q, 2))
 }
 
 // Is lets errors.Is(err, ErrNoResonance) match.

@@ -248,7 +248,7 @@ func TestTubeBadInput(t *testing.T) {
 	for _, c := range []struct {
 		v    float64
 		want string
-	}{{0, "length 0 m must be greater than zero"}, {-0.1, "length -0.1 m must be greater than zero"}, {math.Inf(1), "length +Inf is not a finite number"}} {
+	}{{0, "length 0 m must be greater than zero"}, {-0.1, "length -100 mm must be greater than zero"}, {math.Inf(1), "length +Inf is not a finite number"}} {
 		s := ok
 		s.Length = c.v
 		if _, err := s.SolveFrequency(); err == nil || err.Error() != c.want {

@@ -128,7 +128,7 @@ func ZonedModes(ends Ends, corr EndCorrection, secs []Section, n int) (ZoneResul
 		for j, s := range secs {
 			ka := 2 * math.Pi * f * s.Radius / s.SoundSpeed
 			if ka >= CutoffKA {
-				res.Warnings = append(res.Warnings, fmt.Sprintf("mode %d: zone %d has ka = %.3g above the cross-mode cutoff 1.841; plane waves do not describe it", i+1, j+1, ka))
+				res.Warnings = append(res.Warnings, fmt.Sprintf("mode %d: zone %d has ka = %s above the cross-mode cutoff 1.841; plane waves do not describe it", i+1, j+1, units.Number(ka, 3)))
 			}
 		}
 	}

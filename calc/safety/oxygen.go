@@ -151,7 +151,7 @@ func RoomOxygen(model RoomModel, release, room, n float64) (Oxygen, error) {
 		o.MaxRelease = room * (AirOxygen/OxygenDeficient - 1)
 		o.SealedRise = units.StandardAtmosphere * r
 		if r > 0 {
-			o.Warnings = append(o.Warnings, fmt.Sprintf("a sealed room would rise in pressure by %.3g kPa; real rooms leak, and this model gives the highest oxygen of the three", o.SealedRise/1e3))
+			o.Warnings = append(o.Warnings, "a sealed room would rise in pressure by "+units.Format(o.SealedRise, units.DimPressure)+"; real rooms leak, and this model gives the highest oxygen of the three")
 		}
 	default:
 		panic(fmt.Sprintf("calc: unknown room model %d", int(model)))

@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"strconv"
 
 	"tubewright/calc/units"
 )
@@ -209,7 +208,7 @@ func ASMEShell(in ShellInput) (Shell, error) {
 		s.WallEnough = !s.NoWall && in.Wall >= s.MinThickness
 		s.Warnings = append(s.Warnings, "the MAWP is for the wall as entered: enter the thinnest wall, not the nominal one; pipe ordered by nominal wall may be 12.5 % thinner (UG-16(d))")
 		if !s.WallEnough && !s.NoWall {
-			s.Warnings = append(s.Warnings, fmt.Sprintf("the wall is thinner than the required %.4g m", s.MinThickness))
+			s.Warnings = append(s.Warnings, "the wall is thinner than the required "+units.FormatDigits(s.MinThickness, units.DimLength, 4))
 		}
 	}
 	if s.ClauseThickCircum == Clause1_2a1 || s.ClauseMAWPCircum == Clause1_2a1 {
@@ -239,7 +238,7 @@ func formatIn(v float64, unit string) string {
 	if s, err := units.FormatIn(v, unit); err == nil {
 		return s
 	}
-	return strconv.FormatFloat(v, 'g', 4, 64) + " Pa"
+	return units.Format(v, units.DimPressure)
 }
 
 // Is lets errors.Is(err, ErrNoWall) match.

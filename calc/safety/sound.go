@@ -3,6 +3,8 @@ package safety
 import (
 	"fmt"
 	"math"
+
+	"tubewright/calc/units"
 )
 
 // ReferencePressure is the reference sound pressure in air, 20 µPa
@@ -140,7 +142,7 @@ func OSHAPermitted(L float64) OSHAExposure {
 	default:
 		e.Permitted = true
 		e.Hours = ReferenceDurationHours(L)
-		e.Note = fmt.Sprintf("%.3g h per day at %.1f dBA (OSHA 1910.95 Table G-16)", e.Hours, L)
+		e.Note = fmt.Sprintf("%s per day at %.1f dBA (OSHA 1910.95 Table G-16)", units.Format(e.Hours*3600, units.DimTime), L)
 	}
 	return e
 }

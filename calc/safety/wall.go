@@ -1,7 +1,6 @@
 package safety
 
 import (
-	"fmt"
 	"math"
 
 	"tubewright/calc/units"
@@ -64,7 +63,7 @@ func ThinWallStress(p GaugePressure, ri, t, allowable float64) (WallStress, erro
 		Cautions:     cautions(CautionStress),
 	}
 	if t > ri/10 {
-		w.Warnings = append(w.Warnings, fmt.Sprintf("wall thickness is %.3g of the inner radius, more than 1/10: the thin-wall formula is inaccurate, use the thick-wall (Lamé) result", t/ri))
+		w.Warnings = append(w.Warnings, "wall thickness is "+units.Number(t/ri, 3)+" of the inner radius, more than 1/10: the thin-wall formula is inaccurate, use the thick-wall (Lamé) result")
 	}
 	w.finish(allowable)
 	return w, nil
@@ -110,7 +109,7 @@ func (w *WallStress) finish(allowable float64) {
 	w.HoopRatio = w.Hoop / allowable
 	w.IntensityRatio = w.Intensity / allowable
 	if w.HoopRatio > 1 {
-		w.Warnings = append(w.Warnings, fmt.Sprintf("hoop stress is %.3g times the allowable stress", w.HoopRatio))
+		w.Warnings = append(w.Warnings, "hoop stress is "+units.Number(w.HoopRatio, 3)+" times the allowable stress")
 	}
 }
 

@@ -142,9 +142,9 @@ func rangeSuffix(in *Input) string {
 		return ""
 	}
 	if in.Max == 0 {
-		return fmt.Sprintf(" (at least %g)", in.Min)
+		return " (at least " + units.Number(in.Min, 6) + ")"
 	}
-	return fmt.Sprintf(" (valid range %g to %g)", in.Min, in.Max)
+	return " (valid range " + units.Number(in.Min, 6) + " to " + units.Number(in.Max, 6) + ")"
 }
 
 // switchWords are the words a Switch takes.

@@ -35,8 +35,8 @@ func poresRows(r *Result, v *Values, g poreGeometry, op *operatingPoint, j pores
 	depth(2, "hydraulic_radius_over_thermal_depth", "Hydraulic radius / δκ", "")
 	depth(3, "spacing_over_thermal_depth", "Equivalent plate spacing / δκ (2 r_h/δκ)", "")
 	r.Check("verdict", "Verdict for a "+verdict.Role.String(), verdict.Call.String(), poreOutcomes[verdict.Call],
-		fmt.Sprintf("the hydraulic radius is %.3g δκ; the usual range for a %s is %.3g–%.3g δκ",
-			verdict.RhOverDelta, verdict.Role, verdict.Rule.Low, verdict.Rule.High))
+		fmt.Sprintf("the hydraulic radius is %s δκ; the usual range for a %s is %s–%s δκ",
+			units.Number(verdict.RhOverDelta, 3), verdict.Role, units.Number(verdict.Rule.Low, 3), units.Number(verdict.Rule.High, 3)))
 	r.AddWords("explanation", "What it means", verdict.Words)
 	r.AddWords("rule_of_thumb", "Rule of thumb", verdict.Rule.Text)
 	depth(4, "target_hydraulic_radius", "Hydraulic radius for the aim", "mm")

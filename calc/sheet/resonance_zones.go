@@ -281,5 +281,5 @@ func zoneDifferenceNote(m resonator.ZoneMode) string {
 	if m.Difference < 0 {
 		word = "lower"
 	}
-	return fmt.Sprintf("the estimate is %.2g %% %s than the exact mode", 100*math.Abs(m.Difference)/m.Frequency, word)
+	return fmt.Sprintf("the estimate is %s %% %s than the exact mode", units.Number(100*math.Abs(m.Difference)/m.Frequency, 2), word)
 }

@@ -1,7 +1,6 @@
 package sheet
 
 import (
-	"fmt"
 	"slices"
 	"strings"
 
@@ -75,7 +74,7 @@ func barg(g safety.GaugePressure) string {
 }
 
 // percent writes a ratio as a whole percentage.
-func percent(x float64) string { return fmt.Sprintf("%.3g %%", 100*x) }
+func percent(x float64) string { return units.Number(100*x, 3) + " %" }
 
 // mm writes a length in mm.
 func mm(x float64) string {

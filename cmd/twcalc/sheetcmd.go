@@ -191,7 +191,7 @@ func sheetHelp(s *sheet.Sheet) string {
 		}
 		var notes []string
 		if (in.Kind == sheet.Count || in.Kind == sheet.Number) && (in.Min != 0 || in.Max != 0) {
-			notes = append(notes, fmt.Sprintf("%g to %g", in.Min, in.Max))
+			notes = append(notes, units.Number(in.Min, 6)+" to "+units.Number(in.Max, 6))
 		}
 		switch {
 		case in.Required():
