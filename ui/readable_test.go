@@ -12,8 +12,8 @@ import (
 	"tubewright/calc/sheet"
 )
 
-// exponent matches a number written with an exponent ("2.439e-4", "1E+07").
-var exponent = regexp.MustCompile(`[0-9.][eE][-+]?[0-9]`)
+// numberWithExponent matches a number written with an exponent ("2.439e-4", "1E+07").
+var numberWithExponent = regexp.MustCompile(`[0-9.][eE][-+]?[0-9]`)
 
 // exampleTexts reads a help example ("twcalc pores --gas helium ...
 // --json") as the texts of the calculator's inputs; files it names are the
@@ -151,7 +151,7 @@ func TestAppExamplesReadWithoutExponents(t *testing.T) {
 				read = append(read, sh.dump())
 			}
 			for _, l := range strings.Split(strings.Join(read, "\n"), "\n") {
-				if exponent.MatchString(l) {
+				if numberWithExponent.MatchString(l) {
 					t.Errorf("%s: the app shows %q", line, l)
 				}
 			}
