@@ -73,7 +73,7 @@ func (f *Form) takeCarried() bool {
 		}
 		k := f.kind(it)
 		c, ok := b.carried(k)
-		if k == "" || !ok || c.From == f.Sheet.Title || f.holds(it, c) {
+		if k == "" || !ok || c.From == f.Sheet.Title || f.holds(it, c) || f.hiddenExtra(it) {
 			continue
 		}
 		text := carryText(it.in, c)
@@ -194,4 +194,20 @@ var carryWhat = map[carryKind]string{
 	carryRigPressure: "the engine's cold fill pressure; it rises as the engine heats, so design above it",
 	carryRigRadius:   "half the engine's widest duct",
 	carryRigVolume:   "the gas the engine's parts hold",
+}
+
+// hiddenExtra reports whether input it carries beyond the Share tags and
+// is hidden on its screen (the length while Tube resonance solves for
+// it): such an input keeps its own text, which the screen stashes while
+// it is hidden.
+func (f *Form) hiddenExtra(it *formItem) bool {
+	if _, extra := carryInputs[f.Sheet.ID][it.in.Key]; !extra || f.cs.shown == nil {
+		return false
+	}
+	for _, k := range f.cs.shown() {
+		if k == it.in.Key {
+			return false
+		}
+	}
+	return true
 }

@@ -215,10 +215,14 @@ func TestCarryTubeToDiagnose(t *testing.T) {
 	undo(t, h, diag, "length", "Tube length", "600 mm")
 	undo(t, h, diag, "ends", "Ends", "closed-open")
 
-	// length solved from a target frequency
+	// the tube goes both ways: after Undo, What the pitch says used its
+	// own 600 mm last, and Tube resonance takes it, marked
 	a.Back()
 	h.frames(2)
 	res := a.Screen(sheet.IDResonance).(formScreen).Form()
+	wantCarried(t, h, res, "length", "Tube length", "600 mm", "What the pitch says")
+
+	// length solved from a target frequency
 	h.tap("Length from frequency")
 	h.retype("Target frequency", res.Text("frequency"), "300 Hz")
 	row, ok := res.Result().Row("length")
@@ -231,6 +235,24 @@ func TestCarryTubeToDiagnose(t *testing.T) {
 	}
 	if from, _ := diag.Carried("length"); from != "Tube resonance" {
 		t.Errorf("solved length carried from %q", from)
+	}
+
+	// a length typed on What the pitch says is not pushed into the length
+	// Tube resonance hides while it solves for one: the 600 mm it had
+	// comes back when the length is shown again
+	h.retype("Tube length", diag.Text("length"), "610 mm")
+	if diag.Result() == nil {
+		t.Fatalf("no diagnosis at 610 mm: %v", diag.Err())
+	}
+	a.Back()
+	h.frames(2)
+	if from, _ := res.Carried("length"); from != "" {
+		t.Errorf("the hidden length took a value from %q", from)
+	}
+	h.tap("Frequency from length")
+	h.frames(2)
+	if got := res.Text("length"); got != "600 mm" {
+		t.Errorf("the length shown again reads %q, want the 600 mm it had", got)
 	}
 }
 
