@@ -103,8 +103,12 @@ async function listenScenario({ url, check, shots }) {
     await page.waitForTimeout(1500);
     col = await column(page, 200);
     check(near(col[rec], RECORDING), "after the tap the button turned into Stop (recording)");
-    const meterAt = (c) => c.findIndex((p, y) => y > rec + 20 && METER.some((m) => near(p, m)));
-    const meter = meterAt(col);
+    // Below the Stop button (its red is also the meter's loudest colour),
+    // read near the left edge, clear of the button's words; the meter
+    // fills from the left.
+    const edge = await column(page, 30);
+    const below = edge.findIndex((p, y) => y > rec && !near(p, RECORDING));
+    const meter = edge.findIndex((p, y) => y > below && METER.some((m) => near(p, m)));
     check(meter > 0, "a level meter shows while recording");
     const text = { x: 0, y: meter + 10, width: 412, height: 24 };
     const t1 = await page.screenshot({ clip: text });

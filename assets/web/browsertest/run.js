@@ -103,7 +103,7 @@ async function test(dir) {
     await page.waitForTimeout(1500);
     const screen = await page.screenshot();
     check(!screen.equals(home), "tapping a calculator opened it");
-    const field = JSON.parse(process.env.FIELD || "null") || { x: 200, y: 284 };
+    const field = JSON.parse(process.env.FIELD || "null") || { x: 200, y: 325 };
     check(await focuses(page, field), `a text field took the tap at (${field.x}, ${field.y}) (if the layout moved, set FIELD)`);
     const before = await page.screenshot({ clip: { x: 0, y: field.y + 60, width: 412, height: 915 - field.y - 60 } });
     // A digit in front of the number: 300 K becomes 1300 K, a new valid value.
@@ -127,7 +127,7 @@ async function test(dir) {
 
     // A soft keyboard shrinks the page: the focused field must stay in view.
     const keyboardTop = 300;
-    const low = JSON.parse(process.env.LOW_FIELD || "null") || { x: 200, y: 377 };
+    const low = JSON.parse(process.env.LOW_FIELD || "null") || { x: 200, y: 470 };
     check(low.y > keyboardTop && await focuses(page, low),
       `a text field below ${keyboardTop} px took the tap at (${low.x}, ${low.y}) (if the layout moved, set LOW_FIELD)`);
     await page.setViewportSize({ width: 412, height: keyboardTop });
