@@ -31,19 +31,6 @@ func (w *Plot) Summary() string {
 		title = c.Y.Label + " against " + strings.ToLower(c.X.Label)
 	}
 	b.WriteString("Plot: " + strings.TrimSuffix(title, ".") + ".")
-	axis := func(a Axis, s axisScale, isY bool) {
-		lo, hi, ok := c.extent(isY, false)
-		if !ok {
-			return
-		}
-		fmt.Fprintf(&b, " %s from %s to %s", a.Label, s.readout(lo, 0), s.readout(hi, 0))
-		if c.useLog(isY) {
-			b.WriteString(" (log scale)")
-		}
-		b.WriteString(".")
-	}
-	axis(c.X, xs, false)
-	axis(c.Y, ys, true)
 	// Values next to nothing beside the axis's span (round-off of a
 	// zero, e.g. 3e-19 m³/s) are read as zero.
 	xlo, xhi, _ := c.extent(false, false)
@@ -54,6 +41,19 @@ func (w *Plot) Summary() string {
 		}
 		return v
 	}
+	axis := func(a Axis, s axisScale, isY bool) {
+		lo, hi, ok := c.extent(isY, false)
+		if !ok {
+			return
+		}
+		fmt.Fprintf(&b, " %s from %s to %s", a.Label, s.readout(tidy(lo, lo, hi), 0), s.readout(tidy(hi, lo, hi), 0))
+		if c.useLog(isY) {
+			b.WriteString(" (log scale)")
+		}
+		b.WriteString(".")
+	}
+	axis(c.X, xs, false)
+	axis(c.Y, ys, true)
 	rx := func(v float64) string { return xs.readout(tidy(v, xlo, xhi), 0) }
 	ry := func(v float64) string { return ys.readout(tidy(v, ylo, yhi), 0) }
 	pt := func(p XY) string { return "(" + rx(p.X) + ", " + ry(p.Y) + ")" }
