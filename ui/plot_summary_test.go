@@ -42,7 +42,7 @@ func TestEveryPlotHasSummary(t *testing.T) {
 		a := NewApp(nil)
 		a.Open(e.ID)
 		h := newHarness(t, image.Pt(412, 12000), a.Layout)
-		h.settleJobs()
+		h.settleJobs(a)
 		for _, n := range h.nodes() {
 			if n.Desc.Description != "Plot drawing" {
 				continue

@@ -148,7 +148,7 @@ func TestTouchTargets(t *testing.T) {
 				useBookAt(a.Env(), filepath.Join(t.TempDir(), "benchlog.json"))
 				a.Open(e.ID)
 				h := newHarness(t, sz.size, a.Layout)
-				h.settleJobs()
+				h.settleJobs(a)
 				total += checkTargets(t, h, string(e.ID))
 				total += touchStates(t, a, h, e.ID)
 			}
@@ -160,18 +160,30 @@ func TestTouchTargets(t *testing.T) {
 	}
 }
 
-// settleJobs lays out until the screen stops changing (background solves
-// have drawn their results: plots, tables and their buttons), at most 3 s.
-func (h *harness) settleJobs() {
-	last, same := -1, 0
-	for end := time.Now().Add(3 * time.Second); time.Now().Before(end) && same < 15; {
-		time.Sleep(10 * time.Millisecond)
-		h.frame()
-		n := len(h.nodes())
-		if n == last {
-			same++
-		} else {
-			last, same = n, 0
+// settleJobs lays out a's screen until background solves have drawn
+// their results (plots, tables and their buttons): as the screenshot
+// harness does, it lays out again while the app asks for frames through
+// its Env, until none is asked for in 300 ms (at most 20 s).
+func (h *harness) settleJobs(a *App) {
+	asked := make(chan struct{}, 1)
+	a.env.setInvalidate(func() {
+		select {
+		case asked <- struct{}{}:
+		default:
+		}
+	})
+	defer a.env.setInvalidate(nil)
+	h.frames(3)
+	deadline := time.After(20 * time.Second)
+	for {
+		select {
+		case <-asked:
+			h.frame()
+		case <-time.After(300 * time.Millisecond):
+			return
+		case <-deadline:
+			h.t.Logf("still asking for frames after 20 s")
+			return
 		}
 	}
 }
