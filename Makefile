@@ -141,7 +141,7 @@ apk: check-go
 	$(GO) run ./assets/android -count "$$(git rev-list --count HEAD 2>/dev/null || echo 1)" \
 		-stamp "$(VERSION)" -o build/tubewright.apk
 
-## shots: screenshots of every screen at phone, tablet and desktop sizes, in build/shots
+## shots: screenshots of every screen at phone, tablet and desktop sizes (both ways up), bright and dark, in build/shots
 shots: deps
 	mkdir -p build/shots
 	SHOT_DIR=$(CURDIR)/build/shots $(GO) test -count=1 -run 'TestScreenshot' ./ui/
