@@ -23,6 +23,7 @@ const (
 	carryMeasured    carryKind = "measured frequency"
 	carryTubeLength  carryKind = "tube length"
 	carryTubeRadius  carryKind = "tube radius"
+	carryTubeBore    carryKind = "tube inside diameter"
 	carryTubeEnds    carryKind = "tube ends"
 	carryRigRadius   carryKind = "rig inner radius"
 	carryRigPressure carryKind = "rig fill pressure"
@@ -43,8 +44,8 @@ var shareKinds = map[sheet.Share]carryKind{
 // keeps these here): the tube of the resonance and diagnosis screens, and
 // the rig values the safety pass takes from an engine.
 var carryInputs = map[sheet.ID]map[string]carryKind{
-	sheet.IDResonance: {"length": carryTubeLength, "radius": carryTubeRadius, "ends": carryTubeEnds},
-	sheet.IDDiagnose: {"length": carryTubeLength, "radius": carryTubeRadius, "ends": carryTubeEnds,
+	sheet.IDResonance: {"length": carryTubeLength, "diameter": carryTubeBore, "radius": carryTubeRadius, "ends": carryTubeEnds},
+	sheet.IDDiagnose: {"length": carryTubeLength, "diameter": carryTubeBore, "radius": carryTubeRadius, "ends": carryTubeEnds,
 		"measured-frequency": carryMeasured},
 	sheet.IDVessel: {"pressure": carryRigPressure, "inner-radius": carryRigRadius},
 	sheet.IDEnergy: {"volume": carryRigVolume},
@@ -78,6 +79,14 @@ func (b *Bench) put(k carryKind, c Carried) {
 		b.values = map[carryKind]Carried{}
 	}
 	b.values[k] = c
+	// A tube's size is carried as typed, a diameter or a radius: the
+	// newer replaces the older, so that a screen never gets both.
+	switch k {
+	case carryTubeBore:
+		delete(b.values, carryTubeRadius)
+	case carryTubeRadius:
+		delete(b.values, carryTubeBore)
+	}
 	switch k {
 	case carryGas:
 		b.Gas = c.Text

@@ -194,7 +194,7 @@ func TestCarryDepthsToPores(t *testing.T) {
 	undo(t, h, pores, "frequency", "Frequency", "250 Hz")
 }
 
-// TestCarryTubeToDiagnose: the tube of Tube resonance (length, radius and
+// TestCarryTubeToDiagnose: the tube of Tube resonance (length, diameter and
 // ends) is the tube What the pitch says starts from; a computed frequency
 // is not taken as the measurement. With the length solved for, the
 // length found is carried.
@@ -202,12 +202,12 @@ func TestCarryTubeToDiagnose(t *testing.T) {
 	a, h := carryApp(t)
 	openScreen(a, h, sheet.IDResonance)
 	h.retype("Tube length", "500 mm", "300 mm")
-	h.retype("Inner radius", "12 mm", "10 mm")
+	h.retype("Inside diameter", "24 mm", "20 mm")
 	h.tap("Closed – closed (half-wave)")
 
 	diag := openScreen(a, h, sheet.IDDiagnose)
 	wantCarried(t, h, diag, "length", "Tube length", "300 mm", "Tube resonance")
-	wantCarried(t, h, diag, "radius", "Inner radius", "10 mm", "Tube resonance")
+	wantCarried(t, h, diag, "diameter", "Inside diameter", "20 mm", "Tube resonance")
 	wantCarried(t, h, diag, "ends", "Ends", "closed-closed", "Tube resonance")
 	if got := diag.Text("measured-frequency"); got != "140 Hz ± 2 Hz" {
 		t.Errorf("the measurement reads %q: a computed frequency was taken as measured", got)

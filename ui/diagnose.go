@@ -19,12 +19,15 @@ type diagnoseScreen struct {
 	plot *Plot
 	// stash holds the texts of hidden inputs by key (see hideInputs).
 	stash map[string]string
+	// bore is the tube's inside diameter, or its radius.
+	bore *sizePair
 }
 
 func newDiagnoseScreen(env *Env) Screen {
 	d, _ := sheet.Lookup(sheet.IDDiagnose)
 	s := &diagnoseScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
 		stash: map[string]string{}}
+	s.bore = newSizePair(env, s.form, "diameter", "radius", [2]string{"Diameter", "Radius"}, [2]string{"Ø", "radius"})
 	s.plot.Height = 240
 	s.form.cs.shown = s.inputKeys
 	return s
@@ -42,9 +45,13 @@ func (s *diagnoseScreen) Enter() { s.form.Enter() }
 
 func (s *diagnoseScreen) update(gtx layout.Context) {
 	changed := s.form.Update(gtx)
+	if s.bore.update(gtx, s.form, s.stash) {
+		changed = s.form.Update(gtx) || changed
+	}
 	if hideInputs(s.form, s.inputKeys(), s.stash) {
 		changed = s.form.Update(gtx) || changed
 	}
+	s.bore.settle(s.form)
 	if !changed {
 		return
 	}
@@ -53,7 +60,7 @@ func (s *diagnoseScreen) update(gtx layout.Context) {
 
 // inputKeys lists the inputs of what is found, in order.
 func (s *diagnoseScreen) inputKeys() []string {
-	keys := []string{"find", "measured-frequency", "ends", "length", "radius", "end-correction", "mode", "gas"}
+	keys := []string{"find", "measured-frequency", "ends", "length", s.bore.key(), "end-correction", "mode", "gas"}
 	if s.form.Text("find") == sheet.FindFraction {
 		keys = append(keys, "second-gas", "temperature")
 	}
@@ -65,6 +72,10 @@ func (s *diagnoseScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
 	var inputs []layout.Widget
 	for _, key := range s.inputKeys() {
+		if key == s.bore.key() {
+			inputs = append(inputs, s.bore.widgets(s.form)...)
+			continue
+		}
 		inputs = append(inputs, s.form.InputWidget(key))
 	}
 	out := s.form.Outputs()

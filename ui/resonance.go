@@ -22,12 +22,15 @@ type resonanceScreen struct {
 	plot  *Plot
 	// stash holds the texts of hidden inputs by key (see hideInputs).
 	stash map[string]string
+	// bore is the tube's inside diameter, or its radius.
+	bore *sizePair
 }
 
 func newResonanceScreen(env *Env) Screen {
 	d, _ := sheet.Lookup(sheet.IDResonance)
 	s := &resonanceScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
 		stash: map[string]string{}}
+	s.bore = newSizePair(env, s.form, "diameter", "radius", [2]string{"Diameter", "Radius"}, [2]string{"Ø", "radius"})
 	s.zones = newZoneEditor(env, s.form)
 	s.form.cs.shown = s.inputKeys
 	s.plot.Height = 240
@@ -50,9 +53,13 @@ func (s *resonanceScreen) kind() string { return s.form.Text("resonator") }
 func (s *resonanceScreen) update(gtx layout.Context) {
 	s.zones.update(gtx)
 	changed := s.form.Update(gtx)
+	if s.bore.update(gtx, s.form, s.stash) {
+		changed = s.form.Update(gtx) || changed
+	}
 	if hideInputs(s.form, s.inputKeys(), s.stash) {
 		changed = s.form.Update(gtx) || changed
 	}
+	s.bore.settle(s.form)
 	if changed {
 		s.publish()
 		if res := s.form.Result(); res != nil && s.kind() == sheet.ResonatorZones {
@@ -77,7 +84,7 @@ func (s *resonanceScreen) inputKeys() []string {
 	if s.form.Text("solve") == "length" {
 		given = "frequency"
 	}
-	return []string{"resonator", "solve", "ends", given, "radius", "end-correction", "mode", "gas", "temperature", "pressure", "humidity",
+	return []string{"resonator", "solve", "ends", given, s.bore.key(), "end-correction", "mode", "gas", "temperature", "pressure", "humidity",
 		"non-ideal", "losses", "sweep", "second-gas"}
 }
 
@@ -88,6 +95,10 @@ func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 	for _, key := range s.inputKeys() {
 		if key == "zones" {
 			inputs = append(inputs, s.zones.widgets()...)
+		}
+		if key == s.bore.key() {
+			inputs = append(inputs, s.bore.widgets(s.form)...)
+			continue
 		}
 		inputs = append(inputs, s.form.InputWidget(key))
 	}

@@ -34,7 +34,8 @@ var diagnoseSheet = &Sheet{
 			Example: "140 Hz ± 2 Hz", PM: true, Hint: "as read from the analyser, with its ±: 140 Hz ± 2 Hz, 140Hz+-2Hz", Share: ShareFrequency},
 		endsInput(),
 		tubeLengthInput("600 mm", "physical tube length: 600 mm, 1.2 m, 20 in; ± or +- for an uncertainty: 600 mm ± 1 mm", false),
-		tubeRadiusInput(false),
+		tubeDiameterInput(),
+		tubeRadiusInput(),
 		endCorrectionInput(),
 		modeInput(),
 		diagnoseGasInput(),
@@ -51,7 +52,7 @@ var diagnoseSheet = &Sheet{
 		"gives a mean weighted by the mode shape, not the arithmetic mean. The known gas temperature is used only " +
 		"when finding a fraction.",
 	Examples: []string{
-		"twcalc diagnose --gas helium --pressure 1bar --ends closed-closed --length 1m --radius 20mm --end-correction none --measured-frequency 510Hz",
+		"twcalc diagnose --gas helium --pressure 1bar --ends closed-closed --length 1m --diameter 40mm --end-correction none --measured-frequency 510Hz",
 		"twcalc diagnose --gas helium --second-gas argon --find fraction --temperature 300K --ends closed-open --length 0.5m --radius 10mm --measured-frequency 480Hz+-2Hz --json",
 	},
 	Run: runDiagnose,
@@ -135,5 +136,5 @@ func diagnoseBlame(v *Values, err error, bySubject map[units.Subject]string) err
 	if errors.Is(err, resonator.ErrNoSolution) {
 		return v.Blame(err, "measured-frequency")
 	}
-	return noResonanceBlame(v, v.BlameSubject(err, bySubject), "radius")
+	return noResonanceBlame(v, v.BlameSubject(err, bySubject), tubeSizeKey(v))
 }

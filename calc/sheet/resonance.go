@@ -45,7 +45,8 @@ var resonanceSheet = &Sheet{
 		tubeLengthInput("500 mm", "physical tube length, to get its frequency: 500 mm, 1.2 m, 20 in; ± or +- for an uncertainty: 500 mm ± 1 mm", true),
 		{Key: "frequency", Label: "Target frequency", Kind: Quantity, Dim: units.DimFrequency, Optional: true, Example: "400 Hz", PM: true,
 			Hint: "instead of the length, to get the length: 400 Hz, 1.2 kHz; ± or +- for an uncertainty"},
-		tubeRadiusInput(true),
+		tubeDiameterInput(),
+		tubeRadiusInput(),
 		endCorrectionInput(),
 		modeInput(),
 	}, zonesInputs()...), helmholtzInputs()...),
@@ -66,11 +67,11 @@ var resonanceSheet = &Sheet{
 		"lumped resonator, the neck's inner end flanged (Norris & Sheng 1989), valid while every size is small against " +
 		"the wavelength. A ± typed on any input is carried to the results to first order.",
 	Examples: []string{
-		"twcalc resonance --gas air --temperature 300K --ends closed-open --length 1m --radius 25mm",
-		"twcalc resonance --gas helium --pressure 10bar --ends closed-closed --frequency 400Hz --radius 25mm --json",
-		"twcalc resonance --length 0.25m+-1mm --radius 8mm --temperature 20degC+-2K",
-		"twcalc resonance --length 1m --radius 25mm --sweep temperature:250K:450K:21",
-		"twcalc resonance --gas helium --length 1m --radius 25mm --sweep fraction:0:0.3:16 --second-gas argon",
+		"twcalc resonance --gas air --temperature 300K --ends closed-open --length 1m --diameter 50mm",
+		"twcalc resonance --gas helium --pressure 10bar --ends closed-closed --frequency 400Hz --diameter 50mm --json",
+		"twcalc resonance --length 0.25m+-1mm --diameter 16mm --temperature 20degC+-2K",
+		"twcalc resonance --length 1m --diameter 50mm --sweep temperature:250K:450K:21",
+		"twcalc resonance --gas helium --length 1m --diameter 50mm --sweep fraction:0:0.3:16 --second-gas argon",
 		`twcalc resonance --ends closed-open --zones "0.1m,10mm,700K;0.4m,10mm,295K" --modes 5`,
 		"twcalc resonance --volume 1L --neck-length 50mm --neck-radius 10mm --end-correction unflanged",
 	},
@@ -183,7 +184,7 @@ func runTube(v *Values) (*Result, error) {
 		res, err = s.SolveFrequency()
 	}
 	if err != nil {
-		err = noResonanceBlame(v, v.BlameSubject(err, tubeGasSubjects), "radius")
+		err = noResonanceBlame(v, v.BlameSubject(err, tubeGasSubjects), tubeSizeKey(v))
 		if _, ok := AsFieldError(err); !ok && byFreq && tubeIsRangeError(err) {
 			// with every size checked above, the one range the length
 			// solve can leave is the frequency's: too high for the radius

@@ -49,7 +49,7 @@ func curveSetup(v *Values, length float64) resonator.Setup {
 		Correction: v.Pick("end-correction").(resonator.EndCorrection),
 		Mode:       v.Count("mode"),
 		Length:     length,
-		Radius:     v.SI("radius"),
+		Radius:     curveRadius(v),
 		Losses:     v.Pick("losses").(resonator.Losses),
 	}, Gas: v.Gas("gas"), Temperature: v.SI("temperature"), Pressure: v.SI("pressure"), GasOptions: GasOptions(v),
 		RelativeHumidity: v.SI("humidity")}
@@ -129,4 +129,11 @@ func diagnoseCurve(res *Result) (Curve, bool) {
 		c.X, c.Y = append(c.X, p.X), append(c.Y, p.Frequency)
 	}
 	return c, true
+}
+
+// curveRadius is the tube's inner radius (m) for a curve drawn after a
+// solve that read it.
+func curveRadius(v *Values) float64 {
+	q, _ := tubeRadius(v)
+	return q.Value
 }

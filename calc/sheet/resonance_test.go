@@ -174,7 +174,7 @@ func TestResonanceBadInputNamesKey(t *testing.T) {
 		{resonanceSheet, map[string]string{"length": "0 m", "radius": "8 mm"}, "length"},
 		{resonanceSheet, map[string]string{"length": "-1 m", "radius": "8 mm"}, "length"},
 		{resonanceSheet, map[string]string{"radius": "8 mm"}, "length"},
-		{resonanceSheet, map[string]string{"length": "1 m"}, "radius"},
+		{resonanceSheet, map[string]string{"length": "1 m"}, "diameter"},
 		{resonanceSheet, map[string]string{"length": "1 m", "frequency": "100 Hz", "radius": "8 mm"}, "frequency"},
 		{resonanceSheet, map[string]string{"frequency": "30 kHz", "radius": "10 mm"}, "frequency"},
 		{resonanceSheet, map[string]string{"length": "1 m", "radius": "8 mm", "temperature": "5 K"}, "temperature"},
@@ -436,5 +436,50 @@ func TestZonesPressurePM(t *testing.T) {
 	texts["humidity"] = "80 %"
 	if f := mustRow(t, resonanceSheet, texts, "frequency"); !(f.PM > 1e-6*f.Value) {
 		t.Errorf("humid air: ± %v Hz from the pressure, want one", f.PM)
+	}
+}
+
+// TestTubeDiameterOrRadius: a tube given by its inside diameter and by
+// half that as its radius gives the same rows, ± included, to 1e-12
+// relative (a diameter is twice the radius: no outside source needed);
+// both at once, or neither, is refused naming one input.
+func TestTubeDiameterOrRadius(t *testing.T) {
+	t.Parallel()
+	for _, c := range []struct {
+		s     *Sheet
+		base  map[string]string
+		d, r  string
+		label string
+	}{
+		{resonanceSheet, map[string]string{"length": "0.5 m ± 1 mm", "gas": "air"}, "24 mm ± 0.2 mm", "12 mm ± 0.1 mm", "resonance"},
+		{diagnoseSheet, map[string]string{"length": "0.5 m", "gas": "helium", "measured-frequency": "1000 Hz ± 2 Hz"}, "20 mm", "10 mm", "diagnose"},
+	} {
+		with := func(key, text string) map[string]string {
+			m := map[string]string{key: text}
+			for k, v := range c.base {
+				m[k] = v
+			}
+			return m
+		}
+		a, errA := c.s.Evaluate(with("diameter", c.d))
+		b, errB := c.s.Evaluate(with("radius", c.r))
+		if errA != nil || errB != nil {
+			t.Fatalf("%s: %v, %v", c.label, errA, errB)
+		}
+		if len(a.Rows) != len(b.Rows) || len(a.Rows) == 0 {
+			t.Fatalf("%s: %d rows by diameter, %d by radius", c.label, len(a.Rows), len(b.Rows))
+		}
+		for i, ra := range a.Rows {
+			rb := b.Rows[i]
+			if ra.Key != rb.Key || ra.Text != rb.Text || ra.Outcome != rb.Outcome ||
+				!scalar.EqualWithinRel(ra.Value, rb.Value, 1e-12) || !scalar.EqualWithinRel(ra.PM, rb.PM, 1e-12) {
+				t.Errorf("%s: row %s by diameter %+v, by radius %+v", c.label, ra.Key, ra, rb)
+			}
+		}
+		both := with("diameter", c.d)
+		both["radius"] = c.r
+		if _, err := c.s.Evaluate(both); len(FieldErrors(err)) == 0 || FieldErrors(err)[0].Key != "radius" {
+			t.Errorf("%s: diameter and radius both given: %v", c.label, err)
+		}
 	}
 }

@@ -49,10 +49,50 @@ func tubeLengthInput(example, hint string, optional bool) Input {
 		Optional: optional, PM: true, Hint: hint}
 }
 
-// tubeRadiusInput is the inner radius of a uniform tube.
-func tubeRadiusInput(optional bool) Input {
-	return Input{Key: "radius", Label: "Inner radius", Kind: Quantity, Dim: units.DimLength, Example: "12 mm",
-		Optional: optional, PM: true, Hint: "half the inner diameter: 12 mm, 0.5 in; ± or +- for an uncertainty"}
+// tubeDiameterInput is the inside diameter of a uniform tube, the size
+// people measure; tubeRadiusInput is the alternative. One of the two is
+// read (see tubeRadius); Optional here, since either will do.
+func tubeDiameterInput() Input {
+	return Input{Key: "diameter", Label: "Inside diameter", Kind: Quantity, Dim: units.DimLength, Example: "24 mm",
+		Optional: true, PM: true, Hint: "bore of the tube: 24 mm, 1 in (or give radius); ± or +- for an uncertainty"}
+}
+
+// tubeRadiusInput is the inner radius of a uniform tube, instead of its
+// inside diameter.
+func tubeRadiusInput() Input {
+	return Input{Key: "radius", Label: "Inner radius", Kind: Quantity, Dim: units.DimLength,
+		Optional: true, PM: true, Hint: "half the inside diameter: 12 mm, 0.5 in (or give diameter); ± or +- for an uncertainty"}
+}
+
+// tubeSizeKey returns the key the tube's size was given under: "radius"
+// when a radius was typed, else "diameter".
+func tubeSizeKey(v *Values) string {
+	if v.Has("radius") && !v.Has("diameter") {
+		return "radius"
+	}
+	return "diameter"
+}
+
+// tubeRadius returns the tube's inner radius (m, with its standard
+// uncertainty) from the inside diameter or the radius, exactly one of
+// which must be given and positive.
+func tubeRadius(v *Values) (units.Quantity, error) {
+	d, r := v.Has("diameter"), v.Has("radius")
+	switch {
+	case d && r:
+		return units.Quantity{}, v.Blame(errors.New("give either the inside diameter or the inner radius, not both"), "radius")
+	case !d && !r:
+		return units.Quantity{}, tubeMissing(v, "diameter")
+	}
+	key := tubeSizeKey(v)
+	if !(v.SI(key) > 0) {
+		return units.Quantity{}, tubePositiveError(v, key)
+	}
+	q := v.Q(key)
+	if key == "diameter" {
+		q.Value, q.Uncertainty = q.Value/2, q.Uncertainty/2
+	}
+	return q, nil
 }
 
 // tubeTemperatureInput is the mean gas temperature in a tube.
@@ -92,21 +132,23 @@ func tubeMissing(v *Values, key string) error {
 // withLength) with its uncertainties, after checking that every size is
 // given and positive.
 func readTube(v *Values, withLength bool) (resonator.Tube, resonator.Uncertainty, error) {
-	keys := []string{"radius"}
 	if withLength {
-		keys = []string{"length", "radius"}
+		if err := tubeRequirePositive(v, "length"); err != nil {
+			return resonator.Tube{}, resonator.Uncertainty{}, err
+		}
 	}
-	if err := tubeRequirePositive(v, keys...); err != nil {
+	radius, err := tubeRadius(v)
+	if err != nil {
 		return resonator.Tube{}, resonator.Uncertainty{}, err
 	}
 	t := resonator.Tube{
 		Ends:       v.Pick("ends").(resonator.Ends),
 		Correction: v.Pick("end-correction").(resonator.EndCorrection),
 		Mode:       v.Count("mode"),
-		Radius:     v.SI("radius"),
+		Radius:     radius.Value,
 		Losses:     v.Pick("losses").(resonator.Losses),
 	}
-	u := resonator.Uncertainty{Radius: v.Q("radius").Uncertainty}
+	u := resonator.Uncertainty{Radius: radius.Uncertainty}
 	if withLength {
 		t.Length = v.SI("length")
 		u.Length = v.Q("length").Uncertainty

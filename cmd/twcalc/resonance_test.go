@@ -194,7 +194,7 @@ func TestResonanceBadInput(t *testing.T) {
 		{[]string{"resonance", "--length", "0m", "--radius", "8mm"}, "--length"},
 		{[]string{"resonance", "--length", "-1m", "--radius", "8mm"}, "--length"},
 		{[]string{"resonance", "--length", "1m", "--radius", "8mm", "--temperature", "5K"}, "--temperature"},
-		{[]string{"resonance", "--length", "1m"}, "--radius"},
+		{[]string{"resonance", "--length", "1m"}, "--diameter"},
 		{[]string{"resonance", "--radius", "8mm"}, "--length"},
 		{[]string{"resonance", "--length", "1m", "--frequency", "100Hz", "--radius", "8mm"}, "--frequency"},
 		{[]string{"resonance", "--frequency", "30kHz", "--radius", "10mm"}, "--frequency"},
