@@ -32,7 +32,9 @@ func newResonanceScreen(env *Env) Screen {
 		stash: map[string]string{}}
 	s.bore = newSizePair(env, s.form, "diameter", "radius", [2]string{"Diameter", "Radius"}, [2]string{"Ø", "radius"})
 	s.zones = newZoneEditor(env, s.form)
-	s.form.cs.shown = s.inputKeys
+	// The tube's size takes a carried value in either form, the hidden
+	// one too: the pair then shows the form that arrived.
+	s.form.cs.shown = func() []string { return append(s.inputKeys(), s.bore.whole, s.bore.half) }
 	s.plot.Height = 240
 	return s
 }
