@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"image"
+
 	"gioui.org/layout"
 	"gioui.org/unit"
 	"gioui.org/widget"
@@ -54,7 +56,14 @@ func (r *Results) layoutDetails(gtx layout.Context) layout.Dimensions {
 	}
 	th := r.env.Theme
 	c := r.env.Colors
-	children := []layout.FlexChild{layout.Rigid(Described(detailsLabel, func(gtx layout.Context) layout.Dimensions {
+	rule := layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		return layout.Inset{Left: 14, Right: 14}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			size := image.Pt(gtx.Constraints.Max.X, gtx.Dp(1))
+			fill(gtx, c.Divider, size)
+			return layout.Dimensions{Size: size}
+		})
+	})
+	children := []layout.FlexChild{rule, layout.Rigid(Described(detailsLabel, func(gtx layout.Context) layout.Dimensions {
 		return d.toggle.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 			gtx.Constraints.Min.X = gtx.Constraints.Max.X
 			gtx.Constraints.Min.Y = gtx.Dp(48)
@@ -64,6 +73,7 @@ func (r *Results) layoutDetails(gtx layout.Context) layout.Dimensions {
 					words = "Hide details of the solve"
 				}
 				return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					gtx.Constraints.Min = image.Point{} // W keeps the row's height as a minimum
 					l := material.Label(th, unit.Sp(15), words)
 					l.Color = c.Accent
 					return l.Layout(gtx)
@@ -72,6 +82,7 @@ func (r *Results) layoutDetails(gtx layout.Context) layout.Dimensions {
 		})
 	}))}
 	if d.open {
+		children = append(children, rule)
 		for i, row := range d.rows {
 			last := i == len(d.rows)-1
 			children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {

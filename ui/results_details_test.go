@@ -48,3 +48,21 @@ func TestResultsDetailsClosed(t *testing.T) {
 		t.Error("Reset kept the details")
 	}
 }
+
+// TestResultsDetailsShot pictures the onset screen with its Details
+// section opened, at phone, tablet and desktop sizes (SHOT_DIR/
+// onset-details-<size>.png), and checks each picture.
+func TestResultsDetailsShot(t *testing.T) {
+	for _, sz := range shotSizes {
+		t.Run(sz.name, func(t *testing.T) {
+			a := NewApp(nil)
+			a.Open(sheet.IDOnset)
+			scr, ok := a.Screen(sheet.IDOnset).(formScreen)
+			if !ok {
+				t.Fatal("the onset screen has no Form")
+			}
+			scr.Form().Results.details.open = true
+			shootApp(t, "onset-details-"+sz.name, sz.size, a)
+		})
+	}
+}
