@@ -5,6 +5,8 @@ import (
 	"strings"
 	"sync/atomic"
 
+	"gioui.org/gesture"
+	"gioui.org/widget"
 	"gioui.org/widget/material"
 
 	"tubewright/calc/sheet"
@@ -35,7 +37,8 @@ type Env struct {
 	handed string     // a device document for the onset editor; see handDevice
 	dark   bool       // the dark palette shows; see SetDark
 	typing bool       // a text box has the focus; see editorBox
-
+	// boxTaps are the tap gestures of the text boxes; see editorBox.
+	boxTaps map[*widget.Editor]*gesture.Click
 }
 
 // NewEnv returns an Env with the app theme: dark when the system asks for

@@ -4,7 +4,7 @@ import (
 	"image"
 
 	"gioui.org/f32"
-	"gioui.org/io/event"
+	"gioui.org/gesture"
 	"gioui.org/io/key"
 	"gioui.org/io/pointer"
 	"gioui.org/io/semantic"
@@ -43,22 +43,29 @@ func button(env *Env, gtx layout.Context, c *widget.Clickable, label string, pri
 	return b.Layout(atTarget(gtx))
 }
 
-// boxTag is the pointer tag of an editor's box (see editorBox).
-type boxTag struct{ ed *widget.Editor }
-
 // editorBox lays out w (a box drawn around the editor ed, with padding)
 // and makes the whole box a target: a press anywhere in it, the padding
-// included, focuses ed. desc, when not "", describes the box for tests and
+// included, focuses ed as the editor itself does: at the press of a
+// mouse, at the end of a tap of a finger (a finger that scrolls the page
+// does not focus it). desc, when not "", describes the box for tests and
 // screen readers (a field's label). While ed has the focus, Escape leaves
 // it (and hides a phone's keyboard) instead of leaving the screen.
 func editorBox(env *Env, gtx layout.Context, ed *widget.Editor, desc string, w layout.Widget) layout.Dimensions {
-	tag := boxTag{ed}
+	if env.boxTaps == nil {
+		env.boxTaps = map[*widget.Editor]*gesture.Click{}
+	}
+	tap := env.boxTaps[ed]
+	if tap == nil {
+		tap = new(gesture.Click)
+		env.boxTaps[ed] = tap
+	}
 	for {
-		ev, ok := gtx.Event(pointer.Filter{Target: tag, Kinds: pointer.Press})
+		e, ok := tap.Update(gtx.Source)
 		if !ok {
 			break
 		}
-		if e, ok := ev.(pointer.Event); ok && e.Kind == pointer.Press && gtx.Enabled() {
+		mouse := e.Source == pointer.Mouse
+		if (e.Kind == gesture.KindPress && mouse) || (e.Kind == gesture.KindClick && !mouse) {
 			gtx.Execute(key.FocusCmd{Tag: ed})
 		}
 	}
@@ -75,7 +82,7 @@ func editorBox(env *Env, gtx layout.Context, ed *widget.Editor, desc string, w l
 		semantic.DescriptionOp(desc).Add(gtx.Ops)
 	}
 	pointer.CursorText.Add(gtx.Ops)
-	event.Op(gtx.Ops, tag)
+	tap.Add(gtx.Ops)
 	call.Add(gtx.Ops)
 	return dims
 }

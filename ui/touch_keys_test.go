@@ -8,8 +8,10 @@ import (
 	"testing"
 	"time"
 
+	"gioui.org/f32"
 	"gioui.org/io/input"
 	"gioui.org/io/key"
+	"gioui.org/io/pointer"
 	"gioui.org/io/semantic"
 	"gioui.org/widget"
 
@@ -220,5 +222,34 @@ func TestFieldHints(t *testing.T) {
 	}
 	if pm == 0 || counts == 0 || quantities == 0 {
 		t.Errorf("checked %d ± fields, %d counts, %d quantities: the catalog changed?", pm, counts, quantities)
+	}
+}
+
+// TestFieldBoxFingerTap: a finger's tap in a box's padding focuses the
+// field when the finger lifts; a finger that goes on to scroll the page
+// (its press cancelled) does not focus it, so the keyboard stays down.
+func TestFieldBoxFingerTap(t *testing.T) {
+	a := NewApp(nil)
+	a.Open(sheet.IDGas)
+	h := newHarness(t, image.Pt(412, 915), a.Layout)
+	f := keepFor(a.env).forms[sheet.IDGas].Field("temperature")
+	box := h.mustDesc("Temperature").Desc.Bounds
+	p := f32.Pt(float32(box.Min.X+4), float32(box.Min.Y+4))
+	h.r.Queue(pointer.Event{Kind: pointer.Press, Source: pointer.Touch, Position: p})
+	h.frame()
+	h.r.Queue(pointer.Event{Kind: pointer.Cancel, Source: pointer.Touch, Position: p})
+	h.frames(2)
+	if h.r.Source().Focused(&f.editor) {
+		t.Fatal("a cancelled finger press (a scroll) focused the field")
+	}
+	h.r.Queue(pointer.Event{Kind: pointer.Press, Source: pointer.Touch, Position: p})
+	h.frame()
+	if h.r.Source().Focused(&f.editor) {
+		t.Fatal("the field took the focus before the finger lifted")
+	}
+	h.r.Queue(pointer.Event{Kind: pointer.Release, Source: pointer.Touch, Position: p})
+	h.frames(2)
+	if !h.r.Source().Focused(&f.editor) {
+		t.Fatal("a finger's tap in the padding did not focus the field")
 	}
 }
