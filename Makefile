@@ -25,6 +25,12 @@ BROWSER_PKGS := chromium fonts-dejavu-core
 # fake-indexeddb, installed in a folder of its own under build/npm.
 FAKE_IDB_VERSION := 6.2.8
 STORE_NPM_DIR := $(NPM_DIR)/store
+# The page unpacks the xz form of the app with xz-decompress (xz-embedded
+# built to WebAssembly, MIT and public domain), pinned, in a folder of its own;
+# pack copies its script into the build as unxz.js. xz-utils compresses.
+UNXZ_VERSION := 0.2.3
+WEB_NPM_DIR := $(NPM_DIR)/web
+UNXZ_JS := $(WEB_NPM_DIR)/node_modules/xz-decompress/dist/package/xz-decompress.min.js
 SERVE_ADDR ?= 127.0.0.1:8080
 
 # apt_install checks that the Debian packages $(1) are installed; as root it
@@ -59,7 +65,7 @@ define npm_install
 endef
 
 .PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
-	web serve-web web-size browser-deps browser-test store-wasm-deps store-wasm-test apk shots bench fuzz clean
+	web web-deps serve-web web-size browser-deps browser-test store-wasm-deps store-wasm-test apk shots bench fuzz clean
 
 all: test
 
@@ -97,12 +103,19 @@ build-twcalc:
 build-wasm:
 	GOOS=js GOARCH=wasm $(GO) build -o /dev/null ./cmd/tubewright
 
-## web: the WebAssembly build with its page shell in build/web: the app raw
-## and gzip-compressed, and a service worker that lists exactly these files
-web: check-go
+## web: the WebAssembly build with its page shell in build/web: the app
+## xz-compressed (with its decoder), gzip-compressed and raw, and a service
+## worker that lists exactly these files
+web: check-go web-deps
 	rm -rf $(WEB_DIR) && mkdir -p build
 	GOOS=js GOARCH=wasm $(GO) build -trimpath -ldflags "-s -w $(LDFLAGS)" -o build/tubewright.wasm ./cmd/tubewright
-	$(GO) run ./assets/web/pack -wasm build/tubewright.wasm -out $(WEB_DIR)
+	$(GO) run ./assets/web/pack -wasm build/tubewright.wasm -unxz $(UNXZ_JS) -out $(WEB_DIR)
+
+web-deps:
+	$(call apt_install,xz-utils)
+	$(call npm_install)
+	@test -f $(UNXZ_JS) || \
+		npm install --prefix $(WEB_NPM_DIR) --no-save --no-audit --no-fund xz-decompress@$(UNXZ_VERSION)
 
 ## serve-web: build, then serve build/web on http://$(SERVE_ADDR)/ to try it here
 serve-web: web

@@ -10,22 +10,27 @@
 const BUILD = "__BUILD__";
 const CACHE = "tubewright-" + BUILD;
 const FILES = [];
+const WASM_XZ = "tubewright.wasm.xz";
 const WASM_GZ = "tubewright.wasm.gz";
 const WASM_RAW = "tubewright.wasm";
-// The app is needed in one form: compressed where the browser can unpack
-// it (as the page does), else raw. The other form is not downloaded.
-const GZ = typeof DecompressionStream === "function";
-const SET = FILES.filter((f) => f !== (GZ ? WASM_RAW : WASM_GZ));
+const WASM = [WASM_XZ, WASM_GZ, WASM_RAW];
+// The app is needed in one form, the one the page fetches first: xz where
+// the build has it (with its decoder, unxz.js), else gzip where the
+// browser can unpack it, else raw. The other forms are not downloaded.
+const FORM = FILES.includes(WASM_XZ) ? WASM_XZ
+  : typeof DecompressionStream === "function" ? WASM_GZ : WASM_RAW;
+const SET = FILES.filter((f) => !WASM.includes(f) || f === FORM);
 
 self.addEventListener("install", (event) => {
   event.waitUntil((async () => {
     const cache = await caches.open(CACHE);
     try {
       const got = await Promise.all(SET.map(async (f) => {
-        // The page fetched the app as f?v=BUILD a moment ago: take that
-        // copy from the browser's HTTP cache rather than download it again.
-        const wasm = f === WASM_GZ || f === WASM_RAW;
-        const req = new Request(wasm ? f + "?v=" + BUILD : f, { cache: wasm ? "force-cache" : "no-cache" });
+        // The page fetched the app (and unxz.js) as f?v=BUILD a moment
+        // ago: take that copy from the browser's HTTP cache rather than
+        // download it again.
+        const seen = f === FORM || f === "unxz.js";
+        const req = new Request(seen ? f + "?v=" + BUILD : f, { cache: seen ? "force-cache" : "no-cache" });
         const resp = await fetch(req);
         if (!resp.ok) throw new Error(f + ": HTTP " + resp.status);
         // A fresh response: a redirected one cannot answer a navigation.

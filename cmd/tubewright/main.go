@@ -26,6 +26,7 @@ import (
 )
 
 func main() {
+	mark("tw-main")
 	if len(os.Args) > 1 && (os.Args[1] == "-version" || os.Args[1] == "--version") {
 		fmt.Println("tubewright", ui.Version)
 		return
@@ -46,7 +47,9 @@ func run(w *app.Window) error {
 	a := ui.NewApp(w.Invalidate)
 	keeper, porter, listen := openStorage(w)
 	a.UseKeeper(keeper, porter)
+	mark("tw-app")
 	var ops op.Ops
+	first := true
 	for {
 		ev := w.Event()
 		listen(ev)
@@ -58,6 +61,10 @@ func run(w *app.Window) error {
 			gtx := app.NewContext(&ops, e)
 			a.Layout(gtx)
 			e.Frame(gtx.Ops)
+			if first {
+				first = false
+				mark("tw-frame")
+			}
 		}
 	}
 }

@@ -8,7 +8,8 @@
 //                          saved work survives reloads and goes out and
 //                          back in by export and import (keep.js)
 //   node run.js size DIR   a table of raw and compressed sizes, the bytes a
-//                          cold visit downloads and the first-frame time
+//                          cold visit downloads and the time of each step
+//                          to the first frame (median of RUNS, default 5)
 //
 // It serves DIR itself on 127.0.0.1 (a secure context, so the service
 // worker registers) and counts the bytes it sends.
@@ -22,7 +23,7 @@ const { keepScenario } = require("./keep.js");
 const { listenScenario } = require("./listen.js");
 
 const TYPES = { ".html": "text/html; charset=utf-8", ".js": "text/javascript", ".wasm": "application/wasm",
-  ".gz": "application/gzip", ".webmanifest": "application/manifest+json", ".svg": "image/svg+xml", ".png": "image/png" };
+  ".gz": "application/gzip", ".xz": "application/x-xz", ".webmanifest": "application/manifest+json", ".svg": "image/svg+xml", ".png": "image/png" };
 
 // serve starts a static server for dir; sent counts body bytes per path.
 // stats.dir may be changed to serve another folder (a new build).
@@ -199,7 +200,7 @@ async function updates(browser, dir, stats, url) {
     const a = await build(page);
     check(await sets(page) === "tubewright-" + a, `a visit keeps one set of files, tubewright-${a}`);
 
-    stats.dir = copyBuild(dir, "00000000000b", ["tubewright.wasm.gz", "tubewright.wasm"]);
+    stats.dir = copyBuild(dir, "00000000000b", ["tubewright.wasm.xz", "tubewright.wasm.gz", "tubewright.wasm"]);
     await update(page);
     await page.waitForTimeout(3000);
     check(await sets(page) === "tubewright-" + a, "a new build with files missing does not replace the set");
@@ -224,45 +225,65 @@ async function updates(browser, dir, stats, url) {
 
 function human(n) { return (n / 1e6).toFixed(2) + " MB"; }
 
+// PHASES are the page's performance marks of a start, in order: the app's
+// bytes in (tw-downloaded) and unpacked (tw-unpacked), compiled and
+// instantiated (tw-compiled), Go started (tw-run), Go's runtime and package
+// init done (tw-main), the app built (tw-app), its first frame handed over
+// (tw-frame) and on screen (tw-first-frame).
+const PHASES = ["tw-downloaded", "tw-unpacked", "tw-compiled", "tw-run", "tw-main", "tw-app", "tw-frame", "tw-first-frame"];
+
+function median(xs) {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[(s.length - 1) >> 1];
+}
+
 async function size(dir) {
   const raw = fs.readFileSync(path.join(dir, "tubewright.wasm"));
   const gz = fs.readFileSync(path.join(dir, "tubewright.wasm.gz"));
+  const xzFile = path.join(dir, "tubewright.wasm.xz");
+  const xz = fs.existsSync(xzFile) ? fs.readFileSync(xzFile) : null;
   const br = zlib.brotliCompressSync(raw, { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 11 } });
+  const runs = Number(process.env.RUNS || 5);
   const { server, stats, url } = await serve(dir);
   const browser = await launch();
-  const cold = [];
-  const compiled = [];
-  let coldBytes = 0;
+  const marks = Object.fromEntries(PHASES.map((p) => [p, []]));
+  const coldBytes = [];
   try {
-    for (let i = 0; i < 3; i++) {
+    for (let i = 0; i < runs; i++) {
       const ctx = await browser.newContext(phone); // a fresh profile: a cold visit
       const page = await ctx.newPage();
       stats.bytes = 0;
       await page.goto(url);
-      cold.push(await firstFrame(page));
-      compiled.push(await page.evaluate(() => performance.getEntriesByName("tw-compiled")[0].startTime));
+      await firstFrame(page);
+      const got = await page.evaluate((ps) => ps.map((p) => (performance.getEntriesByName(p)[0] || {}).startTime), PHASES);
+      PHASES.forEach((p, k) => { if (got[k] !== undefined) marks[p].push(got[k]); });
       // The service worker fills its set after the start: count it too.
       await page.waitForFunction(async () => {
         const r = await navigator.serviceWorker.getRegistration();
         return !!(r && r.active);
       }, null, { timeout: 60000 });
-      coldBytes = stats.bytes;
+      coldBytes.push(stats.bytes);
       await ctx.close();
     }
   } finally {
     await browser.close();
     server.close();
   }
-  cold.sort((a, b) => a - b);
-  compiled.sort((a, b) => a - b);
   const rows = [
     ["tubewright.wasm (raw)", human(raw.length)],
-    ["tubewright.wasm.gz (served)", human(gz.length)],
-    ["tubewright.wasm, Brotli 11 (for comparison)", human(br.length)],
-    ["cold visit, all bytes sent (page, app, service worker set)", human(coldBytes)],
-    ["app downloaded and compiled, cold (median of 3)", compiled[1].toFixed(0) + " ms"],
-    ["first frame, cold, phone size (median of 3)", cold[1].toFixed(0) + " ms"],
+    ["tubewright.wasm.gz (fallback: DecompressionStream)", human(gz.length)],
   ];
+  if (xz) rows.push(["tubewright.wasm.xz (served, unpacked by unxz.js)", human(xz.length)]);
+  rows.push(["tubewright.wasm, Brotli 11 (for comparison)", human(br.length)]);
+  rows.push(["cold visit, all bytes sent (page, app, service worker set)", human(median(coldBytes))]);
+  const names = { "tw-downloaded": "app downloaded", "tw-unpacked": "app unpacked", "tw-compiled": "app compiled and instantiated",
+    "tw-run": "Go started", "tw-main": "Go runtime and package init done", "tw-app": "app built",
+    "tw-frame": "first frame handed to the browser", "tw-first-frame": "first frame on screen" };
+  for (const p of PHASES) {
+    if (marks[p].length) rows.push([`${names[p]}, cold, phone size (median of ${marks[p].length})`, median(marks[p]).toFixed(0) + " ms"]);
+  }
+  rows.push(["first frame, each run", marks["tw-first-frame"].map((v) => v.toFixed(0)).join(", ") + " ms"]);
+  rows.push(["load average (1, 5, 15 min) at the end", require("os").loadavg().map((v) => v.toFixed(2)).join(", ")]);
   const w = Math.max(...rows.map((r) => r[0].length));
   for (const [k, v] of rows) console.log(k.padEnd(w + 2) + v);
 }

@@ -1,11 +1,17 @@
 // Command pack assembles the browser build: it copies the page shell from
-// assets/web and wasm_exec.js, writes the app's WebAssembly both raw and
-// gzip-compressed (the page fetches the .gz and unpacks it with the
-// browser's DecompressionStream; any static host serves it as a plain
-// file), names the build after a hash of its files, and writes the service
+// assets/web and wasm_exec.js, writes the app's WebAssembly in up to three
+// forms, names the build after a hash of its files, and writes the service
 // worker with exactly the list of built files.
 //
-//	go run ./assets/web/pack -wasm build/tubewright.wasm -out build/web
+// The forms of the app, all served as plain files by any static host:
+// tubewright.wasm.xz (xz -9e, the smallest; the page unpacks it with
+// unxz.js, the xz-decompress package from npm given by -unxz, which is
+// xz-embedded built to WebAssembly), tubewright.wasm.gz (gzip -9, unpacked
+// by the browser's DecompressionStream where unxz.js cannot load) and
+// tubewright.wasm (raw, for browsers with neither). Without -unxz there is
+// no xz form. The xz form needs the xz command (Debian's xz-utils).
+//
+//	go run ./assets/web/pack -wasm build/tubewright.wasm -unxz DECODER.js -out build/web
 //	go run ./assets/web/pack -check build/web
 //	go run ./assets/web/pack -serve build/web -addr 127.0.0.1:8080
 //
@@ -38,6 +44,8 @@ import (
 const (
 	wasmRaw  = "tubewright.wasm"
 	wasmGz   = "tubewright.wasm.gz"
+	wasmXz   = "tubewright.wasm.xz"
+	unxzName = "unxz.js"
 	swName   = "sw.js"
 	pageName = "index.html"
 	execName = "wasm_exec.js"
@@ -52,6 +60,7 @@ type options struct {
 	shell    string // folder with index.html, sw.js and shellFiles
 	wasm     string // the built WebAssembly
 	wasmExec string // Go's wasm_exec.js
+	unxz     string // the xz decoder script (xz-decompress); "" for no xz form
 	out      string // the folder to write (made; must be empty or missing)
 }
 
@@ -62,6 +71,7 @@ func main() {
 	addr := flag.String("addr", "127.0.0.1:8080", "address for -serve")
 	flag.StringVar(&o.shell, "shell", "assets/web", "folder of the page shell")
 	flag.StringVar(&o.wasm, "wasm", "", "the built WebAssembly file")
+	flag.StringVar(&o.unxz, "unxz", "", "the xz decoder script (xz-decompress.min.js); none: no xz form of the app")
 	flag.StringVar(&o.wasmExec, "wasm-exec", "", "Go's wasm_exec.js (default: the one of `go env GOROOT`)")
 	flag.StringVar(&o.out, "out", "build/web", "folder to write")
 	flag.Parse()
@@ -135,6 +145,16 @@ func pack(o options) (string, error) {
 		return "", err
 	}
 	files[wasmGz] = gz
+	xzSize := 0
+	if o.unxz != "" {
+		if err := read(unxzName, o.unxz); err != nil {
+			return "", err
+		}
+		if files[wasmXz], err = xzBytes(files[wasmRaw]); err != nil {
+			return "", err
+		}
+		xzSize = len(files[wasmXz])
+	}
 	page, err := os.ReadFile(filepath.Join(o.shell, pageName))
 	if err != nil {
 		return "", err
@@ -148,6 +168,7 @@ func pack(o options) (string, error) {
 	files[pageName] = fill(page, build, map[string]string{
 		"__WASM_SIZE__":    strconv.Itoa(len(files[wasmRaw])),
 		"__WASM_GZ_SIZE__": strconv.Itoa(len(files[wasmGz])),
+		"__WASM_XZ_SIZE__": strconv.Itoa(xzSize),
 	})
 	names := make([]string, 0, len(files))
 	for n := range files {
@@ -186,6 +207,19 @@ func gzipBytes(b []byte) ([]byte, error) {
 		return nil, err
 	}
 	return buf.Bytes(), nil
+}
+
+// xzBytes compresses b with the xz command at its strongest preset, with a
+// CRC32 check (xz-embedded, the page's decoder, checks CRC32).
+func xzBytes(b []byte) ([]byte, error) {
+	cmd := exec.Command("xz", "--format=xz", "--check=crc32", "-9e", "--stdout", "-")
+	cmd.Stdin = bytes.NewReader(b)
+	var out, errb bytes.Buffer
+	cmd.Stdout, cmd.Stderr = &out, &errb
+	if err := cmd.Run(); err != nil {
+		return nil, fmt.Errorf("xz (Debian package xz-utils): %v %s", err, strings.TrimSpace(errb.String()))
+	}
+	return out.Bytes(), nil
 }
 
 // buildName is the first 12 hex digits of a SHA-256 over the files' names
