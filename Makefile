@@ -65,7 +65,7 @@ define npm_install
 endef
 
 .PHONY: all run test deps check-go fmt-check vet lint unit build-twcalc build-wasm \
-	web web-deps serve-web web-size browser-deps browser-test store-wasm-deps store-wasm-test apk shots bench fuzz clean
+	web web-deps serve-web web-size browser-deps browser-test store-wasm-deps store-wasm-test apk shots fonts bench fuzz clean
 
 all: test
 
@@ -158,6 +158,19 @@ apk: check-go
 shots: deps
 	mkdir -p build/shots
 	SHOT_DIR=$(CURDIR)/build/shots $(GO) test -count=1 -run 'TestScreenshot' ./ui/
+
+## fonts: rewrite ui/fonts (the app's bold face) from golang.org/x/image's Go
+## Bold, with its TrueType hinting left out (Gio never runs it), with
+## Debian's fonttools; TestAppFacesDrawAsGoFonts checks the result
+GOFONT_TTFS = $(shell $(GO) list -m -f '{{.Dir}}' golang.org/x/image)/font/gofont/ttfs
+fonts: check-go
+	$(call apt_install,python3-fonttools)
+	for f in Bold; do \
+		/usr/bin/python3 -m fontTools.subset $(GOFONT_TTFS)/Go-$$f.ttf --unicodes='*' --glyphs='*' \
+			--no-hinting --layout-features='*' --name-IDs='*' --name-languages='*' --name-legacy \
+			--notdef-glyph --notdef-outline --output-file=ui/fonts/Go-$$f.ttf || exit 1; \
+	done
+	cp $(GOFONT_TTFS)/README ui/fonts/LICENSE && chmod 644 ui/fonts/LICENSE
 
 ## bench: the benchmarks behind the speed and memory claims
 bench: check-go

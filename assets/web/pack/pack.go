@@ -210,9 +210,11 @@ func gzipBytes(b []byte) ([]byte, error) {
 }
 
 // xzBytes compresses b with the xz command at its strongest preset, with a
-// CRC32 check (xz-embedded, the page's decoder, checks CRC32).
+// CRC32 check (xz-embedded, the page's decoder, checks CRC32). pb=0 (no
+// position bits) suits WebAssembly's byte-aligned code: measured on the
+// app, 0.7 % smaller than the preset's pb=2.
 func xzBytes(b []byte) ([]byte, error) {
-	cmd := exec.Command("xz", "--format=xz", "--check=crc32", "-9e", "--stdout", "-")
+	cmd := exec.Command("xz", "--format=xz", "--check=crc32", "--lzma2=preset=9e,pb=0", "--stdout", "-")
 	cmd.Stdin = bytes.NewReader(b)
 	var out, errb bytes.Buffer
 	cmd.Stdout, cmd.Stderr = &out, &errb

@@ -5,8 +5,10 @@ import (
 	"compress/gzip"
 	"io"
 	"os"
+	"os/exec"
 	"path/filepath"
 	"slices"
+	"strconv"
 	"strings"
 	"testing"
 )
@@ -71,6 +73,45 @@ func TestPackListsExactlyTheBuiltFiles(t *testing.T) {
 		if !strings.Contains(s, `"`+build+`"`) {
 			t.Errorf("%s does not name the build %s", f, build)
 		}
+	}
+}
+
+// TestPackWritesXzForm packs with a decoder script and checks the xz form:
+// it is listed with unxz.js, the xz command unpacks it to the app, and the
+// page knows its size; without a decoder the page's xz size is 0.
+func TestPackWritesXzForm(t *testing.T) {
+	wasm := bytes.Repeat([]byte("\x00asm fake module, xz "), 4000)
+	tmp := t.TempDir()
+	w := filepath.Join(tmp, "app.wasm")
+	dec := filepath.Join(tmp, "decoder.js")
+	os.WriteFile(w, wasm, 0o644)
+	os.WriteFile(dec, []byte("/* a stand-in decoder */"), 0o644)
+	dir := filepath.Join(tmp, "web")
+	if _, err := pack(options{shell: "..", wasm: w, unxz: dec, out: dir, wasmExec: must(goWasmExec())}); err != nil {
+		t.Fatal(err)
+	}
+	listed := must(workerFiles(must(os.ReadFile(filepath.Join(dir, swName)))))
+	for _, f := range []string{wasmXz, unxzName, wasmGz, wasmRaw} {
+		if !slices.Contains(listed, f) {
+			t.Errorf("the worker does not list %s: %v", f, listed)
+		}
+	}
+	xzFile := filepath.Join(dir, wasmXz)
+	got, err := exec.Command("xz", "--decompress", "--stdout", xzFile).Output()
+	if err != nil {
+		t.Fatalf("xz -d: %v", err)
+	}
+	if !bytes.Equal(got, wasm) {
+		t.Error("tubewright.wasm.xz does not unpack to the app")
+	}
+	st := must(os.Stat(xzFile))
+	page := string(must(os.ReadFile(filepath.Join(dir, pageName))))
+	if want := "xz: " + strconv.FormatInt(st.Size(), 10) + ","; !strings.Contains(page, want) {
+		t.Errorf("the page does not say %q", want)
+	}
+	plain, _ := packFake(t, wasm)
+	if page := string(must(os.ReadFile(filepath.Join(plain, pageName)))); !strings.Contains(page, "xz: 0,") {
+		t.Error("a build without a decoder does not tell the page it has no xz form")
 	}
 }
 
