@@ -102,3 +102,45 @@ func TestSafetyGeneralCautionOnce(t *testing.T) {
 		}
 	}
 }
+
+// TestSafetyStepsTwoColumns: on a tablet beside the catalog, a safety
+// step's verdict (and the numbers under it) sit right of the step's text
+// fields; on a phone the verdict is above them.
+func TestSafetyStepsTwoColumns(t *testing.T) {
+	for _, c := range []struct {
+		size   image.Point
+		beside bool
+	}{{image.Pt(1024, 768), true}, {tallPhone, false}} {
+		a, h := safetyApp(t, filepath.Join(t.TempDir(), "benchlog.json"), "safety", c.size)
+		s := a.Screen("safety").(*safetyScreen)
+		// A vessel whose steps give numbers (as TestScreenshotThemes).
+		s.forms.vessel.SetText("allowable-stress", "138 MPa")
+		s.forms.vessel.SetText("relief-set", "30 barg")
+		s.forms.vessel.SetText("mawp", "25 barg")
+		checked := 0
+		for i := 0; i < s.items(); i++ {
+			if s.calcs[i] == nil {
+				continue
+			}
+			s.goTo(i)
+			h.frames(3)
+			v, ok := h.byDesc("Step verdict")
+			field, okF := firstOfClass(h.nodes(), semantic.Editor)
+			if !ok || !okF {
+				continue // no numbers yet from the starting inputs
+			}
+			vb, fb := v.Desc.Bounds, field.Desc.Bounds
+			if c.beside && fb.Max.X > vb.Min.X {
+				t.Errorf("step %d (%s) at %v: text field %v not left of the verdict %v", i+1, s.pass.Items[i].ID, c.size, fb, vb)
+			}
+			if !c.beside && vb.Max.Y > fb.Min.Y {
+				t.Errorf("step %d (%s) at %v: verdict %v not above the text field %v", i+1, s.pass.Items[i].ID, c.size, vb, fb)
+			}
+			checked++
+		}
+		if checked == 0 {
+			t.Errorf("at %v no step showed a verdict beside a text field", c.size)
+		}
+		t.Logf("at %v: %d steps with a verdict and a text field", c.size, checked)
+	}
+}
