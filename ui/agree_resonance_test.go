@@ -18,7 +18,7 @@ var _ = addAgreeCases(
 	agreeCase{id: sheet.IDResonance, name: "five zones, twelve modes", texts: map[string]string{"resonator": "zones", "ends": "closed-open",
 		"zones": "0.1 m, 10 mm, 700 K; 0.1 m, 10 mm, 500 K; 0.1 m, 10 mm, 400 K; 0.2 m, 12 mm, 300 K; 0.3 m, 15 mm, 295 K", "modes": "12"}},
 	agreeCase{id: sheet.IDResonance, name: "Helmholtz with ±", texts: map[string]string{"resonator": "helmholtz", "volume": "1 L ± 10 mL",
-		"neck-length": "50 mm", "neck-radius": "10 mm ± 0.1 mm"}},
+		"neck-length": "50 mm", "neck-diameter": "20 mm ± 0.2 mm"}},
 	agreeCase{id: sheet.IDResonance, name: "narrow tube with wall losses", texts: map[string]string{"length": "0.3 m", "diameter": "4 mm ± 0.05 mm",
 		"losses": "wall"}},
 	agreeCase{id: sheet.IDResonance, name: "humid air, zones with wall losses", texts: map[string]string{"resonator": "zones", "humidity": "60 %",
@@ -29,5 +29,5 @@ var _ = addAgreeCases(
 	agreeCase{id: sheet.IDResonance, name: "zone too cold", texts: map[string]string{"resonator": "zones",
 		"zones": "0.1 m, 10 mm, 700 K; 0.4 m, 10 mm, 5 K"}, errKey: "zones"},
 	agreeCase{id: sheet.IDResonance, name: "neck shorter than its radius", texts: map[string]string{"resonator": "helmholtz", "volume": "1 L",
-		"neck-length": "5 mm", "neck-radius": "10 mm"}, errKey: "neck-radius"},
+		"neck-length": "5 mm", "neck-diameter": "20 mm"}, errKey: "neck-diameter"},
 )

@@ -22,8 +22,9 @@ type resonanceScreen struct {
 	plot  *Plot
 	// stash holds the texts of hidden inputs by key (see hideInputs).
 	stash map[string]string
-	// bore is the tube's inside diameter, or its radius.
-	bore *sizePair
+	// bore is the tube's inside diameter, or its radius; neck the same
+	// of a Helmholtz resonator's neck.
+	bore, neck *sizePair
 }
 
 func newResonanceScreen(env *Env) Screen {
@@ -31,6 +32,7 @@ func newResonanceScreen(env *Env) Screen {
 	s := &resonanceScreen{env: env, page: NewPage(env), side: NewPage(env), form: NewForm(env, d), plot: NewPlot(env),
 		stash: map[string]string{}}
 	s.bore = newSizePair(env, s.form, "diameter", "radius", [2]string{"Diameter", "Radius"}, [2]string{"Ø", "radius"})
+	s.neck = newSizePair(env, s.form, "neck-diameter", "neck-radius", [2]string{"Diameter", "Radius"}, [2]string{"Ø", "radius"})
 	s.zones = newZoneEditor(env, s.form)
 	// The tube's size takes a carried value in either form, the hidden
 	// one too: the pair then shows the form that arrived.
@@ -55,13 +57,16 @@ func (s *resonanceScreen) kind() string { return s.form.Text("resonator") }
 func (s *resonanceScreen) update(gtx layout.Context) {
 	s.zones.update(gtx)
 	changed := s.form.Update(gtx)
-	if s.bore.update(gtx, s.form, s.stash) {
-		changed = s.form.Update(gtx) || changed
+	for _, p := range []*sizePair{s.bore, s.neck} {
+		if p.update(gtx, s.form, s.stash) {
+			changed = s.form.Update(gtx) || changed
+		}
 	}
 	if hideInputs(s.form, s.inputKeys(), s.stash) {
 		changed = s.form.Update(gtx) || changed
 	}
 	s.bore.settle(s.form)
+	s.neck.settle(s.form)
 	if changed {
 		s.publish()
 		if res := s.form.Result(); res != nil && s.kind() == sheet.ResonatorZones {
@@ -79,7 +84,7 @@ func (s *resonanceScreen) inputKeys() []string {
 	case sheet.ResonatorZones:
 		return []string{"resonator", "ends", "zones", "modes", "end-correction", "gas", "pressure", "humidity", "non-ideal", "losses"}
 	case sheet.ResonatorHelmholtz:
-		return []string{"resonator", "volume", "neck-length", "neck-radius", "end-correction", "gas", "temperature", "pressure", "humidity",
+		return []string{"resonator", "volume", "neck-length", s.neck.key(), "end-correction", "gas", "temperature", "pressure", "humidity",
 			"non-ideal"}
 	}
 	given := "length"
@@ -98,8 +103,8 @@ func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 		if key == "zones" {
 			inputs = append(inputs, s.zones.widgets()...)
 		}
-		if key == s.bore.key() {
-			inputs = append(inputs, s.bore.widgets(s.form)...)
+		if p := s.pairOf(key); p != nil {
+			inputs = append(inputs, p.widgets(s.form)...)
 			continue
 		}
 		inputs = append(inputs, s.form.InputWidget(key))
@@ -109,4 +114,14 @@ func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 	outputs = append(outputs, s.plot.Layout)
 	outputs = append(outputs, out[2:]...)
 	return splitLayout(gtx, s.page, s.side, []layout.Widget{formHeadline(s.env, s.form)}, inputs, outputs)
+}
+
+// pairOf returns the size pair whose shown input is key, or nil.
+func (s *resonanceScreen) pairOf(key string) *sizePair {
+	for _, p := range []*sizePair{s.bore, s.neck} {
+		if p.key() == key {
+			return p
+		}
+	}
+	return nil
 }

@@ -194,8 +194,8 @@ func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 		t.Errorf("Helmholtz shown %q, want %q", got, units.Format(hr.Frequency, units.DimFrequency))
 	}
 	h.retype("Neck length", "50 mm", "5 mm")
-	if e := s.form.Field("neck-radius").ErrorText(); !strings.Contains(e, "neck radius") {
-		t.Errorf("error under the neck radius %q", e)
+	if e := s.form.Field("neck-diameter").ErrorText(); !strings.Contains(e, "neck") {
+		t.Errorf("error under the neck's diameter %q", e)
 	}
 }
 

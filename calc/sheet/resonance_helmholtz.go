@@ -1,6 +1,8 @@
 package sheet
 
 import (
+	"errors"
+
 	"tubewright/calc/resonator"
 	"tubewright/calc/units"
 )
@@ -12,8 +14,10 @@ func helmholtzInputs() []Input {
 			Hint: "volume of the cavity without the neck: 1 L, 500 mL, 0.002 m3; ± or +- for an uncertainty"},
 		{Key: "neck-length", Label: "Neck length", Kind: Quantity, Dim: units.DimLength, Optional: true, Example: "50 mm", PM: true,
 			Hint: "physical neck length, at least the neck radius: 50 mm, 2 in"},
-		{Key: "neck-radius", Label: "Neck inner radius", Kind: Quantity, Dim: units.DimLength, Optional: true, Example: "10 mm", PM: true,
-			Hint: "half the neck's inner diameter: 10 mm"},
+		{Key: "neck-diameter", Label: "Neck inside diameter", Kind: Quantity, Dim: units.DimLength, Optional: true, Example: "20 mm", PM: true,
+			Hint: "bore of the neck: 20 mm, 3/4 in (or give neck-radius)"},
+		{Key: "neck-radius", Label: "Neck inner radius", Kind: Quantity, Dim: units.DimLength, Optional: true, PM: true,
+			Hint: "half the neck's inside diameter: 10 mm (or give neck-diameter)"},
 	}
 }
 
@@ -27,9 +31,9 @@ var helmholtzRows = []struct {
 	pmFrom                 []string
 }{
 	{"frequency", "Resonance frequency", "", "", nil},
-	{"inner_end_correction", "Inner end correction", "mm", "where the neck opens into the cavity (flanged)", []string{"neck-radius"}},
-	{"outer_end_correction", "Outer end correction", "mm", "at the outer end of the neck, as chosen", []string{"neck-radius"}},
-	{"effective_neck_length", "Effective neck length", "", "", []string{"neck-length", "neck-radius"}},
+	{"inner_end_correction", "Inner end correction", "mm", "where the neck opens into the cavity (flanged)", []string{"neck-diameter", "neck-radius"}},
+	{"outer_end_correction", "Outer end correction", "mm", "at the outer end of the neck, as chosen", []string{"neck-diameter", "neck-radius"}},
+	{"effective_neck_length", "Effective neck length", "", "", []string{"neck-length", "neck-diameter", "neck-radius"}},
 	{"sound_speed", "Sound speed", "", "", nil},
 	{"wavelength", "Wavelength", "", "", nil},
 }
@@ -57,19 +61,29 @@ func helmholtzValues(r resonator.HelmholtzResult) []float64 {
 // runHelmholtz solves the Helmholtz resonator, with the ± of its sizes,
 // temperature and pressure carried to first order.
 func runHelmholtz(v *Values) (*Result, error) {
-	for _, k := range []string{"volume", "neck-length", "neck-radius"} {
+	neck := "neck-diameter"
+	switch d, r := v.Has("neck-diameter"), v.Has("neck-radius"); {
+	case d && r:
+		return nil, v.Blame(errors.New("give either the neck's inside diameter or its inner radius, not both"), "neck-radius")
+	case r:
+		neck = "neck-radius"
+	}
+	for _, k := range []string{"volume", "neck-length", neck} {
 		if !v.Has(k) {
 			return nil, tubeMissing(v, k)
 		}
 	}
-	if err := tubeRequirePositive(v, "volume", "neck-length", "neck-radius", "temperature", "pressure"); err != nil {
+	if err := tubeRequirePositive(v, "volume", "neck-length", neck, "temperature", "pressure"); err != nil {
 		return nil, err
 	}
 	outer := v.Pick("end-correction").(resonator.EndCorrection)
-	keys := []string{"volume", "neck-length", "neck-radius", "temperature", "pressure"}
+	keys := []string{"volume", "neck-length", neck, "temperature", "pressure"}
 	x, u := make([]float64, len(keys)), make([]float64, len(keys))
 	for i, k := range keys {
 		x[i], u[i] = v.SI(k), v.Q(k).Uncertainty
+	}
+	if neck == "neck-diameter" { // the calculator takes the radius
+		x[2], u[2] = x[2]/2, u[2]/2
 	}
 	solve := func(x []float64) (resonator.HelmholtzResult, error) {
 		g, err := tubeGas(v, x[3], x[4])
@@ -84,7 +98,7 @@ func runHelmholtz(v *Values) (*Result, error) {
 			// neck holding more than the cavity
 			key := "volume"
 			if h.NeckRadius > h.NeckLength {
-				key = "neck-radius"
+				key = neck
 			}
 			return res, v.Blame(err, key)
 		}

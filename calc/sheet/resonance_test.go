@@ -483,3 +483,37 @@ func TestTubeDiameterOrRadius(t *testing.T) {
 		}
 	}
 }
+
+// TestHelmholtzNeckDiameterOrRadius: the neck given by its inside
+// diameter and by half that as its radius gives the same rows, ±
+// included, to 1e-12 relative (a diameter is twice the radius).
+func TestHelmholtzNeckDiameterOrRadius(t *testing.T) {
+	t.Parallel()
+	base := map[string]string{"volume": "1 L ± 20 mL", "neck-length": "50 mm"}
+	with := func(key, text string) map[string]string {
+		m := map[string]string{key: text}
+		for k, v := range base {
+			m[k] = v
+		}
+		return m
+	}
+	a, errA := resonanceSheet.Evaluate(with("neck-diameter", "20 mm ± 0.2 mm"))
+	b, errB := resonanceSheet.Evaluate(with("neck-radius", "10 mm ± 0.1 mm"))
+	if errA != nil || errB != nil {
+		t.Fatalf("%v, %v", errA, errB)
+	}
+	if len(a.Rows) != len(b.Rows) || len(a.Rows) < 5 {
+		t.Fatalf("%d rows by diameter, %d by radius", len(a.Rows), len(b.Rows))
+	}
+	for i, ra := range a.Rows {
+		rb := b.Rows[i]
+		if ra.Key != rb.Key || !scalar.EqualWithinRel(ra.Value, rb.Value, 1e-12) || !scalar.EqualWithinRel(ra.PM, rb.PM, 1e-12) {
+			t.Errorf("row %s by diameter %+v, by radius %+v", ra.Key, ra, rb)
+		}
+	}
+	both := with("neck-diameter", "20 mm")
+	both["neck-radius"] = "10 mm"
+	if _, err := resonanceSheet.Evaluate(both); len(FieldErrors(err)) == 0 || FieldErrors(err)[0].Key != "neck-radius" {
+		t.Errorf("neck diameter and radius both given: %v", err)
+	}
+}
