@@ -66,3 +66,20 @@ func TestResultsDetailsShot(t *testing.T) {
 		})
 	}
 }
+
+// TestResultsPreferredUnitGivesWay: a row's preferred unit gives way to a
+// readable one where its number would be huge or tiny: helium's kinematic
+// viscosity at a low pressure is not "186900 mm²/s" (1 mm²/s = 1e-6 m²/s).
+func TestResultsPreferredUnitGivesWay(t *testing.T) {
+	res := &sheet.Result{}
+	res.Add("kinematic_viscosity", "Kinematic viscosity", 0.1869, units.DimKinematicViscosity).Show = "mm2/s"
+	res.Add("density", "Density", 1.605e-4, units.DimDensity).Show = "kg/m3"
+	res.Add("gap", "Gap", 3.731e-4, units.DimLength).Show = "mm"
+	r := NewResults(NewEnv(nil))
+	r.Show(res)
+	for label, want := range map[string]string{"Kinematic viscosity": "0.1869 m²/s", "Density": "160.5 mg/m³", "Gap": "0.3731 mm"} {
+		if got, _ := r.Value(label); got != want {
+			t.Errorf("%s shown %q, want %q", label, got, want)
+		}
+	}
+}

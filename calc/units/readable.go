@@ -199,3 +199,23 @@ func FormatSI(v float64, unit string) string {
 func Decimal(v float64, sig int) string {
 	return formatNumber(v, min(max(sig, 1), 17))
 }
+
+// FormatPMPrefer is FormatPMIn in the preferred unit of a result row
+// (the unit a screen usually shows it in, "mm²/s"), unless the number
+// there would read below 0.001 or from 10000 up ("186900 mm²/s",
+// "0.0001605 kg/m³"): then the readable unit of Format takes over
+// ("0.1869 m²/s", "160.5 mg/m³"). Zero stays in the preferred unit.
+func FormatPMPrefer(v, u float64, d Dimension, unit string) (string, error) {
+	def, err := resolve(unit, d, true)
+	if err != nil {
+		return "", err
+	}
+	if !isFinite(v) {
+		return NotANumber, nil
+	}
+	x := math.Abs(roundSig(toUnit(v, def, StandardAtmosphere), 4))
+	if x == 0 || (x >= 1e-3 && x < 1e4) || def.offset != 0 || def.gauge {
+		return FormatPMIn(v, u, d, unit)
+	}
+	return FormatPM(v, u, d), nil
+}

@@ -128,3 +128,31 @@ func TestNumberAndDigits(t *testing.T) {
 		}
 	}
 }
+
+// TestFormatPMPrefer: a row's preferred unit is kept while its number
+// reads well and gives way to the readable unit outside 0.001–10000 (our
+// own bounds); 1 mm²/s = 1e-6 m²/s by definition.
+func TestFormatPMPrefer(t *testing.T) {
+	t.Parallel()
+	cases := []struct {
+		v, u float64
+		d    Dimension
+		unit string
+		want string
+	}{
+		{1.242e-5, 0, DimKinematicViscosity, "mm2/s", "12.42 mm²/s"},
+		{0.1869, 0, DimKinematicViscosity, "mm2/s", "0.1869 m²/s"},
+		{1.605e-4, 0, DimDensity, "kg/m3", "160.5 mg/m³"},
+		{0.1625, 0, DimDensity, "kg/m3", "0.1625 kg/m³"},
+		{0.209, 0, DimNone, "%", "20.9 %"},
+		{2.5e-4, 1e-5, DimLength, "mm", "0.250 ± 0.010 mm"},
+		{0, 0, DimLength, "mm", "0 mm"},
+		{300, 0, DimTemperature, "degC", "26.85 °C"},
+	}
+	for _, c := range cases {
+		got, err := FormatPMPrefer(c.v, c.u, c.d, c.unit)
+		if err != nil || got != c.want {
+			t.Errorf("FormatPMPrefer(%g, %g, %v, %q) = %q, %v; want %q", c.v, c.u, c.d, c.unit, got, err, c.want)
+		}
+	}
+}

@@ -35,7 +35,7 @@ func EntryOf(s *sheet.Sheet, texts map[string]string, res *sheet.Result, note st
 			row.Value, row.Uncertainty, row.Unit = r.Value, r.PM, units.SIUnit(r.Dim)
 			row.Shown = units.FormatPM(r.Value, r.PM, r.Dim)
 			if r.Show != "" {
-				if s, err := units.FormatPMIn(r.Value, r.PM, r.Dim, r.Show); err == nil {
+				if s, err := units.FormatPMPrefer(r.Value, r.PM, r.Dim, r.Show); err == nil {
 					row.Shown = s
 				}
 			}
