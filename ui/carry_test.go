@@ -87,7 +87,7 @@ func wantPoint(t *testing.T, h *harness, id sheet.ID, want ...string) {
 			t.Errorf("%s: operating point %q does not say %q", id, got, w)
 		}
 	}
-	if exponent.MatchString(got) {
+	if writtenWithExponent(got) {
 		t.Errorf("%s: operating point %q shows an exponent", id, got)
 	}
 }

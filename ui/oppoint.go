@@ -1,7 +1,6 @@
 package ui
 
 import (
-	"regexp"
 	"strings"
 
 	"gioui.org/layout"
@@ -40,9 +39,26 @@ type opPart struct {
 	from  string
 }
 
-// exponent finds a number written with an exponent ("1e5"), which the
-// screen never shows.
-var exponent = regexp.MustCompile(`\d[eE][-+]?\d`)
+// writtenWithExponent reports whether s holds a number written with an
+// exponent ("1e5", "2.5E-3": a digit, e or E, an optional sign, a digit),
+// which the screen never shows. (A loop rather than a regular expression:
+// Go's regexp package adds about 100 kB to the browser download.)
+func writtenWithExponent(s string) bool {
+	digit := func(c byte) bool { return '0' <= c && c <= '9' }
+	for i := 1; i+1 < len(s); i++ {
+		if (s[i] != 'e' && s[i] != 'E') || !digit(s[i-1]) {
+			continue
+		}
+		j := i + 1
+		if s[j] == '+' || s[j] == '-' {
+			j++
+		}
+		if j < len(s) && digit(s[j]) {
+			return true
+		}
+	}
+	return false
+}
 
 // OperatingPoint returns the line that says at which gas, pressure,
 // temperature and frequency the result was worked out and where each came
@@ -96,7 +112,7 @@ func shownValue(val *sheet.Value) string {
 		return val.Mix.String()
 	}
 	t := strings.TrimSpace(val.Text)
-	if t != "" && !exponent.MatchString(t) && strings.ContainsAny(t, "abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ°") {
+	if t != "" && !writtenWithExponent(t) && strings.ContainsAny(t, "abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ°") {
 		return t
 	}
 	if w := writtenIn(val.Q.Value, val.In.Dim); len(w) > 0 {
