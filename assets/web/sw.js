@@ -19,7 +19,10 @@ const WASM = [WASM_XZ, WASM_GZ, WASM_RAW];
 // browser can unpack it, else raw. The other forms are not downloaded.
 const FORM = FILES.includes(WASM_XZ) ? WASM_XZ
   : typeof DecompressionStream === "function" ? WASM_GZ : WASM_RAW;
-const SET = FILES.filter((f) => !WASM.includes(f) || f === FORM);
+// The install icons (PNG) are left out too: only a browser installing the
+// app asks for them, and it keeps its own copy; the app starts without them.
+const INSTALL_ICONS = ["icon-192.png", "icon-512.png"];
+const SET = FILES.filter((f) => (!WASM.includes(f) || f === FORM) && !INSTALL_ICONS.includes(f));
 
 self.addEventListener("install", (event) => {
   event.waitUntil((async () => {
@@ -29,8 +32,11 @@ self.addEventListener("install", (event) => {
         // The page fetched the app (and unxz.js) as f?v=BUILD a moment
         // ago: take that copy from the browser's HTTP cache rather than
         // download it again.
+        // The page itself is asked for as "./", the address it was loaded
+        // from, so the browser revalidates its copy rather than download it.
         const seen = f === FORM || f === "unxz.js";
-        const req = new Request(seen ? f + "?v=" + BUILD : f, { cache: seen ? "force-cache" : "no-cache" });
+        const url = seen ? f + "?v=" + BUILD : f === "index.html" ? "./" : f;
+        const req = new Request(url, { cache: seen ? "force-cache" : "no-cache" });
         const resp = await fetch(req);
         if (!resp.ok) throw new Error(f + ": HTTP " + resp.status);
         // A fresh response: a redirected one cannot answer a navigation.

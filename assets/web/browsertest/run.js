@@ -39,11 +39,20 @@ function serve(dir) {
     }
     const body = fs.readFileSync(file);
     const st = fs.statSync(file);
+    // A browser revalidating its copy (the service worker fetches the page's
+    // files again, with no-cache) gets 304 and no body, as from any host.
+    const since = Date.parse(req.headers["if-modified-since"] || "");
+    if (since >= Math.floor(st.mtimeMs / 1000) * 1000) {
+      res.writeHead(304, { "Last-Modified": st.mtime.toUTCString(), "Cache-Control": "no-cache" });
+      res.end();
+      stats.requests.push(p + " (304)");
+      return;
+    }
     res.writeHead(200, { "Content-Type": TYPES[path.extname(file)] || "application/octet-stream",
       "Content-Length": body.length, "Last-Modified": st.mtime.toUTCString(), "Cache-Control": "no-cache" });
     res.end(body);
     stats.bytes += body.length;
-    stats.requests.push(p);
+    stats.requests.push(p + " " + body.length);
   });
   return new Promise((ok) => server.listen(0, "127.0.0.1", () => ok({ server, stats, url: `http://127.0.0.1:${server.address().port}/` })));
 }
@@ -263,6 +272,8 @@ async function size(dir) {
         return !!(r && r.active);
       }, null, { timeout: 60000 });
       coldBytes.push(stats.bytes);
+      if (process.env.REQUESTS) console.log(stats.requests.join("\n"));
+      stats.requests = [];
       await ctx.close();
     }
   } finally {
