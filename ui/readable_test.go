@@ -21,7 +21,7 @@ var numberWithExponent = regexp.MustCompile(`[0-9.][eE][-+]?[0-9]`)
 // Terminal-only flags (--json, --device-out, a redirection) are dropped.
 func exampleTexts(t *testing.T, s *sheet.Sheet, line, dir string) map[string]string {
 	t.Helper()
-	args := splitExample(line)[2:]
+	args := sheet.ExampleArgs(line)[2:]
 	files := map[string]string{
 		"tap.wav":       "../testdata/listen_sox_ring16.wav",
 		"warmup.wav":    "../testdata/listen_sox_sine16.wav",
@@ -73,32 +73,6 @@ func exampleTexts(t *testing.T, s *sheet.Sheet, line, dir string) map[string]str
 		}
 	}
 	return texts
-}
-
-// splitExample splits a command line at spaces outside double quotes.
-func splitExample(line string) []string {
-	var args []string
-	var cur strings.Builder
-	quoted, any := false, false
-	for _, r := range line {
-		switch {
-		case r == '"':
-			quoted, any = !quoted, true
-		case r == ' ' && !quoted:
-			if any {
-				args = append(args, cur.String())
-			}
-			cur.Reset()
-			any = false
-		default:
-			cur.WriteRune(r)
-			any = true
-		}
-	}
-	if any {
-		args = append(args, cur.String())
-	}
-	return args
 }
 
 // TestAppExamplesReadWithoutExponents runs every example of every

@@ -88,6 +88,14 @@ func (r *Results) AddPM(label string, v, u float64, dim units.Dimension) {
 
 // AddPMIn is AddPM shown in the chosen unit of dimension dim, e.g. "ms".
 func (r *Results) AddPMIn(label string, v, u float64, dim units.Dimension, unit string) {
+	r.addPMWith(units.FormatPMIn, label, v, u, dim, unit)
+}
+
+// addPMWith appends a row written by format (units.FormatPMIn or
+// units.FormatPMPrefer) in unit: "—" with a reason for a value that is not
+// finite, the value alone with a note for an uncertainty that is not.
+func (r *Results) addPMWith(format func(v, u float64, d units.Dimension, unit string) (string, error),
+	label string, v, u float64, dim units.Dimension, unit string) {
 	if !finite(v) {
 		r.rows = append(r.rows, resultRow{label: label, value: "—", note: notDefined})
 		return
@@ -96,7 +104,7 @@ func (r *Results) AddPMIn(label string, v, u float64, dim units.Dimension, unit 
 	if !finite(u) {
 		u, note = 0, "uncertainty not available"
 	}
-	s, err := units.FormatPMIn(v, u, dim, unit)
+	s, err := format(v, u, dim, unit)
 	if err != nil {
 		r.rows = append(r.rows, resultRow{label: label, value: "—", note: err.Error()})
 		return

@@ -20,7 +20,9 @@ func (r *Results) Show(res *sheet.Result) {
 			case row.Gauge:
 				r.addGauge(row.Label, row.Value)
 			case row.Show != "":
-				r.addPMPrefer(row.Label, row.Value, row.PM, row.Dim, row.Show)
+				// the preferred unit, or the readable one where the number
+				// would be huge or tiny there (units.FormatPMPrefer)
+				r.addPMWith(units.FormatPMPrefer, row.Label, row.Value, row.PM, row.Dim, row.Show)
 			default:
 				r.AddPM(row.Label, row.Value, row.PM, row.Dim)
 			}
@@ -39,26 +41,6 @@ func (r *Results) Show(res *sheet.Result) {
 	}
 	r.Warn(res.Warnings...)
 	r.details.show(res.Details)
-}
-
-// addPMPrefer appends a row in its preferred unit, or in the readable
-// unit where the number would be very large or small there (see
-// units.FormatPMPrefer).
-func (r *Results) addPMPrefer(label string, v, u float64, dim units.Dimension, unit string) {
-	if !finite(v) {
-		r.rows = append(r.rows, resultRow{label: label, value: "—", note: notDefined})
-		return
-	}
-	note := ""
-	if !finite(u) {
-		u, note = 0, "uncertainty not available"
-	}
-	s, err := units.FormatPMPrefer(v, u, dim, unit)
-	if err != nil {
-		r.rows = append(r.rows, resultRow{label: label, value: "—", note: err.Error()})
-		return
-	}
-	r.rows = append(r.rows, resultRow{label: label, value: s, note: note})
 }
 
 // addGauge appends a pressure above the atmosphere, in bar gauge.

@@ -21,7 +21,7 @@ var exponent = regexp.MustCompile(`[0-9.][eE][-+]?[0-9]`)
 // example devices and recordings, files it writes go to dir.
 func exampleArgs(t *testing.T, line, dir string) []string {
 	t.Helper()
-	args := splitLine(line)
+	args := sheet.ExampleArgs(line)
 	if len(args) < 2 || args[0] != "twcalc" {
 		t.Fatalf("example %q does not start with twcalc", line)
 	}
@@ -94,33 +94,6 @@ func TestExamplesReadWithoutExponents(t *testing.T) {
 	if ran < 30 {
 		t.Errorf("only %d examples ran", ran)
 	}
-}
-
-// splitLine splits a command line at spaces outside double quotes, as a
-// shell does for the help's examples.
-func splitLine(line string) []string {
-	var args []string
-	var cur strings.Builder
-	quoted, any := false, false
-	for _, r := range line {
-		switch {
-		case r == '"':
-			quoted, any = !quoted, true
-		case r == ' ' && !quoted:
-			if any {
-				args = append(args, cur.String())
-			}
-			cur.Reset()
-			any = false
-		default:
-			cur.WriteRune(r)
-			any = true
-		}
-	}
-	if any {
-		args = append(args, cur.String())
-	}
-	return args
 }
 
 func hasJSON(args []string) bool {
