@@ -35,6 +35,14 @@ def si(text):
     return float(m.group(1)) * UNITS[m.group(2)]
 
 
+def half(pores, whole, halfkey):
+    """The half size (y0, r) of pores written whole (gap, diameter, as the
+    design writes now) or as the half (half_gap, radius, older files)."""
+    if whole in pores:
+        return si(pores[whole]) / 2
+    return si(pores[halfkey])
+
+
 def device(doc, gas):
     parts = []
     for p in doc["parts"]:
@@ -50,9 +58,9 @@ def device(doc, gas):
         if "pores" in p:
             ps = p["pores"]
             if ps["shape"] == "plates":
-                q["pores"] = dict(shape="plates", y0=si(ps["half_gap"]))
+                q["pores"] = dict(shape="plates", y0=half(ps, "gap", "half_gap"))
             elif ps["shape"] == "circular":
-                q["pores"] = dict(shape="circular", r=si(ps["radius"]))
+                q["pores"] = dict(shape="circular", r=half(ps, "diameter", "radius"))
             else:
                 raise ValueError("pore shape %s is not in gen_onset.py" % ps["shape"])
         if p["kind"] == "open-end" and p.get("flange", "none") != "none":

@@ -90,6 +90,19 @@ func TestDesignFileRoundTrip(t *testing.T) {
 			t.Errorf("part %d is %q, want %q", i+1, got, want[min(i, len(want)-1)])
 		}
 	}
+	// The pores are written whole, as the device file saves them (gap
+	// 2y0), never as the half gap older files had.
+	for _, p := range r.File.PartsList {
+		if p.Pores == nil {
+			continue
+		}
+		if p.Pores.Gap == "" || p.Pores.HalfGap != "" || p.Pores.Radius != "" {
+			t.Errorf("%s pores written as gap %q, half gap %q, radius %q; want the gap only", p.Label, p.Pores.Gap, p.Pores.HalfGap, p.Pores.Radius)
+		}
+	}
+	if strings.Contains(string(b), "half_gap") {
+		t.Errorf("the written design has a half_gap key:\n%s", b)
+	}
 	// The file's geometry is the design's within the written roundings
 	// (1 µm on lengths).
 	if got, want := d.Length(), r.Geometry.Length(); math.Abs(got-want) > 5e-6 {
@@ -130,6 +143,16 @@ func TestDesignKindsAndEnds(t *testing.T) {
 		b, _ := r.File.Marshal()
 		if _, err := linear.ParseDevice(bytes.NewReader(b)); err != nil {
 			t.Errorf("%s: file does not read back: %v", name, err)
+		}
+		// Round pores are written by their diameter, twice the radius
+		// the design chose (4 decimals of a millimetre).
+		if c.Stack == RoundPores {
+			stack := r.File.PartsList[3].Pores
+			if stack.Diameter == "" || stack.Radius != "" {
+				t.Errorf("%s: stack pores written as diameter %q, radius %q; want the diameter only", name, stack.Diameter, stack.Radius)
+			} else if d, err := units.Parse(stack.Diameter, units.DimLength); err != nil || math.Abs(d.Value-2*r.Geometry.Pores.Radius) > 0.6e-7 {
+				t.Errorf("%s: stack pore diameter %q (%v), want 2 × %.7f mm", name, stack.Diameter, err, r.Geometry.Pores.Radius*1e3)
+			}
 		}
 		// Rule of the search's start: r_h = 1.5 δκ unless a limit holds it.
 		if c.MinGap == 0 && c.Stack != MetalWool && c.Stack != Screens && !scalar.EqualWithinRel(r.Start.HydraulicRadius, 1.5*r.ThermalDepth, 1e-12) {

@@ -172,17 +172,19 @@ func (t *Target) file(g Geometry, name, notes string) linear.DeviceFile {
 	}
 }
 
-// poresFile writes pores with the fields of their shape.
+// poresFile writes pores with the fields of their shape, in the whole
+// sizes the device file saves (gap 2y0, pore diameter), as linear's
+// writer does; the half sizes are for reading older files only.
 func poresFile(p linear.Pores) *linear.PoresFile {
 	f := &linear.PoresFile{Shape: p.Shape}
 	switch p.Shape {
 	case "plates":
-		f.HalfGap = mm(p.HalfGap, 4)
+		f.Gap = mm(2*p.HalfGap, 4)
 		if p.Thickness > 0 {
 			f.Thickness = mm(p.Thickness, 4)
 		}
 	case "circular":
-		f.Radius = mm(p.Radius, 4)
+		f.Diameter = mm(2*p.Radius, 4)
 	case "screens":
 		f.Mesh = strconv.FormatFloat(p.Mesh, 'f', 2, 64) + " /m"
 		f.WireDiameter = mm(p.WireDiameter, 4)
