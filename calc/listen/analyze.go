@@ -13,7 +13,15 @@ type Settings struct {
 	// MinFrequency and MaxFrequency bound the search for the resonance, Hz.
 	// Defaults: 20 Hz and the smaller of 20 kHz and 0.45 × the sample rate.
 	MinFrequency, MaxFrequency float64
+	// ClockTolerance is how far the recorder's sample rate may lie from its
+	// nominal value, as a fraction (100e-6 for ±100 ppm); 0, the default,
+	// treats the sample clock as exact. The frequency scales with the true
+	// sample rate, so the tolerance adds FrequencyClock to its ±.
+	ClockTolerance float64
 }
+
+// MaxClockTolerance is the largest ClockTolerance Analyze accepts (1 %).
+const MaxClockTolerance = 0.01
 
 // DefaultMinFrequency is the default lowest frequency searched, Hz.
 const DefaultMinFrequency = 20.0
@@ -58,7 +66,8 @@ const silentPeak = 1.0 / 65536
 //     ring-down (see sineFit, fitStretch): the periodogram maximum of Rife
 //     & Boorstyn (1974) made exact for a short ring;
 //  5. its ± from the noise and the width of the peak (see frequencySigma),
-//     combined with the wander of the frame frequencies (see drift);
+//     combined with the wander of the frame frequencies (see drift) and
+//     the sample clock's tolerance (see clockSigma);
 //  6. the decay time by a weighted straight-line fit to the log envelope
 //     (see fitDecay) and Q = π f τ: the amplitude of a resonator of quality
 //     factor Q decays as exp(-ω t/(2Q)) (Kinsler, Frey, Coppens & Sanders,
@@ -69,7 +78,8 @@ const silentPeak = 1.0 / 65536
 //
 // Errors: ErrEmpty (too short for the band), ErrSilent (no variation above
 // half a 16-bit step), ErrTooLong, ErrUnsupported (sample rate), and a
-// *units.RangeError for a search band outside 1 Hz – fs/2. Results are
+// *units.RangeError for a search band outside 1 Hz – fs/2 or a clock
+// tolerance outside 0 – MaxClockTolerance. Results are
 // never NaN or Inf.
 func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	if rec == nil {
@@ -85,6 +95,9 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	lowHz, highHz, err := band(s, fs)
 	if err != nil {
 		return nil, err
+	}
+	if tol := clockTolerance(s); !(tol >= 0 && tol <= MaxClockTolerance) {
+		return nil, units.NewRangeError("sample clock tolerance", tol, 0, MaxClockTolerance, "")
 	}
 	x, err := removeMean(rec.Samples)
 	if err != nil {
@@ -173,8 +186,9 @@ func Analyze(rec *Recording, s *Settings) (*Result, error) {
 	res.FrequencyDrift = drift(res.Track, f, res.AnalysedFrom, res.AnalysedTo)
 	// the search stops within ±searchTol/2 bin: a uniform error of
 	// standard deviation searchTol/√12 bin
+	res.FrequencyClock = clockSigma(f, clockTolerance(s))
 	res.FrequencyUncertainty = math.Sqrt(res.FrequencyNoise*res.FrequencyNoise + res.FrequencyDrift*res.FrequencyDrift +
-		math.Pow(searchTol*fs/float64(len(fseg))/math.Sqrt(12), 2))
+		res.FrequencyClock*res.FrequencyClock + math.Pow(searchTol*fs/float64(len(fseg))/math.Sqrt(12), 2))
 
 	res.Amplitude = amp
 	res.SNR = 200

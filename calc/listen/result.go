@@ -12,8 +12,8 @@ type Result struct {
 	// Frequency is the strongest peak in the analysed stretch, Hz.
 	Frequency float64
 	// FrequencyUncertainty is its standard uncertainty, Hz: FrequencyNoise,
-	// FrequencyDrift and the resolution of the search (1e-5 of a bin)
-	// combined in quadrature.
+	// FrequencyDrift, FrequencyClock and the resolution of the search
+	// (1e-5 of a bin) combined in quadrature.
 	FrequencyUncertainty float64
 	// FrequencyNoise is the standard deviation of Frequency caused by the
 	// noise, given the shape (width) of the peak: see frequencySigma.
@@ -22,6 +22,10 @@ type Result struct {
 	// over the loud part of the recording, Hz (how much the pitch wandered);
 	// 0 with fewer than four clear frames.
 	FrequencyDrift float64
+	// FrequencyClock is the standard uncertainty of Frequency from the
+	// sample clock's tolerance (Settings.ClockTolerance), Hz: see
+	// clockSigma; 0 when the clock is taken as exact.
+	FrequencyClock float64
 
 	// Amplitude of the resonance component at its loudest, full scale 1,
 	// and SNR, its level above the noise near it, dB.

@@ -30,12 +30,16 @@ var listenSheet = &Sheet{
 		{Key: "highest", Label: "Highest frequency searched", Kind: Quantity, Dim: units.DimFrequency, Optional: true,
 			Min: 1, Max: listen.MaxSampleRate / 2, Advanced: true,
 			Hint: "the search ends here; empty means 20 kHz or 0.45 × the sample rate, whichever is lower"},
+		{Key: "clock-ppm", Label: "Sample clock tolerance, ppm", Kind: Number, Default: "100",
+			Min: 0, Max: listen.MaxClockTolerance * 1e6, Advanced: true,
+			Hint: "how far the recorder's sample rate may be from its nominal rate, in parts per million; it adds f × tolerance / √3 to the frequency's ±. " +
+				"100 ppm is a common figure for ordinary sound cards and phones (common practice, no published source); 0 for a recorder checked against a reference"},
 		{Key: "track", Label: "Frequency and level against time as a table", Kind: Switch,
 			Hint: "give the frequency and level of each frame (about 0.1 s, half overlapping) as a table, e.g. for an engine warming up to onset"},
 	},
 	About: "The strongest peak of the loud part of the recording (Hann window; Grandke 1983 interpolation on gonum's FFT), refined by a least-squares sine fit " +
 		"with the measured envelope as its amplitude (the periodogram maximum of Rife & Boorstyn 1974, variable projection of Golub & Pereyra 1973). " +
-		"The ± is one standard deviation from the noise and the width of the peak, combined with how much the pitch wandered. " +
+		"The ± is one standard deviation from the noise and the width of the peak, combined with how much the pitch wandered and with the sample clock's tolerance (uniform over ± the tolerance, GUM 4.3.7). " +
 		"The decay time is the amplitude 1/e time of a straight-line fit to the log of the envelope (complex demodulation, Bingham, Godfrey & Tukey 1967); Q = π f τ. " +
 		"Checked against tones and a filtered click made by sox. Levels are dBFS (0 dBFS: a sine reaching full scale), never dB SPL: a recording cannot tell how loud the tube was.",
 	Examples: []string{
@@ -82,7 +86,7 @@ func ListenTo(rec *listen.Recording) *Sheet {
 // writes the rows.
 func analyseListen(v *Values, rec *listen.Recording) (*Result, error) {
 	nyquist := rec.SampleRate / 2
-	s := &listen.Settings{MinFrequency: v.SI("lowest")}
+	s := &listen.Settings{MinFrequency: v.SI("lowest"), ClockTolerance: v.Number("clock-ppm") * 1e-6}
 	if s.MinFrequency >= nyquist {
 		return nil, v.Blame(units.NewRangeError("lowest frequency", s.MinFrequency, 1, nyquist, "Hz"), "lowest")
 	}

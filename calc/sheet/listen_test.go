@@ -134,3 +134,31 @@ func TestListenSheetErrorsNameTheirInput(t *testing.T) {
 		}
 	}
 }
+
+// TestListenSheetClock: the sample clock's tolerance reaches the
+// frequency's ± as f·tol/√3 in quadrature (GUM, JCGM 100:2008, 4.3.7): the
+// default 100 ppm against a clock taken as exact, on the sox ring-down
+// (testdata/gen_listen_sox.sh); a tolerance out of range names its input.
+func TestListenSheetClock(t *testing.T) {
+	t.Parallel()
+	file := filepath.Join("..", "..", "testdata", "listen_sox_ring16.wav")
+	exact, err := listenSheet.Evaluate(map[string]string{"file": file, "clock-ppm": "0"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	def, err := listenSheet.Evaluate(map[string]string{"file": file})
+	if err != nil {
+		t.Fatal(err)
+	}
+	e, _ := exact.Row("frequency")
+	d, _ := def.Row("frequency")
+	want := math.Hypot(e.PM, e.Value*100e-6/math.Sqrt(3))
+	if e.Value != d.Value || !scalar.EqualWithinRel(d.PM, want, 1e-9) {
+		t.Errorf("frequency %v ± %v with 100 ppm, want %v ± %v", d.Value, d.PM, e.Value, want)
+	}
+	_, err = listenSheet.Evaluate(map[string]string{"file": file, "clock-ppm": "20000"})
+	var fe *FieldError
+	if !errors.As(err, &fe) || fe.Key != "clock-ppm" {
+		t.Errorf("clock-ppm 20000: error %v, want one about clock-ppm", err)
+	}
+}
