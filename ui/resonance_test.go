@@ -152,6 +152,10 @@ func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 			t.Errorf("mode %d shown %q, want %q", m.Number, got, units.Format(m.Frequency, units.DimFrequency))
 		}
 	}
+	// the zone's size is its inside diameter, the radius a chip away
+	if f := s.zones.zones[0]; f.size.Label != "Zone 1 inside diameter" || f.size.Text() != "24 mm" || f.sizeAs.half() {
+		t.Errorf("zone 1 size: %q %q (radius %v), want the inside diameter 24 mm", f.size.Label, f.size.Text(), f.sizeAs.half())
+	}
 	h.retype("Zone 1 temperature", "600 K", "700 K")
 	zt.Zones[0].Temperature = 700
 	want, _ = zt.Modes(3)
@@ -178,6 +182,20 @@ func TestResonanceScreenZonesAndHelmholtz(t *testing.T) {
 	h.retype("Zones from the first end", s.form.Text("zones"), "0.2 m, 10 mm, 500 K; 0.3 m, 10 mm, 300 K")
 	if got := s.zones.zones[1].length.Text(); got != "0.3 m" || s.zones.n() != 2 {
 		t.Errorf("after typing the line: %d zones, zone 2 length %q", s.zones.n(), got)
+	}
+	// a bare size in the line is a radius, as older text wrote it: the
+	// zone's field shows it as a radius; the same tube by its diameters
+	// gives the same lowest mode
+	if f := s.zones.zones[1]; !f.sizeAs.half() || f.size.Text() != "10 mm" || !strings.Contains(f.size.Label, "radius") {
+		t.Errorf("zone 2 after a bare 10 mm: %q %q (radius %v), want the radius 10 mm", f.size.Label, f.size.Text(), f.sizeAs.half())
+	}
+	byRadius, _ := h.shown("Lowest mode")
+	h.retype("Zones from the first end", s.form.Text("zones"), "0.2 m, d 20 mm, 500 K; 0.3 m, d 20 mm, 300 K")
+	if f := s.zones.zones[1]; f.sizeAs.half() || f.size.Text() != "20 mm" || f.size.Label != "Zone 2 inside diameter" {
+		t.Errorf("zone 2 after d 20 mm: %q %q (radius %v), want the inside diameter 20 mm", f.size.Label, f.size.Text(), f.sizeAs.half())
+	}
+	if got, _ := h.shown("Lowest mode"); got != byRadius || got == "" {
+		t.Errorf("by diameters the lowest mode is %q, by radii %q", got, byRadius)
 	}
 	h.retype("Zone 2 temperature", "300 K", "5 K")
 	if e := s.zones.zones[1].temp.ErrorText(); !strings.Contains(e, "zone 2") {

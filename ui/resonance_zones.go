@@ -14,11 +14,12 @@ import (
 )
 
 // zoneEditor edits the "zones" input of the resonance form one field per
-// value: how many zones, then the length, radius and gas temperature of
-// each. The form's one-line zones field stays below it (it takes a list
+// value: how many zones, then the length, inside diameter (or radius, a
+// chip away) and gas temperature of each. The form's one-line zones field stays below it (it takes a list
 // pasted from twcalc); the two are kept in step, and an error about one
 // zone marks that zone's field.
 type zoneEditor struct {
+	env   *Env
 	form  *Form
 	count *Choice
 	zones [resonator.MaxZones]zoneFields
@@ -26,9 +27,17 @@ type zoneEditor struct {
 	line string
 }
 
-// zoneFields are the fields of one zone.
+// zoneFields are the fields of one zone; size is its inside diameter, or
+// its radius when sizeAs says so.
 type zoneFields struct {
-	length, radius, temp *Field
+	length, size, temp *Field
+	sizeAs             *sizeAs
+}
+
+// sizeText is the zone's size as the zones text writes it: "d 24 mm" or
+// "r 12 mm".
+func (f *zoneFields) sizeText() string {
+	return sheet.ZoneSizeJoin(f.size.Text(), f.sizeAs.half())
 }
 
 // field returns the field of part p (nil for the zone as a whole).
@@ -36,8 +45,8 @@ func (f *zoneFields) field(p sheet.ZonePart) *Field {
 	switch p {
 	case sheet.ZoneLength:
 		return f.length
-	case sheet.ZoneRadius:
-		return f.radius
+	case sheet.ZoneSize:
+		return f.size
 	case sheet.ZoneTemperature:
 		return f.temp
 	}
@@ -51,17 +60,18 @@ func newZoneEditor(env *Env, form *Form) *zoneEditor {
 		words[i] = fmt.Sprintf("%d zones", i+1)
 	}
 	words[0] = "1 zone"
-	z := &zoneEditor{form: form, count: NewChoice(env, "Number of zones", keys, words), line: "\x00"}
+	z := &zoneEditor{env: env, form: form, count: NewChoice(env, "Number of zones", keys, words), line: "\x00"}
 	for i := range z.zones {
 		n := fmt.Sprintf("Zone %d ", i+1)
 		z.zones[i] = zoneFields{
 			length: NewField(env, n+"length", units.DimLength, "200 mm"),
-			radius: NewField(env, n+"radius", units.DimLength, "12 mm"),
+			size:   NewField(env, n+"inside diameter", units.DimLength, "24 mm"),
 			temp:   NewField(env, n+"temperature", units.DimTemperature, "20 degC"),
 		}
 		z.zones[i].temp.Options.DefaultUnit = "K"
 		z.zones[i].length.Hint = "e.g. 100 mm, 0.4 m, 4 in"
-		z.zones[i].radius.Hint = "half the inner diameter: 12 mm, 0.5 in"
+		z.zones[i].sizeAs = roundSize(env, n+"inside diameter", n+"radius (half the inside diameter)", "")
+		z.zones[i].size.Hint = "the tube's bore in this zone: 24 mm, 1 in"
 		z.zones[i].temp.Hint = "mean gas temperature in this zone: 295 K, 20 degC"
 	}
 	z.zones[0].length.Hint = "zone 1 starts at the first end named above (the closed end of a closed – open tube)"
@@ -83,7 +93,8 @@ func (z *zoneEditor) update(gtx layout.Context) {
 	for i := range z.zones {
 		f := &z.zones[i]
 		ch = f.length.Update(gtx) || ch
-		ch = f.radius.Update(gtx) || ch
+		ch = f.sizeAs.update(gtx, f.size) || ch
+		ch = f.size.Update(gtx) || ch
 		ch = f.temp.Update(gtx) || ch
 	}
 	if !ch {
@@ -92,7 +103,7 @@ func (z *zoneEditor) update(gtx layout.Context) {
 	texts := make([][3]string, z.n())
 	for i := range texts {
 		f := &z.zones[i]
-		texts[i] = [3]string{f.length.Text(), f.radius.Text(), f.temp.Text()}
+		texts[i] = [3]string{f.length.Text(), f.sizeText(), f.temp.Text()}
 	}
 	z.line = sheet.JoinZones(texts)
 	z.form.SetText("zones", z.line)
@@ -107,7 +118,14 @@ func (z *zoneEditor) sync() {
 		if zs, err := sheet.SplitZones(t); err == nil && len(zs) > 0 {
 			z.count.Select(strconv.Itoa(len(zs)))
 			for i, texts := range zs {
-				for j, fd := range []*Field{z.zones[i].length, z.zones[i].radius, z.zones[i].temp} {
+				zf := &z.zones[i]
+				size, radius := sheet.ZoneSizeText(texts[1])
+				texts[1] = size
+				if radius != zf.sizeAs.half() {
+					zf.sizeAs.choice.Select(map[bool]string{true: sizeHalf, false: sizeWhole}[radius])
+					zf.sizeAs.relabel(zf.size)
+				}
+				for j, fd := range []*Field{zf.length, zf.size, zf.temp} {
 					if fd.Text() != texts[j] {
 						fd.SetText(texts[j])
 					}
@@ -116,7 +134,7 @@ func (z *zoneEditor) sync() {
 		}
 	}
 	for i := range z.zones {
-		for _, fd := range []*Field{z.zones[i].length, z.zones[i].radius, z.zones[i].temp} {
+		for _, fd := range []*Field{z.zones[i].length, z.zones[i].size, z.zones[i].temp} {
 			fd.SetError(nil)
 		}
 	}
@@ -133,7 +151,7 @@ func (z *zoneEditor) widgets() []layout.Widget {
 	ws := []layout.Widget{z.count.Layout}
 	for i := 0; i < z.n(); i++ {
 		f := &z.zones[i]
-		ws = append(ws, f.length.Layout, f.radius.Layout, f.temp.Layout)
+		ws = append(ws, f.length.Layout, f.sizeAs.layout(z.env, f.size), f.temp.Layout)
 	}
 	return ws
 }

@@ -72,7 +72,7 @@ var resonanceSheet = &Sheet{
 		"twcalc resonance --length 0.25m+-1mm --diameter 16mm --temperature 20degC+-2K",
 		"twcalc resonance --length 1m --diameter 50mm --sweep temperature:250K:450K:21",
 		"twcalc resonance --gas helium --length 1m --diameter 50mm --sweep fraction:0:0.3:16 --second-gas argon",
-		`twcalc resonance --ends closed-open --zones "0.1m,10mm,700K;0.4m,10mm,295K" --modes 5`,
+		`twcalc resonance --ends closed-open --zones "0.1m,d 20mm,700K;0.4m,d 20mm,295K" --modes 5`,
 		"twcalc resonance --volume 1L --neck-length 50mm --neck-diameter 20mm --end-correction unflanged",
 	},
 	Run: runResonance,

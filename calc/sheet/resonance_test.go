@@ -223,7 +223,7 @@ func TestResonanceZoneErrors(t *testing.T) {
 		part  ZonePart
 	}{
 		{"0.1 m, 10 mm, 700 K; 0.4 m, 10 mm, 5 K", 1, ZoneTemperature},
-		{"0.1 m, 0 mm, 700 K", 0, ZoneRadius},
+		{"0.1 m, 0 mm, 700 K", 0, ZoneSize},
 		{"0.1 m, 10 mm, 700 K; 0.4 m ± 1 mm, 10 mm, 300 K", 1, ZoneLength},
 		{"0.1 m, 10 mm, 700 K; 0.4 m, 10 mm", 1, ZoneWhole},
 		{"1m,1mm,300K;1m,1mm,300K;1m,1mm,300K;1m,1mm,300K;1m,1mm,300K;1m,1mm,300K", -1, ZoneWhole},
@@ -302,6 +302,8 @@ func FuzzParseZones(f *testing.F) {
 	f.Add("1m,1in,20degC")
 	f.Add(";;,")
 	f.Add("0.1m,10mm")
+	f.Add("0.1m,d 20mm,700K;0.4m,r=10mm,295K")
+	f.Add("1m,Ø,300K")
 	f.Add("0.1m ± 1 mm,10mm,300")
 	f.Fuzz(func(t *testing.T, s string) {
 		zs, err := ParseZones(s)

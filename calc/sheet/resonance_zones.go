@@ -18,21 +18,22 @@ const MaxZoneModes = 20
 type ZonePart int
 
 // The parts of a zone. ZoneWhole is the zone as a whole (its text does
-// not have three values, or there are too many zones).
+// not have three values, or there are too many zones). ZoneSize is the
+// zone's inside size, a diameter or a radius (see ZoneSizeText).
 const (
 	ZoneWhole ZonePart = iota
 	ZoneLength
-	ZoneRadius
+	ZoneSize
 	ZoneTemperature
 )
 
-// String returns "length", "radius", "temperature" or "".
+// String returns "length", "size", "temperature" or "".
 func (p ZonePart) String() string {
 	switch p {
 	case ZoneLength:
 		return "length"
-	case ZoneRadius:
-		return "radius"
+	case ZoneSize:
+		return "size"
 	case ZoneTemperature:
 		return "temperature"
 	}
@@ -67,7 +68,7 @@ func (e *ZoneError) Unwrap() error { return e.Err }
 // zoneDims are the dimensions of a zone's three values, in order.
 var zoneDims = [3]units.Dimension{units.DimLength, units.DimLength, units.DimTemperature}
 
-// SplitZones splits the text of the "zones" input, "LENGTH,RADIUS,
+// SplitZones splits the text of the "zones" input, "LENGTH,SIZE,
 // TEMPERATURE;..." into the three texts of each zone, trimmed, without
 // reading them. A zone without three values is a *ZoneError.
 func SplitZones(text string) ([][3]string, error) {
@@ -79,7 +80,7 @@ func SplitZones(text string) ([][3]string, error) {
 	for i, p := range parts {
 		f := strings.Split(p, ",")
 		if len(f) != 3 {
-			return nil, &ZoneError{Zone: i, Err: fmt.Errorf("%s: write LENGTH,RADIUS,TEMPERATURE, e.g. 100 mm, 12 mm, 600 K", quote(strings.TrimSpace(p)))}
+			return nil, &ZoneError{Zone: i, Err: fmt.Errorf("%s: write LENGTH,SIZE,TEMPERATURE, e.g. 100 mm, d 24 mm, 600 K", quote(strings.TrimSpace(p)))}
 		}
 		for j := range f {
 			out[i][j] = strings.TrimSpace(f[j])
@@ -98,10 +99,59 @@ func JoinZones(zones [][3]string) string {
 	return strings.Join(parts, "; ")
 }
 
+// The forms of a zone's size. A zone's size is its inside diameter,
+// written "d 24 mm" (or "diameter 24 mm", "Ø 24 mm"), or its radius,
+// "r 12 mm" (or "radius 12 mm"). A size with no word is a radius: the
+// zones text of older versions gave the radius bare, and such text keeps
+// its meaning (documented in the input's hint).
+const (
+	ZoneDiameterWord = "d"
+	ZoneRadiusWord   = "r"
+)
+
+// zoneSizeWords are the words that may open a zone's size, longest first
+// so that "diameter" is not read as "d" and "iameter".
+var zoneSizeWords = []struct {
+	word   string
+	radius bool
+}{{"diameter", false}, {"radius", true}, {"dia", false}, {"Ø", false}, {"ø", false}, {"⌀", false}, {"d", false}, {"r", true}}
+
+// ZoneSizeText splits the size text of a zone into the length typed and
+// whether it is a radius: "d 24 mm" gives "24 mm", false; "r 12 mm" and
+// the bare "12 mm" of older text give "12 mm", true. The word may be
+// followed by a space, "=" or ":" or nothing ("d24mm").
+func ZoneSizeText(s string) (length string, radius bool) {
+	t := strings.TrimSpace(s)
+	for _, w := range zoneSizeWords {
+		if len(t) > len(w.word) && strings.EqualFold(t[:len(w.word)], w.word) {
+			rest := strings.TrimLeft(t[len(w.word):], " =:")
+			if rest != "" && (rest[0] == '.' || rest[0] == '+' || rest[0] == '-' || rest[0] >= '0' && rest[0] <= '9') {
+				return rest, w.radius
+			}
+		}
+	}
+	return t, true
+}
+
+// ZoneSizeJoin writes a zone's size as the zones text reads it: "d 24 mm"
+// for a diameter, "r 12 mm" for a radius; "" stays "".
+func ZoneSizeJoin(length string, radius bool) string {
+	length = strings.TrimSpace(length)
+	if length == "" {
+		return ""
+	}
+	if radius {
+		return ZoneRadiusWord + " " + length
+	}
+	return ZoneDiameterWord + " " + length
+}
+
 // ParseZones reads the "zones" input: up to resonator.MaxZones zones from
-// the first end, each LENGTH,RADIUS,TEMPERATURE in any unit (a bare
-// temperature is kelvin), every value greater than zero. A zone takes no
-// ±: the zoned tube carries no uncertainty. Errors are *ZoneError.
+// the first end, each LENGTH,SIZE,TEMPERATURE in any unit (a bare
+// temperature is kelvin), every value greater than zero. SIZE is the
+// inside diameter "d 24 mm" or the radius "r 12 mm"; a bare size is a
+// radius, as older text wrote it (ZoneSizeText). A zone takes no ±: the
+// zoned tube carries no uncertainty. Errors are *ZoneError.
 func ParseZones(text string) ([]resonator.Zone, error) {
 	texts, err := SplitZones(text)
 	if err != nil {
@@ -112,6 +162,14 @@ func ParseZones(text string) ([]resonator.Zone, error) {
 		var v [3]float64
 		for j, s := range z {
 			part := ZonePart(j + 1)
+			name, radius := part.String(), false
+			if part == ZoneSize {
+				s, radius = ZoneSizeText(s)
+				name = "diameter"
+				if radius {
+					name = "radius"
+				}
+			}
 			q, err := units.ParseWith(s, zoneDims[j], units.Options{DefaultUnit: zoneDefaultUnit(part)})
 			switch {
 			case err != nil:
@@ -120,12 +178,18 @@ func ParseZones(text string) ([]resonator.Zone, error) {
 			case q.Uncertainty > 0:
 				err = errors.New("takes no ± here (the zoned tube carries no uncertainty); type the value alone")
 			case !(q.Value > 0):
-				err = units.NewRangeError(part.String(), q.Value, 0, math.Inf(1), units.SIUnit(zoneDims[j]))
+				err = units.NewRangeError(name, q.Value, 0, math.Inf(1), units.SIUnit(zoneDims[j]))
 			}
 			if err != nil {
+				if part == ZoneSize {
+					err = fmt.Errorf("%s: %w", name, err)
+				}
 				return nil, &ZoneError{Zone: i, Part: part, Err: err}
 			}
 			v[j] = q.Value
+			if part == ZoneSize && !radius {
+				v[j] /= 2
+			}
 		}
 		zs[i] = resonator.Zone{Length: v[0], Radius: v[1], Temperature: v[2]}
 	}
@@ -143,8 +207,10 @@ func zoneDefaultUnit(p ZonePart) string {
 func zonesInputs() []Input {
 	return []Input{
 		{Key: "zones", Label: "Zones from the first end", Kind: Text, Optional: true,
-			Example: "100 mm, 12 mm, 600 K; 400 mm, 12 mm, 20 degC",
-			Hint:    fmt.Sprintf("LENGTH, RADIUS, TEMPERATURE of each zone from the first end (the closed end of a closed – open tube), zones apart by ;  e.g. 0.1 m, 10 mm, 700 K; 0.4 m, 10 mm, 295 K (up to %d zones)", resonator.MaxZones)},
+			Example: "100 mm, d 24 mm, 600 K; 400 mm, d 24 mm, 20 degC",
+			Hint: fmt.Sprintf("LENGTH, SIZE, TEMPERATURE of each zone from the first end (the closed end of a closed – open tube), zones apart by ;  "+
+				"SIZE is the inside diameter after d (d 20 mm) or the radius after r (r 10 mm); a size with neither is a radius, as older versions wrote it. "+
+				"e.g. 0.1 m, d 20 mm, 700 K; 0.4 m, d 20 mm, 295 K (up to %d zones)", resonator.MaxZones)},
 		{Key: "modes", Label: "Modes to list", Kind: Count, Default: "3", Min: 1, Max: MaxZoneModes,
 			Hint: fmt.Sprintf("how many modes of the zoned tube to list, 1 to %d", MaxZoneModes)},
 	}
