@@ -25,7 +25,8 @@ const (
 	carryTubeRadius  carryKind = "tube radius"
 	carryTubeBore    carryKind = "tube inside diameter"
 	carryTubeEnds    carryKind = "tube ends"
-	carryRigRadius   carryKind = "rig inner radius"
+	carryRigBore     carryKind = "rig inside diameter"
+	carryRigRadius   carryKind = "rig inner radius" // older kept benches
 	carryRigPressure carryKind = "rig fill pressure"
 	carryRigVolume   carryKind = "rig gas volume"
 	carryHot         carryKind = "hot temperature"
@@ -47,7 +48,7 @@ var carryInputs = map[sheet.ID]map[string]carryKind{
 	sheet.IDResonance: {"length": carryTubeLength, "diameter": carryTubeBore, "radius": carryTubeRadius, "ends": carryTubeEnds},
 	sheet.IDDiagnose: {"length": carryTubeLength, "diameter": carryTubeBore, "radius": carryTubeRadius, "ends": carryTubeEnds,
 		"measured-frequency": carryMeasured},
-	sheet.IDVessel: {"pressure": carryRigPressure, "inner-radius": carryRigRadius},
+	sheet.IDVessel: {"pressure": carryRigPressure, "inside-diameter": carryRigBore, "inner-radius": carryRigRadius},
 	sheet.IDEnergy: {"volume": carryRigVolume},
 	sheet.IDOxygen: {"release-from-vessel": carryRigVolume, "vessel-pressure": carryRigPressure},
 }
@@ -80,12 +81,18 @@ func (b *Bench) put(k carryKind, c Carried) {
 	}
 	b.values[k] = c
 	// A tube's size is carried as typed, a diameter or a radius: the
-	// newer replaces the older, so that a screen never gets both.
+	// newer replaces the older, so that a screen never gets both. So is a
+	// rig's bore (an engine gives its diameter; a radius is what benches
+	// kept before).
 	switch k {
 	case carryTubeBore:
 		delete(b.values, carryTubeRadius)
 	case carryTubeRadius:
 		delete(b.values, carryTubeBore)
+	case carryRigBore:
+		delete(b.values, carryRigRadius)
+	case carryRigRadius:
+		delete(b.values, carryRigBore)
 	}
 	switch k {
 	case carryGas:

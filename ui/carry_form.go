@@ -192,6 +192,7 @@ func (it *formItem) carriedFrom() string {
 // pressure arrives as a design pressure to start from).
 var carryWhat = map[carryKind]string{
 	carryRigPressure: "the engine's cold fill pressure; it rises as the engine heats, so design above it",
+	carryRigBore:     "the engine's widest duct",
 	carryRigRadius:   "half the engine's widest duct",
 	carryRigVolume:   "the gas the engine's parts hold",
 }

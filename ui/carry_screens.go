@@ -51,7 +51,7 @@ func (v *deviceView) publish() {
 		return
 	}
 	b.carry(carryRigPressure, "", v.dev.MeanPressure, from)
-	b.carry(carryRigRadius, "", v.dev.WidestDiameter()/2, from)
+	b.carry(carryRigBore, "", v.dev.WidestDiameter(), from)
 	b.carry(carryRigVolume, "", v.dev.GasVolume(), from)
 	if row, ok := res.Row("hot_temperature"); ok {
 		b.carry(carryHot, "", row.Value, from)

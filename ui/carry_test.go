@@ -278,11 +278,28 @@ func TestCarryOnsetToDepthsAndSafety(t *testing.T) {
 
 	a.Open(sheet.IDSafety)
 	sc := a.Screen(sheet.IDSafety).(*safetyScreen)
-	sc.goTo(sc.stepShowing(sc.forms.vessel, "inner-radius"))
+	sc.goTo(sc.stepShowing(sc.forms.vessel, "inside-diameter"))
 	h.frames(3)
 	v := sc.forms.vessel
-	// the example engine is 60 mm across (calc/linear/examples/engine.json)
-	wantCarried(t, h, v, "inner-radius", "Inner radius", "30 mm", "Engine onset")
+	// the example engine is 60 mm across (calc/linear/examples/engine.json):
+	// its widest duct arrives as the shell's inside diameter, the field
+	// shown first, and the radius stays empty
+	wantCarried(t, h, v, "inside-diameter", "Inside diameter", "60 mm", "Engine onset")
+	if r := v.Text("inner-radius"); r != "" {
+		t.Errorf("inner radius %q beside the carried inside diameter", r)
+	}
+	if both, _ := h.shown("Both sizes of Inside diameter"); !strings.Contains(both, "60 mm") || !strings.Contains(both, "radius 30 mm") {
+		t.Errorf("under the shell's inside diameter %q, want both 60 mm and its radius 30 mm", both)
+	}
+	// the radius is a tap away and converts the text; the diameter comes back
+	h.tap("Radius")
+	if r, d := v.Text("inner-radius"), v.Text("inside-diameter"); r != "30 mm" || d != "" {
+		t.Errorf("after the Radius chip: inner radius %q, inside diameter %q; want 30 mm and none", r, d)
+	}
+	h.tap("Diameter")
+	if r, d := v.Text("inner-radius"), v.Text("inside-diameter"); r != "" || d != "60 mm" {
+		t.Errorf("after the Diameter chip: inner radius %q, inside diameter %q; want none and 60 mm", r, d)
+	}
 	if p, ok := v.Field("pressure").Value(); !ok || math.Abs(p-8e5) > 1e-3*8e5 {
 		t.Errorf("design pressure %q reads %v Pa absolute, want the 8 bar fill", v.Text("pressure"), p)
 	}
@@ -293,7 +310,7 @@ func TestCarryOnsetToDepthsAndSafety(t *testing.T) {
 	if want := writtenIn(hot.Value, units.DimTemperature)[0]; !ok || !strings.Contains(note, want) {
 		t.Errorf("hot end note %q (shown %v), want it to name %s", note, ok, want)
 	}
-	undo(t, h, v, "inner-radius", "Inner radius", "50 mm")
+	undo(t, h, v, "inside-diameter", "Inside diameter", "100 mm")
 
 	// gas volume: 2.815 L, worked in calc/linear's TestDeviceGasVolume
 	for _, c := range []struct {

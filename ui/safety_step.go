@@ -54,6 +54,10 @@ type stepPart struct {
 	warnings bool
 	results  *Results
 
+	// pair, when set, shows two of keys as one size typed whole or as
+	// its half (the shell's inside diameter or its radius), with chips.
+	pair *sizePair
+
 	shown *sheet.Result // the result on the card
 	err   error         // the error on the card
 	fresh bool          // the card has been filled once
@@ -106,6 +110,12 @@ func (s *sheetStep) Update(gtx layout.Context) {
 	}
 	for _, p := range s.parts {
 		p.form.Update(gtx)
+		if p.pair != nil {
+			if p.pair.update(gtx, p.form, nil) {
+				p.form.Update(gtx)
+			}
+			p.pair.settle(p.form)
+		}
 	}
 	s.refresh()
 }
@@ -309,7 +319,13 @@ func (s *sheetStep) Inputs() []layout.Widget {
 	var ws []layout.Widget
 	for _, p := range s.parts {
 		for _, k := range p.keys {
-			ws = append(ws, p.form.InputWidget(k))
+			switch {
+			case p.pair != nil && k == p.pair.whole:
+				ws = append(ws, p.pair.widgets(p.form)...)
+			case p.pair != nil && k == p.pair.half:
+			default:
+				ws = append(ws, p.form.InputWidget(k))
+			}
 		}
 	}
 	return ws

@@ -17,10 +17,10 @@ import (
 // shellInputs are the vessel's shell inputs, in the order shown.
 func shellInputs() []Input {
 	return []Input{
-		{Key: "inside-diameter", Label: "Inside diameter", Kind: Quantity, Dim: units.DimLength, Optional: true, PM: true,
+		{Key: "inside-diameter", Label: "Inside diameter", Kind: Quantity, Dim: units.DimLength, Example: "100 mm", Optional: true, PM: true,
 			Hint: "bore of the shell, e.g. 100 mm, 4 in (or give inner-radius); give two of inside, outside and wall; ± or +- for an uncertainty",
 			Min:  2e-4, Max: 2e3},
-		{Key: "inner-radius", Label: "Inner radius", Kind: Quantity, Dim: units.DimLength, Example: "50 mm", Optional: true, PM: true,
+		{Key: "inner-radius", Label: "Inner radius", Kind: Quantity, Dim: units.DimLength, Optional: true, PM: true,
 			Hint: "inside radius of the shell, e.g. 50 mm, 2 in (or give inside-diameter); ± or +- for an uncertainty", Min: 1e-4, Max: 1e3},
 		{Key: "outside-diameter", Label: "Outside diameter", Kind: Quantity, Dim: units.DimLength, Optional: true, PM: true,
 			Hint: "outside of the shell, e.g. 112 mm, 4.5 in; with the inside size or the wall; ± or +- for an uncertainty", Min: 2e-4, Max: 2e3},
