@@ -213,21 +213,11 @@ func shotWindow(t *testing.T, size image.Point) *headless.Window {
 // picture and writes it as file when SHOT_DIR is set.
 func shotFrame(t *testing.T, win *headless.Window, file string, size image.Point, a *App, quiet time.Duration) {
 	t.Helper()
-	// Background jobs ask for a frame when they finish: lay out again until
-	// no frame has been asked for in the quiet spell (at most 20 s), so the
-	// picture shows results rather than "working".
-	asked := make(chan struct{}, 1)
-	a.env.setInvalidate(func() {
-		select {
-		case asked <- struct{}{}:
-		default:
-		}
-	})
-	defer a.env.setInvalidate(nil)
 	var r input.Router
 	var ops op.Ops
 	now := time.Unix(1_800_000_000, 0)
-	frame := func(i int) {
+	i := 0
+	frame := func() {
 		ops.Reset()
 		gtx := layout.Context{
 			Ops:         &ops,
@@ -236,24 +226,15 @@ func shotFrame(t *testing.T, win *headless.Window, file string, size image.Point
 			Constraints: layout.Exact(size),
 			Source:      r.Source(),
 		}
+		i++
 		a.Layout(gtx)
 		r.Frame(&ops)
 	}
-	for i := range 3 {
-		frame(i)
-	}
-	deadline := time.After(20 * time.Second)
-wait:
-	for i := 3; ; i++ {
-		select {
-		case <-asked:
-			frame(i)
-		case <-time.After(quiet):
-			break wait
-		case <-deadline:
-			t.Logf("%s: still asking for frames after 20 s; picturing the last one", file)
-			break wait
-		}
+	// Background jobs ask for a frame when they finish: lay out again until
+	// none has been asked for in the quiet spell, so the picture shows
+	// results rather than "working".
+	if !layOutUntilQuiet(a.env, quiet, frame) {
+		t.Logf("%s: still asking for frames after 20 s; picturing the last one", file)
 	}
 	if err := win.Frame(&ops); err != nil {
 		t.Fatalf("headless frame: %v", err)

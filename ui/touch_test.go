@@ -165,26 +165,8 @@ func TestTouchTargets(t *testing.T) {
 // harness does, it lays out again while the app asks for frames through
 // its Env, until none is asked for in 300 ms (at most 20 s).
 func (h *harness) settleJobs(a *App) {
-	asked := make(chan struct{}, 1)
-	a.env.setInvalidate(func() {
-		select {
-		case asked <- struct{}{}:
-		default:
-		}
-	})
-	defer a.env.setInvalidate(nil)
-	h.frames(3)
-	deadline := time.After(20 * time.Second)
-	for {
-		select {
-		case <-asked:
-			h.frame()
-		case <-time.After(300 * time.Millisecond):
-			return
-		case <-deadline:
-			h.t.Logf("still asking for frames after 20 s")
-			return
-		}
+	if !layOutUntilQuiet(a.env, 300*time.Millisecond, h.frame) {
+		h.t.Logf("still asking for frames after 20 s")
 	}
 }
 
