@@ -49,7 +49,7 @@ func TestScreenshotCarryEngine(t *testing.T) {
 	shootApp(t, "carry-onset", image.Pt(412, 915), a)
 	a.Open(sheet.IDSafety)
 	sc := a.Screen(sheet.IDSafety).(*safetyScreen)
-	sc.goTo(sc.stepShowing(sc.forms.vessel, "inner-radius"))
+	sc.goTo(sc.stepShowing(sc.forms.vessel, "inside-diameter"))
 	h.frames(2)
 	shootApp(t, "carry-safety-wall", image.Pt(412, 1800), a)
 }

@@ -25,12 +25,12 @@ func poreFieldsShown(shape, packing, material string, half bool) []string {
 	case "pins":
 		return []string{pick("pin-diameter", "pin-radius"), "pitch"}
 	case "screens":
-		return []string{"mesh-per-inch", "wire-diameter", "porosity"}
+		return []string{"mesh-per-inch", pick("wire-diameter", "wire-radius"), "porosity"}
 	case "fibres":
 		if packing != "mass" {
-			return []string{"fibre-diameter", "solid-fraction"}
+			return []string{pick("fibre-diameter", "fibre-radius"), "solid-fraction"}
 		}
-		keys := []string{"fibre-diameter", "packed-mass", "packed-volume", "material"}
+		keys := []string{pick("fibre-diameter", "fibre-radius"), "packed-mass", "packed-volume", "material"}
 		if material == "other" {
 			keys = append(keys, "material-density")
 		}
@@ -61,6 +61,8 @@ var poreHalves = map[string][]struct{ whole, half, wholeWords, halfWords string 
 	"circular":    {{"diameter", "radius", "Ø", "radius"}},
 	"rectangular": {{"width", "half-width", "width", "half width"}, {"height", "half-height", "height", "half height"}},
 	"pins":        {{"pin-diameter", "pin-radius", "pin Ø", "pin radius"}},
+	"screens":     {{"wire-diameter", "wire-radius", "wire Ø", "wire radius"}},
+	"fibres":      {{"fibre-diameter", "fibre-radius", "fibre Ø", "fibre radius"}},
 }
 
 // poreHalfChips are the chips of the whole-or-half choice by shape.
@@ -69,4 +71,6 @@ var poreHalfChips = map[string][2]string{
 	"circular":    {"Diameter", "Radius"},
 	"rectangular": {"Width and height", "Halves"},
 	"pins":        {"Pin diameter", "Pin radius"},
+	"screens":     {"Wire diameter", "Wire radius"},
+	"fibres":      {"Fibre diameter", "Fibre radius"},
 }

@@ -69,3 +69,37 @@ func TestScreenshotPoresHalves(t *testing.T) {
 	s.sync()
 	shoot(t, "pores-half-gap", env, s)
 }
+
+// TestPoresWireAndFibreRadius: the screens' wire and the wool's fibre
+// take a radius a chip away, as the other round sizes do: the chip
+// converts the text, both sizes show under the field, and the hydraulic
+// radius stays the same.
+func TestPoresWireAndFibreRadius(t *testing.T) {
+	env := NewEnv(nil)
+	s := newPoresScreen(env).(*poresScreen)
+	h := newHarness(t, image.Pt(412, 3600), s.Layout)
+	for _, c := range []struct {
+		shape, chip, half, want, both string
+	}{
+		{"Woven screens", "Wire radius", "wire-radius", "20.5 um", "wire Ø 0.041 mm (wire radius 0.0205 mm)"},
+		{"Metal wool / fibres", "Fibre radius", "fibre-radius", "12.5 um", "fibre Ø 0.025 mm (fibre radius 0.0125 mm)"},
+	} {
+		h.tap(c.shape)
+		h.frames(2)
+		rh, ok := s.form.Results.Value("Hydraulic radius r_h")
+		if !ok || rh == "" {
+			t.Fatalf("%s: no hydraulic radius (%q)", c.shape, s.form.Results.Failure())
+		}
+		h.tap(c.chip)
+		h.frames(2)
+		if got := s.form.Text(c.half); got != c.want {
+			t.Errorf("%s: after %s the radius reads %q, want %q", c.shape, c.chip, got, c.want)
+		}
+		if got, _ := h.shown("Both sizes of " + c.half); got != c.both {
+			t.Errorf("%s: under the radius %q, want %q", c.shape, got, c.both)
+		}
+		if got, _ := s.form.Results.Value("Hydraulic radius r_h"); got != rh {
+			t.Errorf("%s: r_h by radius %q, by diameter %q", c.shape, got, rh)
+		}
+	}
+}

@@ -29,16 +29,17 @@ func materialChoices() []Choice {
 // solid fraction, or the packed mass and volume with the material (or its
 // density).
 func fibresFrom(v *Values) (poreGeometry, error) {
-	if err := need(v, "fibre-diameter"); err != nil {
+	rf, _, err := halfSize(v, "fibre-diameter", "fibre-radius")
+	if err != nil {
 		return poreGeometry{}, err
 	}
-	d := v.SI("fibre-diameter")
+	d := 2 * rf
 	if v.Has("solid-fraction") {
 		if v.Has("packed-mass") {
 			return poreGeometry{}, v.Blame(errors.New("give either the solid fraction or the packed mass with the packed volume, not both"), "packed-mass")
 		}
 		s, err := pore.Fibres(d, v.SI("solid-fraction"))
-		return poreGeometry{shape: s, solid: v.SI("solid-fraction")}, v.Blame(err, "solid-fraction")
+		return poreGeometry{shape: s, solid: v.SI("solid-fraction"), fibre: d}, v.Blame(err, "solid-fraction")
 	}
 	if !v.Has("packed-mass") {
 		in := v.Get("solid-fraction").In
@@ -57,7 +58,7 @@ func fibresFrom(v *Values) (poreGeometry, error) {
 		return poreGeometry{}, v.Blame(err, "packed-mass")
 	}
 	s, err := pore.Fibres(d, solid)
-	return poreGeometry{shape: s, solid: solid, byMass: true}, v.Blame(err, "packed-mass")
+	return poreGeometry{shape: s, solid: solid, byMass: true, fibre: d}, v.Blame(err, "packed-mass")
 }
 
 // fibreDensity is the density of the fibre material: the typed density

@@ -13,6 +13,7 @@ import (
 type poreGeometry struct {
 	shape  pore.Shape
 	solid  float64 // fibres: volume fraction of solid
+	fibre  float64 // fibres: fibre diameter, m
 	byMass bool    // fibres: solid fraction from packed mass and volume
 }
 
@@ -142,11 +143,15 @@ func screensFrom(v *Values) (pore.Shape, error) {
 	case mm:
 		meshKey = "mesh-per-mm"
 	}
-	if err := need(v, meshKey, "wire-diameter"); err != nil {
+	if err := need(v, meshKey); err != nil {
 		return nil, err
 	}
-	s, err := pore.Screens(v.SI(meshKey), v.SI("wire-diameter"), v.SI("porosity"))
-	return s, with(v, err, "wire-diameter", meshKey)
+	rw, wireKey, err := halfSize(v, "wire-diameter", "wire-radius")
+	if err != nil {
+		return nil, err
+	}
+	s, err := pore.Screens(v.SI(meshKey), 2*rw, v.SI("porosity"))
+	return s, with(v, err, wireKey, meshKey)
 }
 
 func honeycombFrom(v *Values) (pore.Shape, error) {

@@ -24,7 +24,7 @@ func poreDepthValues(v *Values, g poreGeometry, role pore.Role, dk, dn float64) 
 	out := []float64{dk, dn, rh / dk, 2 * rh / dk, target}
 	if g.byMass {
 		// same fibre, same volume: the mass scales with the solid fraction
-		out = append(out, v.SI("packed-mass")*pore.SolidFractionFor(v.SI("fibre-diameter"), target)/g.solid)
+		out = append(out, v.SI("packed-mass")*pore.SolidFractionFor(g.fibre, target)/g.solid)
 	}
 	return out
 }

@@ -37,8 +37,8 @@ var poreShapes = []struct {
 	{ShapeCircular, "circular", "Round pores", []string{"diameter", "radius"}},
 	{ShapeRectangular, "rectangular", "Rectangular channels", []string{"width", "height", "half-width", "half-height"}},
 	{ShapePins, "pins", "Pin array", []string{"pin-diameter", "pin-radius", "pitch"}},
-	{ShapeScreens, "screens", "Woven screens", []string{"mesh-per-inch", "mesh-per-mm", "wire-diameter", "porosity"}},
-	{ShapeFibres, "fibres", "Metal wool / fibres", []string{"fibre-diameter", "solid-fraction", "packed-mass", "packed-volume", "material", "material-density"}},
+	{ShapeScreens, "screens", "Woven screens", []string{"mesh-per-inch", "mesh-per-mm", "wire-diameter", "wire-radius", "porosity"}},
+	{ShapeFibres, "fibres", "Metal wool / fibres", []string{"fibre-diameter", "fibre-radius", "solid-fraction", "packed-mass", "packed-volume", "material", "material-density"}},
 	{ShapeHoneycomb, "honeycomb", "Ceramic honeycomb", []string{"cells-per-square-inch", "wall-thickness"}},
 	{ShapeWide, "wide", "Wide channel (boundary layer)", []string{"hydraulic-radius"}},
 }

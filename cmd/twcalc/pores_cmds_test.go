@@ -124,6 +124,9 @@ func TestPoresCommand(t *testing.T) {
 		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--wire-diameter", "41um", "--role", "regenerator"}, mustPore(pore.Screens(200/inch, 41e-6, 0))},
 		{[]string{"--shape", "screens", "--mesh-per-mm", "8", "--wire-diameter", "41um"}, mustPore(pore.Screens(8000, 41e-6, 0))},
 		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--solid-fraction", "0.2"}, mustPore(pore.Fibres(25e-6, 0.2))},
+		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--wire-radius", "20.5um"}, mustPore(pore.Screens(200/inch, 41e-6, 0))},
+		{[]string{"--shape", "fibres", "--fibre-radius", "12.5um", "--solid-fraction", "0.2"}, mustPore(pore.Fibres(25e-6, 0.2))},
+		{[]string{"--shape", "fibres", "--fibre-radius", "12.5um", "--packed-mass", "30g", "--material", "steel", "--packed-volume", "50cm3"}, mustPore(pore.FibresFromMass(25e-6, 0.03, 7900, 50e-6))},
 		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--packed-mass", "30g", "--material", "steel", "--packed-volume", "50cm3"}, mustPore(pore.FibresFromMass(25e-6, 0.03, 7900, 50e-6))},
 		{[]string{"--shape", "honeycomb", "--cells-per-square-inch", "400", "--wall-thickness", "0.15mm"}, mustPore(pore.Honeycomb(400/(inch*inch), 0.15e-3))},
 		{[]string{"--shape", "wide", "--hydraulic-radius", "5mm"}, mustPore(pore.BoundaryLayer(5e-3))},
@@ -199,6 +202,9 @@ func TestPoresErrors(t *testing.T) {
 		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--solid-fraction", "0.2", "--wire-diameter", "30um"}, []string{"--wire-diameter", "screens"}},
 		// a size given twice, in full and as its half
 		{[]string{"--shape", "plates", "--gap", "0.5mm", "--half-gap", "0.25mm"}, []string{"--half-gap", "not both"}},
+		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--wire-diameter", "41um", "--wire-radius", "20.5um"}, []string{"--wire-radius", "not both"}},
+		{[]string{"--shape", "fibres", "--fibre-diameter", "25um", "--fibre-radius", "12.5um", "--solid-fraction", "0.2"}, []string{"--fibre-radius", "not both"}},
+		{[]string{"--shape", "screens", "--mesh-per-inch", "200", "--wire-radius", "0.1mm"}, []string{`--wire-radius "0.1mm"`, "mesh count 200", "overlap"}},
 	}
 	for _, c := range cases {
 		var o, e bytes.Buffer
