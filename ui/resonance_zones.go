@@ -15,9 +15,9 @@ import (
 
 // zoneEditor edits the "zones" input of the resonance form one field per
 // value: how many zones, then the length, inside diameter (or radius, a
-// chip away) and gas temperature of each. The form's one-line zones field stays below it (it takes a list
-// pasted from twcalc); the two are kept in step, and an error about one
-// zone marks that zone's field.
+// chip away) and gas temperature of each. The form's one-line zones field
+// stays below it (it takes a list pasted from twcalc); the two are kept in
+// step, and an error about one zone marks that zone's field.
 type zoneEditor struct {
 	env   *Env
 	form  *Form
@@ -122,7 +122,11 @@ func (z *zoneEditor) sync() {
 				size, radius := sheet.ZoneSizeText(texts[1])
 				texts[1] = size
 				if radius != zf.sizeAs.half() {
-					zf.sizeAs.choice.Select(map[bool]string{true: sizeHalf, false: sizeWhole}[radius])
+					form := sizeWhole
+					if radius {
+						form = sizeHalf
+					}
+					zf.sizeAs.choice.Select(form)
 					zf.sizeAs.relabel(zf.size)
 				}
 				for j, fd := range []*Field{zf.length, zf.size, zf.temp} {
