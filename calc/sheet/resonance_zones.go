@@ -114,7 +114,7 @@ const (
 var zoneSizeWords = []struct {
 	word   string
 	radius bool
-}{{"diameter", false}, {"radius", true}, {"dia", false}, {"Ø", false}, {"ø", false}, {"⌀", false}, {"d", false}, {"r", true}}
+}{{"diameter", false}, {"radius", true}, {"dia", false}, {"Ø", false}, {"ø", false}, {"d", false}, {"r", true}}
 
 // ZoneSizeText splits the size text of a zone into the length typed and
 // whether it is a radius: "d 24 mm" gives "24 mm", false; "r 12 mm" and
