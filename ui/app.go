@@ -37,6 +37,15 @@ type App struct {
 	theme   themeToggle
 	side    sideToggle
 	welcome *Page
+	bar     appBar
+}
+
+// appBar holds the top bar's parts as widgets bound once (see layoutBar),
+// and what they draw in this frame, so that a frame builds no closures.
+type appBar struct {
+	back, title, side, theme layout.Widget
+	text                     string      // the title shown
+	window                   image.Point // the window's size
 }
 
 // NewApp builds the app. invalidate asks the window for a frame (e.g.
@@ -50,6 +59,7 @@ func NewApp(invalidate func()) *App {
 	a.list.Axis = layout.Vertical
 	a.env.open = a.Open
 	a.welcome = NewPage(a.env)
+	a.bar = appBar{back: a.layoutBack, title: a.layoutTitle, side: a.layoutSide, theme: a.layoutTheme}
 	return a
 }
 
@@ -230,59 +240,78 @@ func (a *App) layoutCentred(gtx layout.Context, s Screen) layout.Dimensions {
 
 // layoutBar draws the top bar of a window of size window: Back when a
 // screen is open, the title, the list button (a screen open on a wide
-// window) and the theme button.
+// window) and the theme button. Its parts are widgets bound once in NewApp,
+// and the children sit in an array on the stack, so an unchanged frame
+// allocates nothing here.
 func (a *App) layoutBar(gtx layout.Context, window image.Point) layout.Dimensions {
-	th := a.env.Theme
-	title := "Tubewright"
+	a.bar.text = "Tubewright"
 	if s := a.Screen(a.Current()); s != nil {
-		title = s.Title()
+		a.bar.text = s.Title()
 	}
+	a.bar.window = window
 	h := gtx.Dp(56)
 	size := image.Pt(gtx.Constraints.Max.X, h)
 	fill(gtx, a.env.Colors.Accent, size)
 	gtx.Constraints = layout.Exact(size)
-	children := []layout.FlexChild{}
+	var children [4]layout.FlexChild
+	n := 0
 	if len(a.stack) > 0 {
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			b := material.Button(th, &a.back, "‹ Back")
-			b.Background = a.env.Colors.Accent
-			b.Color = a.env.Colors.OnAccent
-			b.TextSize = unit.Sp(17)
-			b.Inset = layout.Inset{Left: 12, Right: 16, Top: 10, Bottom: 10}
-			b.CornerRadius = 0
-			gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
-			return b.Layout(gtx)
-		}))
+		children[n] = layout.Rigid(a.bar.back)
+		n++
 	}
-	children = append(children, layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
-		in := layout.Inset{Left: 16, Right: 16}
-		if len(a.stack) > 0 {
-			in.Left = 4
-		}
-		gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
-		return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			gtx.Constraints.Min.Y = 0
-			return in.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				l := material.Label(th, unit.Sp(20), title)
-				l.Color = a.env.Colors.OnAccent
-				l.Font.Weight = font.SemiBold
-				l.MaxLines = 1
-				l.Truncator = "…"
-				return l.Layout(gtx)
-			})
-		})
-	}))
+	children[n] = layout.Flexed(1, a.bar.title)
+	n++
 	if len(a.stack) > 0 {
 		// At home the catalog is the page itself: nothing to hide.
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return a.side.layout(gtx, a.env, window)
-		}))
+		children[n] = layout.Rigid(a.bar.side)
+		n++
 	}
-	children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-		return a.theme.layout(gtx, a.env)
-	}))
-	layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)
+	children[n] = layout.Rigid(a.bar.theme)
+	n++
+	layout.Flex{Alignment: layout.Middle}.Layout(gtx, children[:n]...)
 	return layout.Dimensions{Size: size}
+}
+
+// layoutBack draws the bar's Back button.
+func (a *App) layoutBack(gtx layout.Context) layout.Dimensions {
+	b := material.Button(a.env.Theme, &a.back, "‹ Back")
+	b.Background = a.env.Colors.Accent
+	b.Color = a.env.Colors.OnAccent
+	b.TextSize = unit.Sp(17)
+	b.Inset = layout.Inset{Left: 12, Right: 16, Top: 10, Bottom: 10}
+	b.CornerRadius = 0
+	gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
+	return b.Layout(gtx)
+}
+
+// layoutTitle draws the bar's title, cut with "…" when it is too long.
+func (a *App) layoutTitle(gtx layout.Context) layout.Dimensions {
+	in := layout.Inset{Left: 16, Right: 16}
+	if len(a.stack) > 0 {
+		in.Left = 4
+	}
+	gtx.Constraints.Min.Y = gtx.Constraints.Max.Y
+	return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		gtx.Constraints.Min.Y = 0
+		return in.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			l := material.Label(a.env.Theme, unit.Sp(20), a.bar.text)
+			l.Color = a.env.Colors.OnAccent
+			l.Font.Weight = font.SemiBold
+			l.MaxLines = 1
+			l.Truncator = "…"
+			return l.Layout(gtx)
+		})
+	})
+}
+
+// layoutSide draws the bar's button that shows or hides the catalog.
+func (a *App) layoutSide(gtx layout.Context) layout.Dimensions {
+	return a.side.layout(gtx, a.env, a.bar.window)
+}
+
+// layoutTheme draws the bar's Dark/Bright button.
+func (a *App) layoutTheme(gtx layout.Context) layout.Dimensions {
+	return a.theme.layout(gtx, a.env)
 }
 
 // layoutCatalog draws the list of calculators; with about set it ends with

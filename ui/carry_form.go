@@ -21,6 +21,9 @@ type carryMark struct {
 	// into (the hot temperature beside an allowable stress): the text is
 	// not changed and there is nothing to undo.
 	info string
+	// Kept for drawing: the line under the input and the descriptions.
+	line                  string
+	carriedDesc, undoDesc joined
 }
 
 // kind is what input it gives and takes between screens, or "".

@@ -21,34 +21,37 @@ func (it *formItem) markedWidget(env *Env, w layout.Widget) layout.Widget {
 					l := material.Body2(env.Theme, m.info)
 					l.Color = env.Colors.Text
 					l.Font.Weight = 600
-					return Described(it.in.Label+" carried", l.Layout)(gtx)
+					return describe(gtx, m.carriedDesc.of(it.in.Label, " carried"), l.Layout)
 				}),
 			)
 		}
 		if m == nil || it.text() != m.text {
 			return w(gtx)
 		}
-		label := it.in.Label
+		if m.line == "" {
+			m.line = "from " + m.from
+			if m.what != "" {
+				m.line += ": " + m.what
+			}
+		}
 		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
 			layout.Rigid(w),
 			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 				gtx.Constraints.Max.X = min(gtx.Constraints.Max.X, gtx.Dp(fieldWidth))
 				return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
-					layout.Flexed(1, Described(label+" carried", func(gtx layout.Context) layout.Dimensions {
-						text := "from " + m.from
-						if m.what != "" {
-							text += ": " + m.what
-						}
-						l := material.Body2(env.Theme, text)
+					layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+						l := material.Body2(env.Theme, m.line)
 						l.Color = env.Colors.Text
 						l.Font.Weight = 600
-						return l.Layout(gtx)
-					})),
+						return describe(gtx, m.carriedDesc.of(it.in.Label, " carried"), l.Layout)
+					}),
 					layout.Rigid(layout.Spacer{Width: 8}.Layout),
-					layout.Rigid(Described(label+" undo", func(gtx layout.Context) layout.Dimensions {
+					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 						gtx.Constraints.Min.X = gtx.Dp(64)
-						return keepButton(env, gtx, &m.undo, "Undo", false)
-					})),
+						return describe(gtx, m.undoDesc.of(it.in.Label, " undo"), func(gtx layout.Context) layout.Dimensions {
+							return keepButton(env, gtx, &m.undo, "Undo", false)
+						})
+					}),
 				)
 			}),
 		)

@@ -22,7 +22,10 @@ type Caution struct {
 	// Lines are the cautions, one paragraph each.
 	Lines []string
 
-	env *Env
+	env   *Env
+	head  layout.Widget // layoutHeading, bound once
+	lines indexed       // the widget of each line
+	col   column
 }
 
 // NewCaution returns a caution box.
@@ -32,40 +35,48 @@ func NewCaution(env *Env, heading string, lines ...string) *Caution {
 
 // Layout draws the box across the available width.
 func (c *Caution) Layout(gtx layout.Context) layout.Dimensions {
-	th := c.env.Theme
+	if c.head == nil {
+		c.head = c.layoutHeading
+		c.lines.draw = c.layoutLine
+	}
 	col := c.env.Colors
+	gtx.Constraints.Min.X = gtx.Constraints.Max.X
+	return background(gtx, col.CautionBg, col.CautionEdge, gtx.Dp(6), gtx.Dp(2), func(gtx layout.Context) layout.Dimensions {
+		return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+			c.col.reset()
+			c.col.add(c.head)
+			for i := range c.Lines {
+				c.col.add(gapH6)
+				c.col.add(c.lines.at(i))
+			}
+			return c.col.layout(gtx)
+		})
+	})
+}
+
+// layoutHeading draws the sign and the heading ("Caution" when empty).
+func (c *Caution) layoutHeading(gtx layout.Context) layout.Dimensions {
 	heading := c.Heading
 	if heading == "" {
 		heading = "Caution"
 	}
-	gtx.Constraints.Min.X = gtx.Constraints.Max.X
-	return background(gtx, col.CautionBg, col.CautionEdge, gtx.Dp(6), gtx.Dp(2), func(gtx layout.Context) layout.Dimensions {
-		return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			children := make([]layout.FlexChild, 0, 1+2*len(c.Lines))
-			children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
-					layout.Rigid(c.mark),
-					layout.Rigid(layout.Spacer{Width: 8}.Layout),
-					layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
-						l := material.Label(th, unit.Sp(17), heading)
-						l.Color = col.CautionEdge
-						l.Font.Weight = font.Bold
-						return l.Layout(gtx)
-					}))
-			}))
-			for _, line := range c.Lines {
-				children = append(children,
-					layout.Rigid(layout.Spacer{Height: 6}.Layout),
-					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-						l := material.Body2(th, line)
-						l.Color = col.CautionText
-						l.TextSize = unit.Sp(15)
-						return l.Layout(gtx)
-					}))
-			}
-			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
-		})
-	})
+	return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
+		layout.Rigid(c.mark),
+		layout.Rigid(layout.Spacer{Width: 8}.Layout),
+		layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+			l := material.Label(c.env.Theme, unit.Sp(17), heading)
+			l.Color = c.env.Colors.CautionEdge
+			l.Font.Weight = font.Bold
+			return l.Layout(gtx)
+		}))
+}
+
+// layoutLine draws caution line i.
+func (c *Caution) layoutLine(gtx layout.Context, i int) layout.Dimensions {
+	l := material.Body2(c.env.Theme, c.Lines[i])
+	l.Color = c.env.Colors.CautionText
+	l.TextSize = unit.Sp(15)
+	return l.Layout(gtx)
 }
 
 // mark draws the caution sign: an exclamation mark in a filled circle (the

@@ -21,6 +21,15 @@ type diagnoseScreen struct {
 	stash map[string]string
 	// bore is the tube's inside diameter, or its radius.
 	bore *sizePair
+
+	// Kept between frames (see retain.go): the headline, the lists of
+	// input keys (made again only when what they depend on changes) and
+	// the slices of widgets.
+	head           *formHead
+	keys, shown    []string
+	keysFor        [2]string
+	plotW          layout.Widget
+	ins, outs, top []layout.Widget
 }
 
 func newDiagnoseScreen(env *Env) Screen {
@@ -31,8 +40,16 @@ func newDiagnoseScreen(env *Env) Screen {
 	s.plot.Height = 240
 	// The tube's size takes a carried value in either form, the hidden
 	// one too: the pair then shows the form that arrived.
-	s.form.cs.shown = func() []string { return append(s.inputKeys(), s.bore.whole, s.bore.half) }
+	s.form.cs.shown = s.shownKeys
+	s.head = newFormHead(env, s.form)
+	s.plotW = s.plot.Layout
 	return s
+}
+
+// shownKeys lists the inputs shown and both forms of the tube's size.
+func (s *diagnoseScreen) shownKeys() []string {
+	s.inputKeys()
+	return s.shown
 }
 
 // Form returns the screen's form.
@@ -60,29 +77,37 @@ func (s *diagnoseScreen) update(gtx layout.Context) {
 	s.plot.Set(curveChart(sheet.ResonanceCurve(s.form.Result())))
 }
 
-// inputKeys lists the inputs of what is found, in order.
+// inputKeys lists the inputs of what is found, in order. The list is made
+// again only when the choices it depends on change, and never changed in
+// place.
 func (s *diagnoseScreen) inputKeys() []string {
+	key := [2]string{s.form.Text("find"), s.bore.key()}
+	if s.keys != nil && key == s.keysFor {
+		return s.keys
+	}
+	s.keysFor = key
 	keys := []string{"find", "measured-frequency", "ends", "length", s.bore.key(), "end-correction", "mode", "gas"}
 	if s.form.Text("find") == sheet.FindFraction {
 		keys = append(keys, "second-gas", "temperature")
 	}
-	return append(keys, "pressure", "humidity", "non-ideal", "losses")
+	s.keys = append(keys, "pressure", "humidity", "non-ideal", "losses")
+	s.shown = append(s.keys[:len(s.keys):len(s.keys)], s.bore.whole, s.bore.half)
+	return s.keys
 }
 
 // Layout implements Screen.
 func (s *diagnoseScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	var inputs []layout.Widget
+	s.ins = s.ins[:0]
 	for _, key := range s.inputKeys() {
 		if key == s.bore.key() {
-			inputs = append(inputs, s.bore.widgets(s.form)...)
+			s.ins = append(s.ins, s.bore.widgets(s.form)...)
 			continue
 		}
-		inputs = append(inputs, s.form.InputWidget(key))
+		s.ins = append(s.ins, s.form.InputWidget(key))
 	}
 	out := s.form.Outputs()
-	outputs := append([]layout.Widget{}, out[:2]...)
-	outputs = append(outputs, s.plot.Layout)
-	outputs = append(outputs, out[2:]...)
-	return splitLayout(gtx, s.page, s.side, []layout.Widget{formHeadline(s.env, s.form)}, inputs, outputs)
+	s.outs = append(append(append(s.outs[:0], out[:2]...), s.plotW), out[2:]...)
+	s.top = append(s.top[:0], s.head.widget())
+	return splitLayout(gtx, s.page, s.side, s.top, s.ins, s.outs)
 }

@@ -54,6 +54,24 @@ type Field struct {
 		dim units.Dimension
 		opt units.Options
 	}
+	// text is the editor's text at the last parse: every change of the
+	// text is parsed (update, SetText), and reading the editor's text
+	// allocates.
+	text string
+	// The lines under the box, kept until a parse, SetError or a change
+	// of lineKey (see lines), so that a steady frame builds no text.
+	lineOK            bool
+	lineKey           fieldLineKey
+	errLine, readLine string
+	hintLine          string // hint(), kept with the lines
+	errDesc, readDesc joined
+}
+
+// fieldLineKey is what the lines under a field depend on beside its text
+// and parse.
+type fieldLineKey struct {
+	label, hint string
+	dim         units.Dimension
 }
 
 // NewField returns a field for dimension dim with the given starting text
@@ -77,7 +95,7 @@ func (f *Field) SetText(s string) {
 }
 
 // Text returns the current text.
-func (f *Field) Text() string { return f.editor.Text() }
+func (f *Field) Text() string { return f.text }
 
 // Changed reports, once, whether the user changed the text since the last
 // Update or Changed call.
@@ -109,7 +127,7 @@ func (f *Field) Value() (float64, bool) {
 // SetError shows err under the field in place of the hint, for a value that
 // parsed but that a calculation rejected (e.g. a units.RangeError about this
 // input). nil clears it. A parse error always takes precedence.
-func (f *Field) SetError(err error) { f.extErr = err }
+func (f *Field) SetError(err error) { f.extErr, f.lineOK = err, false }
 
 // ErrorText returns the error text shown under the field, or "".
 func (f *Field) ErrorText() string {
@@ -157,6 +175,7 @@ func (f *Field) fresh() {
 func (f *Field) parse() {
 	f.parsedAs.dim, f.parsedAs.opt = f.Dim, f.Options
 	txt := f.editor.Text()
+	f.text, f.lineOK = txt, false
 	var q units.Quantity
 	var err error
 	if f.In != nil {
@@ -243,7 +262,7 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 	f.editor.InputHint = f.inputHint()
 	gtx.Constraints.Max.X = min(gtx.Constraints.Max.X, gtx.Dp(fieldWidth))
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
-	errText := f.ErrorText()
+	errText, reading := f.lines()
 	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			l := material.Body2(th, f.Label)
@@ -272,7 +291,7 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 					pad := unit.Dp(14)
 					gtx.Constraints.Min.Y = max(0, gtx.Dp(minTarget)-2*gtx.Dp(pad))
 					return layout.Inset{Left: 12, Right: 12, Top: pad, Bottom: pad}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						e := material.Editor(th, &f.editor, f.hint())
+						e := material.Editor(th, &f.editor, f.hintLine)
 						e.Color = c.Text
 						e.HintColor = c.Muted
 						e.SelectionColor = c.Selected
@@ -286,14 +305,30 @@ func (f *Field) Layout(gtx layout.Context) layout.Dimensions {
 			if errText != "" {
 				l := material.Body2(th, errText)
 				l.Color = c.Error
-				return Described(f.Label+" error", l.Layout)(gtx)
+				return describe(gtx, f.errDesc.of(f.Label, " error"), l.Layout)
 			}
-			l := material.Caption(th, f.reading())
+			l := material.Caption(th, reading)
 			l.Color = c.Muted
 			l.TextSize = unit.Sp(13)
-			return Described(f.Label+" reading", l.Layout)(gtx)
+			return describe(gtx, f.readDesc.of(f.Label, " reading"), l.Layout)
 		}),
 	)
+}
+
+// lines returns the error line under the box, or "" and the reading line;
+// both are kept until the text is parsed again, SetError is called, or
+// the label, hint or dimension change.
+func (f *Field) lines() (errText, reading string) {
+	f.fresh()
+	key := fieldLineKey{label: f.Label, hint: f.Hint, dim: f.Dim}
+	if !f.lineOK || f.lineKey != key {
+		f.lineOK, f.lineKey = true, key
+		f.errLine, f.readLine, f.hintLine = f.ErrorText(), "", f.hint()
+		if f.errLine == "" {
+			f.readLine = f.reading()
+		}
+	}
+	return f.errLine, f.readLine
 }
 
 // reading is the line under a field that parsed: for a pressure it says

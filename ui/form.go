@@ -6,6 +6,7 @@ import (
 
 	"gioui.org/layout"
 	"gioui.org/widget"
+	"gioui.org/widget/material"
 
 	"tubewright/calc/sheet"
 )
@@ -28,6 +29,14 @@ type Form struct {
 	dirty   bool
 	kept    formKeep   // last inputs restored and remembered; see keep_form.go
 	cs      carryState // carried values and the operating point; see carry_form.go
+
+	// Kept between frames, so that a steady frame allocates nothing:
+	// the slices Inputs and Outputs return (valid until their next call),
+	// and the output widgets, bound once.
+	ins, adv, outs []layout.Widget
+	outWs          [4]layout.Widget // resultCard, CautionWidget, notes, about
+	notes          column
+	noteWs         indexed
 }
 
 // formItem is the widget of one input; exactly one of the pointers is set.
@@ -37,7 +46,8 @@ type formItem struct {
 	gas   *GasPicker
 	pick  *Choice
 	on    *widget.Bool
-	mark  *carryMark // set while the value is one carried from another screen
+	mark  *carryMark    // set while the value is one carried from another screen
+	w     layout.Widget // the widget, made on first use and kept
 }
 
 // NewForm builds the widgets of s's inputs with their defaults (or
@@ -247,26 +257,33 @@ func (f *Form) Enter() bool {
 	return changed
 }
 
-// Inputs returns the input widgets in order, advanced ones last.
+// Inputs returns the input widgets in order, advanced ones last. The
+// slice is the Form's own, valid until the next call.
 func (f *Form) Inputs() []layout.Widget {
-	var main, adv []layout.Widget
+	f.ins, f.adv = f.ins[:0], f.adv[:0]
 	for i := range f.items {
 		w := f.items[i].widget(f.env)
 		if f.items[i].in.Advanced {
-			adv = append(adv, w)
+			f.adv = append(f.adv, w)
 		} else {
-			main = append(main, w)
+			f.ins = append(f.ins, w)
 		}
 	}
-	return append(main, adv...)
+	f.ins = append(f.ins, f.adv...)
+	return f.ins
 }
 
 // InputWidget returns the widget of input key alone, for screens that
 // place inputs themselves.
 func (f *Form) InputWidget(key string) layout.Widget { return f.item(key).widget(f.env) }
 
+// widget returns the input's widget with its carry mark, made on first
+// use and kept.
 func (it *formItem) widget(env *Env) layout.Widget {
-	return it.markedWidget(env, it.plainWidget(env))
+	if it.w == nil {
+		it.w = it.markedWidget(env, it.plainWidget(env))
+	}
+	return it.w
 }
 
 // plainWidget is the input's widget without its carry mark.
@@ -286,23 +303,37 @@ func (it *formItem) plainWidget(env *Env) layout.Widget {
 }
 
 // Outputs returns the results card, the cautions (when there are any),
-// the result's notes and the calculator's model note.
+// the result's notes and the calculator's model note. The slice is the
+// Form's own, valid until the next call.
 func (f *Form) Outputs() []layout.Widget {
-	ws := []layout.Widget{f.resultCard, f.CautionWidget}
-	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-		if f.result == nil || len(f.result.Notes) == 0 {
-			return layout.Dimensions{}
-		}
-		children := make([]layout.FlexChild, len(f.result.Notes))
-		for i, n := range f.result.Notes {
-			children[i] = layout.Rigid(Described("Model range", Note(f.env, n)))
-		}
-		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
-	})
-	if f.Sheet.About != "" {
-		ws = append(ws, Note(f.env, f.Sheet.About))
+	if f.outWs[0] == nil {
+		f.outWs = [4]layout.Widget{f.resultCard, f.CautionWidget, f.layoutNotes, Note(f.env, f.Sheet.About)}
+		f.noteWs.draw = f.layoutNote
 	}
-	return ws
+	f.outs = append(f.outs[:0], f.outWs[:3]...)
+	if f.Sheet.About != "" {
+		f.outs = append(f.outs, f.outWs[3])
+	}
+	return f.outs
+}
+
+// layoutNotes draws the result's notes, one under the other.
+func (f *Form) layoutNotes(gtx layout.Context) layout.Dimensions {
+	if f.result == nil || len(f.result.Notes) == 0 {
+		return layout.Dimensions{}
+	}
+	f.notes.reset()
+	for i := range f.result.Notes {
+		f.notes.add(f.noteWs.at(i))
+	}
+	return f.notes.layout(gtx)
+}
+
+// layoutNote draws note i of the result, described "Model range".
+func (f *Form) layoutNote(gtx layout.Context, i int) layout.Dimensions {
+	l := material.Body2(f.env.Theme, f.result.Notes[i])
+	l.Color = f.env.Colors.Muted
+	return describe(gtx, "Model range", l.Layout)
 }
 
 // CautionWidget draws the result's safety cautions, or nothing.

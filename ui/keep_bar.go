@@ -253,17 +253,21 @@ func (b *keepBar) layoutStrip(gtx layout.Context, f *Form) layout.Dimensions {
 				}),
 			)
 		})
-		var rows []layout.FlexChild
+		// The rows sit in an array on the stack, not a slice that grows,
+		// so that their widgets are not made on the heap each frame.
+		var rows [3]layout.FlexChild
+		n := 0
 		if !b.panel {
-			rows = append(rows, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			rows[n] = layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 				if dims := b.layoutStatus(gtx); dims.Size.Y > 0 {
 					return layout.Dimensions{Size: dims.Size.Add(image.Pt(0, gtx.Dp(6)))}
 				}
 				return layout.Dimensions{}
-			}))
+			})
+			n++
 		}
 		if b.noteShown {
-			rows = append(rows, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			rows[n] = layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 				return layout.Inset{Bottom: 6}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 					return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
 						layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
@@ -279,9 +283,12 @@ func (b *keepBar) layoutStrip(gtx layout.Context, f *Form) layout.Dimensions {
 						}),
 					)
 				})
-			}))
+			})
+			n++
 		}
-		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, append(rows, buttons)...)
+		rows[n] = buttons
+		n++
+		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, rows[:n]...)
 	})
 	call := m.Stop()
 	fill(gtx, c.Surface, dims.Size)

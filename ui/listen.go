@@ -54,6 +54,18 @@ type listenScreen struct {
 	again, send, copyCSV widget.Clickable
 	copied               bool
 	freq, level          *Plot
+
+	// Kept between frames (see retain.go): widgets bound once (bindWidgets)
+	// and the slices of children.
+	w              listenWidgets
+	ins, outs, top []layout.Widget
+}
+
+// listenWidgets are the listen screen's widgets, bound once.
+type listenWidgets struct {
+	intro, mic, again, status, failure, send, freq, level, csv, about layout.Widget
+	head                                                              *formHead
+	noHead                                                            layout.Widget
 }
 
 // listenDone is one finished analysis: the key of the inputs it was made
@@ -115,6 +127,20 @@ func (s *listenScreen) setMic(r recorder) {
 	s.micView = nil
 	if r != nil {
 		s.micView = newMicView(s.env, r)
+	}
+	s.bindWidgets()
+}
+
+// bindWidgets makes the screen's widgets once (again when the microphone
+// changes), so that a frame only lists them.
+func (s *listenScreen) bindWidgets() {
+	s.w = listenWidgets{
+		intro: Para(s.env, s.intro()), again: s.againButton, status: s.status, failure: s.failure,
+		send: s.sendButton, freq: s.freq.Layout, level: s.level.Layout, csv: s.csvButton,
+		about: Note(s.env, s.real.About), head: newFormHead(s.env, s.form), noHead: headline(s.env, "", ""),
+	}
+	if s.micView != nil {
+		s.w.mic = s.micView.Layout
 	}
 }
 
@@ -272,32 +298,34 @@ func (s *listenScreen) track() *sheet.Table {
 // Layout implements Screen.
 func (s *listenScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	inputs := []layout.Widget{Para(s.env, s.intro())}
+	w := &s.w
+	s.ins = append(s.ins[:0], w.intro)
 	if s.micView != nil {
-		inputs = append(inputs, s.micView.Layout)
+		s.ins = append(s.ins, w.mic)
 	} else {
-		inputs = append(inputs, s.form.InputWidget("file"), s.againButton)
+		s.ins = append(s.ins, s.form.InputWidget("file"), w.again)
 	}
-	inputs = append(inputs, s.form.InputWidget("lowest"), s.form.InputWidget("highest"))
+	s.ins = append(s.ins, s.form.InputWidget("lowest"), s.form.InputWidget("highest"))
 
 	out := s.form.Outputs()
-	outputs := []layout.Widget{s.status}
+	s.outs = append(s.outs[:0], w.status)
 	switch {
 	case s.showResults() && s.micView != nil && s.form.Result() == nil:
 		// The file field is not on screen: say what is wrong with the
 		// recording here rather than "check the fields marked in red".
-		outputs = append(outputs, s.failure, out[1], Note(s.env, s.real.About))
+		s.outs = append(s.outs, w.failure, out[1], w.about)
 	case s.showResults():
-		outputs = append(outputs, out[0], out[1], s.sendButton, s.freq.Layout, s.level.Layout, s.csvButton)
-		outputs = append(outputs, out[2:]...)
+		s.outs = append(s.outs, out[0], out[1], w.send, w.freq, w.level, w.csv)
+		s.outs = append(s.outs, out[2:]...)
 	default:
-		outputs = append(outputs, out[1], Note(s.env, s.real.About))
+		s.outs = append(s.outs, out[1], w.about)
 	}
-	head := formHeadline(s.env, s.form)
+	head := w.head.widget()
 	if s.analysing() {
-		head = headline(s.env, "", "")
+		head = w.noHead
 	}
-	return splitLayout(gtx, s.page, s.side, []layout.Widget{head}, inputs, outputs)
+	s.top = append(s.top[:0], head)
+	return splitLayout(gtx, s.page, s.side, s.top, s.ins, s.outs)
 }
 
 // intro says what to do, for the platform's way in.
@@ -349,16 +377,22 @@ func (s *listenScreen) status(gtx layout.Context) layout.Dimensions {
 				return l.Layout(gtx)
 			}),
 			layout.Rigid(layout.Spacer{Width: 10}.Layout),
-			layout.Flexed(1, Described("Progress", Para(s.env, "Analysing the recording…"))),
+			layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+				return describe(gtx, "Progress", func(gtx layout.Context) layout.Dimensions {
+					return layoutPara(gtx, s.env, "Analysing the recording…")
+				})
+			}),
 		)
 	case s.micView != nil && s.mic.State() == micRecording:
-		return Described("Progress", Note(s.env, "Recording: tap Stop and analyse once the tube has rung out."))(gtx)
+		return describe(gtx, "Progress", func(gtx layout.Context) layout.Dimensions {
+			return layoutNote(gtx, s.env, "Recording: tap Stop and analyse once the tube has rung out.")
+		})
 	case !s.opened() && s.form.Result() == nil:
 		what := "No recording yet: type its path to see its frequency."
 		if s.micView != nil {
 			what = "No recording yet: record the tube to see its frequency."
 		}
-		return Described("Progress", Note(s.env, what))(gtx)
+		return describe(gtx, "Progress", func(gtx layout.Context) layout.Dimensions { return layoutNote(gtx, s.env, what) })
 	}
 	return layout.Dimensions{}
 }

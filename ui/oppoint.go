@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"slices"
 	"strings"
 
 	"gioui.org/layout"
@@ -25,6 +26,24 @@ type carryState struct {
 	// point, when set, writes the operating point instead of the Form's
 	// inputs (the device screens, whose point is in the device).
 	point func() string
+	// memo is the last line written from the inputs, kept while the
+	// result and the inputs it names (and where they came from) are the
+	// same, so that a steady frame writes nothing.
+	memo pointMemo
+}
+
+// pointMemo is the operating-point line and what it was written from.
+type pointMemo struct {
+	res  *sheet.Result
+	key  pointKey
+	line string
+}
+
+// pointKey is, for each kind of opKinds, the index of the input that
+// gives it (-1 for none) and the screen its value came from.
+type pointKey struct {
+	item [4]int
+	from [4]string
 }
 
 // opKinds are the values of an operating point, in the order the line
@@ -63,7 +82,8 @@ func writtenWithExponent(s string) bool {
 // OperatingPoint returns the line that says at which gas, pressure,
 // temperature and frequency the result was worked out and where each came
 // from, e.g. "At helium, 10 bar, 300 K, 400 Hz · frequency from Tube
-// resonance; the rest set here"; "" when there is no result.
+// resonance; the rest set here"; "" when there is no result. The line is
+// written again only when the result or the inputs it names change.
 func (f *Form) OperatingPoint() string {
 	if f.result == nil {
 		return ""
@@ -71,35 +91,48 @@ func (f *Form) OperatingPoint() string {
 	if f.cs.point != nil {
 		return f.cs.point()
 	}
-	return pointLine(f.pointParts(), "set here")
+	key := f.pointKey()
+	if m := &f.cs.memo; m.res != f.result || m.key != key || m.line == "" {
+		m.res, m.key, m.line = f.result, key, pointLine(f.pointParts(key), "set here")
+	}
+	return f.cs.memo.line
 }
 
-// pointParts are the operating-point values of the Form's inputs shown,
-// in the order of opKinds.
-func (f *Form) pointParts() []opPart {
-	var shown map[string]bool
+// pointKey finds, for each kind of opKinds, the first of the Form's inputs
+// shown that gives it and has a value, and where that value came from.
+func (f *Form) pointKey() pointKey {
+	var shown []string
 	if f.cs.shown != nil {
-		shown = map[string]bool{}
-		for _, k := range f.cs.shown() {
-			shown[k] = true
-		}
+		shown = f.cs.shown()
 	}
 	v := f.result.Values
-	var parts []opPart
-	for _, k := range opKinds {
+	var key pointKey
+	for n, k := range opKinds {
+		key.item[n] = -1
 		for i := range f.items {
 			it := &f.items[i]
-			key := it.in.Key
 			fk := f.kind(it)
 			if fk == carryMeasured {
 				fk = carryFrequency
 			}
-			if fk != k || (shown != nil && !shown[key]) || !v.Has(key) {
+			if fk != k || (f.cs.shown != nil && !slices.Contains(shown, it.in.Key)) || !v.Has(it.in.Key) {
 				continue
 			}
-			p := opPart{kind: k, value: shownValue(v.Get(key)), from: it.carriedFrom()}
-			parts = append(parts, p)
+			key.item[n], key.from[n] = i, it.carriedFrom()
 			break
+		}
+	}
+	return key
+}
+
+// pointParts are the operating-point values of the inputs key names, in
+// the order of opKinds.
+func (f *Form) pointParts(key pointKey) []opPart {
+	v := f.result.Values
+	var parts []opPart
+	for n, k := range opKinds {
+		if i := key.item[n]; i >= 0 {
+			parts = append(parts, opPart{kind: k, value: shownValue(v.Get(f.items[i].in.Key)), from: key.from[n]})
 		}
 	}
 	return parts
@@ -174,7 +207,7 @@ func (f *Form) PointWidget(gtx layout.Context) layout.Dimensions {
 	}
 	l := material.Body2(f.env.Theme, line)
 	l.Color = f.env.Colors.Text
-	return Described("Operating point", l.Layout)(gtx)
+	return describe(gtx, "Operating point", l.Layout)
 }
 
 // resultCard is the results card with the operating point on top, unless

@@ -25,6 +25,15 @@ type resonanceScreen struct {
 	// bore is the tube's inside diameter, or its radius; neck the same
 	// of a Helmholtz resonator's neck.
 	bore, neck *sizePair
+
+	// Kept between frames (see retain.go): the headline, the lists of
+	// input keys (made again only when what they depend on changes) and
+	// the slices of widgets.
+	head           *formHead
+	keys, shown    []string
+	keysFor        [4]string
+	plotW          layout.Widget
+	ins, outs, top []layout.Widget
 }
 
 func newResonanceScreen(env *Env) Screen {
@@ -36,9 +45,17 @@ func newResonanceScreen(env *Env) Screen {
 	s.zones = newZoneEditor(env, s.form)
 	// The tube's size takes a carried value in either form, the hidden
 	// one too: the pair then shows the form that arrived.
-	s.form.cs.shown = func() []string { return append(s.inputKeys(), s.bore.whole, s.bore.half) }
+	s.form.cs.shown = s.shownKeys
 	s.plot.Height = 240
+	s.head = newFormHead(env, s.form)
+	s.plotW = s.plot.Layout
 	return s
+}
+
+// shownKeys lists the inputs shown and both forms of the tube's size.
+func (s *resonanceScreen) shownKeys() []string {
+	s.inputKeys()
+	return s.shown
 }
 
 // Form returns the screen's form.
@@ -57,7 +74,7 @@ func (s *resonanceScreen) kind() string { return s.form.Text("resonator") }
 func (s *resonanceScreen) update(gtx layout.Context) {
 	s.zones.update(gtx)
 	changed := s.form.Update(gtx)
-	for _, p := range []*sizePair{s.bore, s.neck} {
+	for _, p := range [...]*sizePair{s.bore, s.neck} {
 		if p.update(gtx, s.form, s.stash) {
 			changed = s.form.Update(gtx) || changed
 		}
@@ -78,47 +95,55 @@ func (s *resonanceScreen) update(gtx layout.Context) {
 }
 
 // inputKeys lists the inputs of the resonator chosen, in order; the zone
-// editor goes where "zones" is.
+// editor goes where "zones" is. The list is made again only when the
+// choices it depends on change, and never changed in place.
 func (s *resonanceScreen) inputKeys() []string {
+	key := [4]string{s.kind(), s.form.Text("solve"), s.bore.key(), s.neck.key()}
+	if s.keys != nil && key == s.keysFor {
+		return s.keys
+	}
+	s.keysFor = key
 	switch s.kind() {
 	case sheet.ResonatorZones:
-		return []string{"resonator", "ends", "zones", "modes", "end-correction", "gas", "pressure", "humidity", "non-ideal", "losses"}
+		s.keys = []string{"resonator", "ends", "zones", "modes", "end-correction", "gas", "pressure", "humidity", "non-ideal", "losses"}
 	case sheet.ResonatorHelmholtz:
-		return []string{"resonator", "volume", "neck-length", s.neck.key(), "end-correction", "gas", "temperature", "pressure", "humidity",
+		s.keys = []string{"resonator", "volume", "neck-length", s.neck.key(), "end-correction", "gas", "temperature", "pressure", "humidity",
 			"non-ideal"}
+	default:
+		given := "length"
+		if s.form.Text("solve") == "length" {
+			given = "frequency"
+		}
+		s.keys = []string{"resonator", "solve", "ends", given, s.bore.key(), "end-correction", "mode", "gas", "temperature", "pressure", "humidity",
+			"non-ideal", "losses", "sweep", "second-gas"}
 	}
-	given := "length"
-	if s.form.Text("solve") == "length" {
-		given = "frequency"
-	}
-	return []string{"resonator", "solve", "ends", given, s.bore.key(), "end-correction", "mode", "gas", "temperature", "pressure", "humidity",
-		"non-ideal", "losses", "sweep", "second-gas"}
+	s.shown = append(s.keys[:len(s.keys):len(s.keys)], s.bore.whole, s.bore.half)
+	return s.keys
 }
 
 // Layout implements Screen.
 func (s *resonanceScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	var inputs []layout.Widget
+	s.ins = s.ins[:0]
 	for _, key := range s.inputKeys() {
 		if key == "zones" {
-			inputs = append(inputs, s.zones.widgets()...)
+			s.ins = append(s.ins, s.zones.widgets()...)
 		}
 		if p := s.pairOf(key); p != nil {
-			inputs = append(inputs, p.widgets(s.form)...)
+			s.ins = append(s.ins, p.widgets(s.form)...)
 			continue
 		}
-		inputs = append(inputs, s.form.InputWidget(key))
+		s.ins = append(s.ins, s.form.InputWidget(key))
 	}
 	out := s.form.Outputs()
-	outputs := append([]layout.Widget{}, out[:2]...)
-	outputs = append(outputs, s.plot.Layout)
-	outputs = append(outputs, out[2:]...)
-	return splitLayout(gtx, s.page, s.side, []layout.Widget{formHeadline(s.env, s.form)}, inputs, outputs)
+	s.outs = append(append(append(s.outs[:0], out[:2]...), s.plotW), out[2:]...)
+	s.top = append(s.top[:0], s.head.widget())
+	return splitLayout(gtx, s.page, s.side, s.top, s.ins, s.outs)
 }
 
 // pairOf returns the size pair whose shown input is key, or nil.
 func (s *resonanceScreen) pairOf(key string) *sizePair {
-	for _, p := range []*sizePair{s.bore, s.neck} {
+	for _, p := range [...]*sizePair{s.bore, s.neck} {
 		if p.key() == key {
 			return p
 		}

@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"slices"
+
 	"gioui.org/layout"
 	"gioui.org/unit"
 	"gioui.org/widget/material"
@@ -10,37 +12,68 @@ import (
 
 // headline shows the main answer large, or nothing when there is none.
 func headline(env *Env, label, value string) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
-		if value == "" {
-			return layout.Dimensions{}
-		}
-		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				l := material.Body2(env.Theme, label)
-				l.Color = env.Colors.Muted
-				return l.Layout(gtx)
-			}),
-			layout.Rigid(Described("Answer", func(gtx layout.Context) layout.Dimensions {
-				l := material.Label(env.Theme, unit.Sp(30), value)
-				l.Color = env.Colors.Accent
-				l.Font.Weight = 700
-				return l.Layout(gtx)
-			})),
-		)
-	}
+	return func(gtx layout.Context) layout.Dimensions { return layoutHeadline(gtx, env, label, value) }
 }
 
-// formHeadline is the headline of a form's first result row: its label
-// and its value as the results card shows it, with the operating point it
-// was worked out at beneath (see withPoint).
-func formHeadline(env *Env, f *Form) layout.Widget {
-	res := f.Result()
-	if res == nil || len(res.Rows) == 0 {
-		return headline(env, "", "")
+// layoutHeadline draws the headline of headline without making a widget.
+func layoutHeadline(gtx layout.Context, env *Env, label, value string) layout.Dimensions {
+	if value == "" {
+		return layout.Dimensions{}
 	}
-	row := res.Rows[0]
-	value, _ := f.Results.Value(row.Label)
-	return withPoint(f, headline(env, row.Label, value))
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			l := material.Body2(env.Theme, label)
+			l.Color = env.Colors.Muted
+			return l.Layout(gtx)
+		}),
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+			l := material.Label(env.Theme, unit.Sp(30), value)
+			l.Color = env.Colors.Accent
+			l.Font.Weight = 700
+			return describe(gtx, "Answer", l.Layout)
+		}),
+	)
+}
+
+// formHead is the headline of a form's first result row: its label and
+// its value as the results card shows it, with the operating point it was
+// worked out at beneath (as withPoint draws it). Its widget is bound once
+// and reads the form each frame.
+type formHead struct {
+	env *Env
+	f   *Form
+	w   layout.Widget
+}
+
+// newFormHead returns the headline of f.
+func newFormHead(env *Env, f *Form) *formHead {
+	h := &formHead{env: env, f: f}
+	h.w = h.layout
+	return h
+}
+
+// widget returns the headline's widget. While the form has a result, the
+// results card then leaves the operating point out (see withPoint).
+func (h *formHead) widget() layout.Widget {
+	if res := h.f.Result(); res != nil && len(res.Rows) > 0 {
+		h.f.cs.headed = true
+	}
+	return h.w
+}
+
+// layout draws the headline, or nothing without a result.
+func (h *formHead) layout(gtx layout.Context) layout.Dimensions {
+	res := h.f.Result()
+	if res == nil || len(res.Rows) == 0 {
+		return layout.Dimensions{}
+	}
+	label := res.Rows[0].Label
+	value, _ := h.f.Results.Value(label)
+	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions { return layoutHeadline(gtx, h.env, label, value) }),
+		layout.Rigid(layout.Spacer{Height: 4}.Layout),
+		layout.Rigid(h.f.PointWidget),
+	)
 }
 
 // curveChart draws a calculator's curve with its result marked; nil when
@@ -76,23 +109,19 @@ func linePlot(xy XYs, x0, y0 float64, xLabel, xUnit, title string) *Chart {
 // last used, rather than sending its default back to the Bench). It
 // reports whether anything changed.
 func hideInputs(f *Form, shown []string, stash map[string]string) bool {
-	visible := map[string]bool{}
-	for _, k := range shown {
-		visible[k] = true
-	}
 	changed := false
 	for i := range f.Sheet.Inputs {
 		in := &f.Sheet.Inputs[i]
 		if in.Kind == sheet.Pick || in.Kind == sheet.Switch || in.Kind == sheet.Gas || in.Share != sheet.ShareNone {
 			continue
 		}
-		text := f.Text(in.Key)
+		text, visible := f.Text(in.Key), slices.Contains(shown, in.Key)
 		switch {
-		case !visible[in.Key] && text != in.Default:
+		case !visible && text != in.Default:
 			stash[in.Key] = text
 			f.SetText(in.Key, in.Default)
 			changed = true
-		case visible[in.Key] && text == in.Default && stash[in.Key] != "":
+		case visible && text == in.Default && stash[in.Key] != "":
 			f.SetText(in.Key, stash[in.Key])
 			delete(stash, in.Key)
 			changed = true

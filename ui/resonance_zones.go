@@ -138,12 +138,16 @@ func (z *zoneEditor) sync() {
 		}
 	}
 	for i := range z.zones {
-		for _, fd := range []*Field{z.zones[i].length, z.zones[i].size, z.zones[i].temp} {
+		for _, fd := range [...]*Field{z.zones[i].length, z.zones[i].size, z.zones[i].temp} {
 			fd.SetError(nil)
 		}
 	}
+	err := z.form.Err()
+	if err == nil {
+		return // errors.As would put ze on the heap each frame
+	}
 	var ze *sheet.ZoneError
-	if errors.As(z.form.Err(), &ze) && ze.Zone >= 0 && ze.Zone < len(z.zones) {
+	if errors.As(err, &ze) && ze.Zone >= 0 && ze.Zone < len(z.zones) {
 		if fd := z.zones[ze.Zone].field(ze.Part); fd != nil {
 			fd.SetError(ze)
 		}

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"image"
 	"math"
+	"unicode/utf8"
 
 	"gioui.org/layout"
 	"gioui.org/op"
@@ -25,11 +26,21 @@ type Results struct {
 	warnings []string
 	failure  string
 	details  resultDetails
+
+	// Kept between frames, so that an unchanged card allocates nothing.
+	col        column
+	rowWs      indexed // the widget of row i
+	warnWs     indexed // the widget of warning i
+	warnTexts  []joined
+	failWidget layout.Widget
+	failText   joined
+	detailsW   layout.Widget
 }
 
 type resultRow struct {
 	label, value, note string
 	outcome            sheet.Outcome // set when the row is a check
+	outcomeDesc        string        // label + " outcome", made when first drawn
 }
 
 // NewResults returns an empty results card.
@@ -154,44 +165,59 @@ func (r *Results) Len() int { return len(r.rows) }
 
 // Layout draws the card.
 func (r *Results) Layout(gtx layout.Context) layout.Dimensions {
-	th := r.env.Theme
+	if r.failWidget == nil {
+		r.failWidget = r.layoutFailure
+		r.rowWs.draw = r.layoutRowAt
+		r.warnWs.draw = r.layoutWarning
+		r.detailsW = r.layoutDetails
+	}
 	c := r.env.Colors
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
-	var children []layout.FlexChild
+	r.col.reset()
 	if r.failure != "" {
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				l := material.Body1(th, "No result: "+r.failure)
-				l.Color = c.Error
-				return Described("No result", l.Layout)(gtx)
-			})
-		}))
+		r.col.add(r.failWidget)
 	}
-	for i, row := range r.rows {
-		last := i == len(r.rows)-1
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return r.layoutRow(gtx, row, !last)
-		}))
+	for i := range r.rows {
+		r.col.add(r.rowWs.at(i))
 	}
-	for _, w := range r.warnings {
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return layout.Inset{Left: 14, Right: 14, Top: 4, Bottom: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				l := material.Body2(th, "Note: "+w)
-				l.Color = c.Warning
-				return l.Layout(gtx)
-			})
-		}))
+	for i := range r.warnings {
+		r.col.add(r.warnWs.at(i))
 	}
 	if len(r.details.rows) > 0 {
-		children = append(children, layout.Rigid(r.layoutDetails))
+		r.col.add(r.detailsW)
 	}
-	if len(children) == 0 {
+	if r.col.empty() {
 		return layout.Dimensions{}
 	}
 	return background(gtx, c.Surface, c.Divider, gtx.Dp(8), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-		return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
-		})
+		return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, r.col.layout)
+	})
+}
+
+// layoutFailure draws why there is no result.
+func (r *Results) layoutFailure(gtx layout.Context) layout.Dimensions {
+	return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		l := material.Body1(r.env.Theme, r.failText.of("No result: ", r.failure))
+		l.Color = r.env.Colors.Error
+		return describe(gtx, "No result", l.Layout)
+	})
+}
+
+// layoutRowAt draws row i, with a hairline under it unless it is the last.
+func (r *Results) layoutRowAt(gtx layout.Context, i int) layout.Dimensions {
+	return r.layoutRow(gtx, &r.rows[i], i < len(r.rows)-1)
+}
+
+// layoutWarning draws warning i.
+func (r *Results) layoutWarning(gtx layout.Context, i int) layout.Dimensions {
+	for len(r.warnTexts) <= i {
+		r.warnTexts = append(r.warnTexts, joined{})
+	}
+	text := r.warnTexts[i].of("Note: ", r.warnings[i])
+	return layout.Inset{Left: 14, Right: 14, Top: 4, Bottom: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		l := material.Body2(r.env.Theme, text)
+		l.Color = r.env.Colors.Warning
+		return l.Layout(gtx)
 	})
 }
 
@@ -202,11 +228,11 @@ const longValue = 40
 // layoutRow draws one row: label on the left, value on the right (or, for
 // a value in many words, under the label), note below; a hairline under it
 // when divider is set.
-func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) layout.Dimensions {
+func (r *Results) layoutRow(gtx layout.Context, row *resultRow, divider bool) layout.Dimensions {
 	th := r.env.Theme
 	c := r.env.Colors
 	m := op.Record(gtx.Ops)
-	long := len([]rune(row.value)) > longValue
+	long := utf8.RuneCountInString(row.value) > longValue
 	dims := layout.Inset{Left: 14, Right: 14, Top: 9, Bottom: 9}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 		gtx.Constraints.Min.X = gtx.Constraints.Max.X
 		if long {
@@ -224,12 +250,12 @@ func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) lay
 					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 						return r.badge(gtx, row)
 					}),
-					layout.Rigid(Described(row.label, func(gtx layout.Context) layout.Dimensions {
+					layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 						l := material.Label(th, unit.Sp(17), row.value)
 						l.Color = c.Text
 						l.Font.Weight = 600
-						return l.Layout(gtx)
-					})),
+						return describe(gtx, row.label, l.Layout)
+					}),
 				)
 			}),
 			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
@@ -256,7 +282,7 @@ func (r *Results) layoutRow(gtx layout.Context, row resultRow, divider bool) lay
 
 // layoutLongRow draws a row whose value is many words: the label (with
 // the badge of a check), the value as a paragraph under it, then the note.
-func (r *Results) layoutLongRow(gtx layout.Context, row resultRow) layout.Dimensions {
+func (r *Results) layoutLongRow(gtx layout.Context, row *resultRow) layout.Dimensions {
 	th := r.env.Theme
 	c := r.env.Colors
 	return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
@@ -271,11 +297,11 @@ func (r *Results) layoutLongRow(gtx layout.Context, row resultRow) layout.Dimens
 			)
 		}),
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return layout.Inset{Top: 4}.Layout(gtx, Described(row.label, func(gtx layout.Context) layout.Dimensions {
+			return layout.Inset{Top: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 				l := material.Body1(th, row.value)
 				l.Color = c.Text
-				return l.Layout(gtx)
-			}))
+				return describe(gtx, row.label, l.Layout)
+			})
 		}),
 		layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			if row.note == "" {
@@ -292,21 +318,26 @@ func (r *Results) layoutLongRow(gtx layout.Context, row resultRow) layout.Dimens
 // badge draws a check's outcome as a coloured box with its word ("FAIL"
 // in white on red), readable in glare and by a screen reader; nothing for
 // a row that is not a check.
-func (r *Results) badge(gtx layout.Context, row resultRow) layout.Dimensions {
+func (r *Results) badge(gtx layout.Context, row *resultRow) layout.Dimensions {
 	word, bg := outcomeLook(r.env.Colors, row.outcome)
 	if word == "" {
 		return layout.Dimensions{}
 	}
-	return layout.Inset{Right: 8}.Layout(gtx, Described(row.label+" outcome", func(gtx layout.Context) layout.Dimensions {
-		return background(gtx, bg, bg, gtx.Dp(4), 0, func(gtx layout.Context) layout.Dimensions {
-			return layout.Inset{Left: 6, Right: 6, Top: 2, Bottom: 2}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-				l := material.Label(r.env.Theme, unit.Sp(14), word)
-				l.Color = r.env.Colors.OnBadge
-				l.Font.Weight = 700
-				return l.Layout(gtx)
+	if row.outcomeDesc == "" {
+		row.outcomeDesc = row.label + " outcome"
+	}
+	return layout.Inset{Right: 8}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		return describe(gtx, row.outcomeDesc, func(gtx layout.Context) layout.Dimensions {
+			return background(gtx, bg, bg, gtx.Dp(4), 0, func(gtx layout.Context) layout.Dimensions {
+				return layout.Inset{Left: 6, Right: 6, Top: 2, Bottom: 2}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					l := material.Label(r.env.Theme, unit.Sp(14), word)
+					l.Color = r.env.Colors.OnBadge
+					l.Font.Weight = 700
+					return l.Layout(gtx)
+				})
 			})
 		})
-	}))
+	})
 }
 
 // String lists the rows as "label: value" lines, each row's note on an

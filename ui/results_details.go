@@ -23,6 +23,11 @@ type resultDetails struct {
 	rows   []resultRow
 	open   bool
 	toggle widget.Clickable
+
+	// Kept between frames (see retain.go).
+	col           column
+	rule, toggleW layout.Widget
+	rowWs         indexed
 }
 
 // show fills the section from a result's Details.
@@ -54,16 +59,36 @@ func (r *Results) layoutDetails(gtx layout.Context) layout.Dimensions {
 	if d.toggle.Clicked(gtx) {
 		d.open = !d.open
 	}
-	th := r.env.Theme
-	c := r.env.Colors
-	rule := layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-		return layout.Inset{Left: 14, Right: 14}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			size := image.Pt(gtx.Constraints.Max.X, gtx.Dp(1))
-			fill(gtx, c.Divider, size)
-			return layout.Dimensions{Size: size}
-		})
+	if d.rule == nil {
+		d.rule = r.layoutDetailsRule
+		d.toggleW = r.layoutDetailsToggle
+		d.rowWs.draw = r.layoutDetailRow
+	}
+	d.col.reset()
+	d.col.add(d.rule)
+	d.col.add(d.toggleW)
+	if d.open {
+		d.col.add(d.rule)
+		for i := range d.rows {
+			d.col.add(d.rowWs.at(i))
+		}
+	}
+	return d.col.layout(gtx)
+}
+
+// layoutDetailsRule draws the hairline above and under the toggle.
+func (r *Results) layoutDetailsRule(gtx layout.Context) layout.Dimensions {
+	return layout.Inset{Left: 14, Right: 14}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		size := image.Pt(gtx.Constraints.Max.X, gtx.Dp(1))
+		fill(gtx, r.env.Colors.Divider, size)
+		return layout.Dimensions{Size: size}
 	})
-	children := []layout.FlexChild{rule, layout.Rigid(Described(detailsLabel, func(gtx layout.Context) layout.Dimensions {
+}
+
+// layoutDetailsToggle draws the row that opens and closes the section.
+func (r *Results) layoutDetailsToggle(gtx layout.Context) layout.Dimensions {
+	d := &r.details
+	return describe(gtx, detailsLabel, func(gtx layout.Context) layout.Dimensions {
 		return d.toggle.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 			gtx.Constraints.Min.X = gtx.Constraints.Max.X
 			gtx.Constraints.Min.Y = gtx.Dp(48)
@@ -74,21 +99,18 @@ func (r *Results) layoutDetails(gtx layout.Context) layout.Dimensions {
 				}
 				return layout.W.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 					gtx.Constraints.Min = image.Point{} // W keeps the row's height as a minimum
-					l := material.Label(th, unit.Sp(15), words)
-					l.Color = c.Accent
+					l := material.Label(r.env.Theme, unit.Sp(15), words)
+					l.Color = r.env.Colors.Accent
 					return l.Layout(gtx)
 				})
 			})
 		})
-	}))}
-	if d.open {
-		children = append(children, rule)
-		for i, row := range d.rows {
-			last := i == len(d.rows)-1
-			children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				return r.layoutRow(gtx, row, !last)
-			}))
-		}
-	}
-	return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
+	})
+}
+
+// layoutDetailRow draws detail row i, with a hairline under it unless it
+// is the last.
+func (r *Results) layoutDetailRow(gtx layout.Context, i int) layout.Dimensions {
+	d := &r.details
+	return r.layoutRow(gtx, &d.rows[i], i < len(d.rows)-1)
 }

@@ -43,6 +43,10 @@ type Leaver interface {
 type Page struct {
 	env  *Env
 	list widget.List
+	// joined is a list of children the page's owner may build into and
+	// reuse from frame to frame (see splitLayout); Page itself does not
+	// read it.
+	joined []layout.Widget
 }
 
 // NewPage returns an empty scrolling page.
@@ -92,33 +96,44 @@ func Heading(env *Env, text string) layout.Widget {
 
 // Para returns a paragraph of body text.
 func Para(env *Env, text string) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
-		l := material.Body1(env.Theme, text)
-		l.Color = env.Colors.Text
-		return l.Layout(gtx)
-	}
+	return func(gtx layout.Context) layout.Dimensions { return layoutPara(gtx, env, text) }
+}
+
+// layoutPara draws Para's paragraph without making a widget.
+func layoutPara(gtx layout.Context, env *Env, text string) layout.Dimensions {
+	l := material.Body1(env.Theme, text)
+	l.Color = env.Colors.Text
+	return l.Layout(gtx)
 }
 
 // Note returns a paragraph of small, muted text (assumptions, sources).
 func Note(env *Env, text string) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
-		l := material.Body2(env.Theme, text)
-		l.Color = env.Colors.Muted
-		return l.Layout(gtx)
-	}
+	return func(gtx layout.Context) layout.Dimensions { return layoutNote(gtx, env, text) }
+}
+
+// layoutNote draws Note's paragraph without making a widget.
+func layoutNote(gtx layout.Context, env *Env, text string) layout.Dimensions {
+	l := material.Body2(env.Theme, text)
+	l.Color = env.Colors.Muted
+	return l.Layout(gtx)
 }
 
 // Described wraps w in its own semantic node described by desc, so tests
 // and screen readers can find it: the node's Label is w's text and its
 // Description is desc (e.g. a result row's name).
 func Described(desc string, w layout.Widget) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
-		m := op.Record(gtx.Ops)
-		dims := w(gtx)
-		call := m.Stop()
-		defer clip.Rect{Max: dims.Size}.Push(gtx.Ops).Pop()
-		semantic.DescriptionOp(desc).Add(gtx.Ops)
-		call.Add(gtx.Ops)
-		return dims
-	}
+	return func(gtx layout.Context) layout.Dimensions { return describe(gtx, desc, w) }
+}
+
+// describe draws w in its own semantic node described by desc, as the
+// widget of Described does, without making a widget (and so without
+// allocating) in the frame.
+func describe(gtx layout.Context, desc string, w layout.Widget) layout.Dimensions {
+	m := op.Record(gtx.Ops)
+	dims := w(gtx)
+	call := m.Stop()
+	defer clip.Rect{Max: dims.Size}.Push(gtx.Ops).Pop()
+	semantic.DescriptionOp(desc).Add(gtx.Ops)
+	call.Add(gtx.Ops)
+	return dims
 }

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"gioui.org/layout"
+	"gioui.org/widget/material"
 
 	"tubewright/calc/linear"
 	"tubewright/calc/units"
@@ -21,6 +22,16 @@ type sizePair struct {
 	words       [2]string // the whole and the half in the line under the field
 	choice      *Choice
 	seen        [2]string // the texts at the end of the last frame
+
+	// Kept for drawing (see widgets): the widgets, their descriptions and
+	// the line with both sizes, written again only when the text or the
+	// form shown changes.
+	ws                  [3]layout.Widget
+	form                *Form
+	chipsDesc, bothDesc string
+	line                string
+	lineOK, lineHalf    bool
+	lineText            string
 }
 
 // newSizePair returns the pair of inputs whole and half of f, typed whole
@@ -100,22 +111,41 @@ func (p *sizePair) settle(f *Form) {
 	p.seen = [2]string{f.Text(p.whole), f.Text(p.half)}
 }
 
-// widgets are the chips, the field shown and the line with both sizes.
+// widgets are the chips, the field shown and the line with both sizes;
+// f is the form the pair was made with. The slice is the pair's own.
 func (p *sizePair) widgets(f *Form) []layout.Widget {
-	label := f.Sheet.Input(p.whole).Label
-	return []layout.Widget{
-		Described("Size of "+label+" given as", p.choice.Layout),
-		f.InputWidget(p.key()),
-		func(gtx layout.Context) layout.Dimensions {
-			q, err := units.Parse(f.Text(p.key()), units.DimLength)
-			if err != nil || !(q.Value > 0) {
-				return layout.Dimensions{}
-			}
+	if p.ws[0] == nil {
+		label := f.Sheet.Input(p.whole).Label
+		p.form, p.chipsDesc, p.bothDesc = f, "Size of "+label+" given as", "Both sizes of "+label
+		p.ws[0], p.ws[2] = p.layoutChips, p.layoutBoth
+	}
+	p.ws[1] = f.InputWidget(p.key())
+	return p.ws[:]
+}
+
+// layoutChips draws the chips that choose the whole or the half.
+func (p *sizePair) layoutChips(gtx layout.Context) layout.Dimensions {
+	return describe(gtx, p.chipsDesc, p.choice.Layout)
+}
+
+// layoutBoth draws the line with both sizes, or nothing while the text is
+// not a positive length.
+func (p *sizePair) layoutBoth(gtx layout.Context) layout.Dimensions {
+	text, half := p.form.Text(p.key()), p.halfShown()
+	if !p.lineOK || text != p.lineText || half != p.lineHalf {
+		p.lineOK, p.lineText, p.lineHalf, p.line = true, text, half, ""
+		if q, err := units.Parse(text, units.DimLength); err == nil && q.Value > 0 {
 			w := q.Value
-			if p.halfShown() {
+			if half {
 				w *= 2
 			}
-			return Described("Both sizes of "+label, Note(p.env, p.words[0]+" "+lengthWords(w)+" ("+p.words[1]+" "+lengthWords(w/2)+")"))(gtx)
-		},
+			p.line = p.words[0] + " " + lengthWords(w) + " (" + p.words[1] + " " + lengthWords(w/2) + ")"
+		}
 	}
+	if p.line == "" {
+		return layout.Dimensions{}
+	}
+	l := material.Body2(p.env.Theme, p.line)
+	l.Color = p.env.Colors.Muted
+	return describe(gtx, p.bothDesc, l.Layout)
 }

@@ -28,9 +28,9 @@ func splitWide(gtx layout.Context) bool {
 // hold the scroll positions).
 func splitLayout(gtx layout.Context, left, right *Page, top, inputs, outputs []layout.Widget) layout.Dimensions {
 	if !splitWide(gtx) {
-		all := make([]layout.Widget, 0, len(top)+len(inputs)+len(outputs))
-		all = append(append(append(all, top...), inputs...), outputs...)
-		return left.Layout(gtx, all...)
+		// The joined list reuses the page's own slice from frame to frame.
+		left.joined = append(append(append(left.joined[:0], top...), inputs...), outputs...)
+		return left.Layout(gtx, left.joined...)
 	}
 	gtx.Constraints.Min = gtx.Constraints.Max
 	return layout.Flex{}.Layout(gtx,
@@ -41,7 +41,8 @@ func splitLayout(gtx layout.Context, left, right *Page, top, inputs, outputs []l
 		layout.Rigid(layout.Spacer{Width: splitGap}.Layout),
 		layout.Flexed(0.54, func(gtx layout.Context) layout.Dimensions {
 			gtx.Constraints.Min = gtx.Constraints.Max
-			return right.Layout(gtx, append(append([]layout.Widget{}, top...), outputs...)...)
+			right.joined = append(append(right.joined[:0], top...), outputs...)
+			return right.Layout(gtx, right.joined...)
 		}),
 	)
 }
