@@ -76,6 +76,16 @@ func (v *deviceView) operatingPoint() string {
 	if res == nil || v.dev == nil {
 		return ""
 	}
+	// A new result or device is a new value: the line is written once for
+	// each pair.
+	if !v.pointDone || res != v.pointRes || v.dev != v.pointDev {
+		v.pointDone, v.pointRes, v.pointDev, v.point = true, res, v.dev, v.writePoint(res)
+	}
+	return v.point
+}
+
+// writePoint writes the operating-point line of result res.
+func (v *deviceView) writePoint(res *sheet.Result) string {
 	vals := []string{v.dev.Gas.String(), writtenIn(v.dev.MeanPressure, units.DimPressure)[0],
 		writtenIn(v.dev.AmbientTemperature, units.DimTemperature)[0] + " ambient"}
 	how := "gas, fill and ambient as set under Operating conditions"

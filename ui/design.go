@@ -33,6 +33,15 @@ type designScreen struct {
 	pump  bool   // the design shown is a heat pump
 
 	cancel, again, open widget.Clickable
+
+	// Kept between frames (see retain.go and design_view.go): the
+	// widgets bound once, the sensitivity lines as text, and the slices
+	// of children.
+	w                                   designWidgets
+	sensText                            [][2]string // onset and frequency change of each line of sens
+	sensRows                            indexed
+	sensCol                             column
+	top, ins, adv, outTop, details, all []layout.Widget
 }
 
 // Keys of the design description's inputs and rows the screen places
@@ -142,6 +151,10 @@ func (s *designScreen) show(r *sheet.Result) {
 	}
 	s.pump = r.Values != nil && r.Values.PickKey(designKeyFor) == "heat-pump"
 	s.sens = sheet.DesignSensitivity(r)
+	s.sensText = s.sensText[:0]
+	for _, l := range s.sens {
+		s.sensText = append(s.sensText, [2]string{signed(l.Onset.Value, 2, "K"), signed(l.Frequency.Value, 3, "Hz")})
+	}
 	inTable := map[string]bool{}
 	for _, l := range s.sens {
 		inTable[l.Onset.Key], inTable[l.Frequency.Key] = true, true
@@ -215,20 +228,22 @@ func (s *designScreen) state() designState {
 // the parts, the sensitivity table and the method.
 func (s *designScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	intro := Para(s.env, "Say what you want and what you have; the design runs in the background after every change. "+
-		"It places and sizes the stack for the lowest onset and tunes the tube to your frequency.")
-	top, details := s.outcome()
-	heading := "The design"
-	if s.fail {
-		heading = "Nearest design"
+	if s.w.intro == nil {
+		s.bindWidgets()
 	}
-	top = append([]layout.Widget{Heading(s.env, heading)}, top...)
-	inputs := append([]layout.Widget{Heading(s.env, "What you want")}, s.inputs()...)
+	outcome, details := s.outcome()
+	heading := s.w.headDesign
+	if s.fail {
+		heading = s.w.headNearest
+	}
+	s.top, s.all = s.top[:0], s.all[:0]
 	if splitWide(gtx) {
 		// Beside the design, the intro leads the inputs it is about.
-		inputs = append([]layout.Widget{intro}, inputs...)
+		s.all = append(s.all, s.w.intro)
 	} else {
-		top = append([]layout.Widget{intro}, top...)
+		s.top = append(s.top, s.w.intro)
 	}
-	return splitLayout(gtx, s.page, s.side, top, inputs, details)
+	s.top = append(append(s.top, heading), outcome...)
+	s.all = append(append(s.all, s.w.wantHead), s.inputs()...)
+	return splitLayout(gtx, s.page, s.side, s.top, s.all, details)
 }

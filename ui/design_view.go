@@ -9,13 +9,61 @@ import (
 	"gioui.org/widget/material"
 )
 
+// designWidgets are the design screen's widgets, bound once
+// (bindWidgets); they read the screen when drawn.
+type designWidgets struct {
+	intro, headDesign, headNearest, wantHead, limitsHead layout.Widget
+	cancelled, again, results, failPara, point, head     layout.Widget
+	strip, pumpNote, open, caution, partsEngine          layout.Widget
+	partsPump, parts, sensHead, sensNote, sens, howHead  layout.Widget
+	about, progress                                      layout.Widget
+	methods                                              indexed
+}
+
+// bindWidgets makes the screen's widgets once.
+func (s *designScreen) bindWidgets() {
+	env := s.env
+	s.w = designWidgets{
+		intro: Para(env, "Say what you want and what you have; the design runs in the background after every change. "+
+			"It places and sizes the stack for the lowest onset and tunes the tube to your frequency."),
+		headDesign: Heading(env, "The design"), headNearest: Heading(env, "Nearest design"),
+		wantHead: Heading(env, "What you want"), limitsHead: Heading(env, "Limits and details (optional)"),
+		cancelled: Described("design status", Note(env, capitalize(errCancelled.Error())+".")),
+		again: func(gtx layout.Context) layout.Dimensions {
+			gtx.Constraints.Min.X = 0
+			return smallButton(env, gtx, &s.again, "Design again")
+		},
+		results:  s.form.Results.Layout,
+		failPara: Para(env, "The target is out of reach. Below is the nearest design found, with what it misses by."),
+		point:    s.form.PointWidget, head: s.head.Layout, strip: s.strip.Layout,
+		pumpNote: Note(env, "Build it in the Heat pump editor part by part from the sizes below, driver first."),
+		open: func(gtx layout.Context) layout.Dimensions {
+			return material.Button(env.Theme, &s.open, "Open in Engine onset").Layout(atTarget(gtx))
+		},
+		caution:     s.form.CautionWidget,
+		partsEngine: Heading(env, "Parts, from the closed end"), partsPump: Heading(env, "Parts, from the driver"),
+		parts:    s.parts.Layout,
+		sensHead: Heading(env, "What moves the onset"),
+		sensNote: Note(env, "How the built engine's onset temperature and frequency change for one step of each quantity, the others held as stated."),
+		sens:     s.sensitivityTable, howHead: Heading(env, "How it was designed"),
+		about: Note(env, s.form.Sheet.About), progress: s.progressCard,
+	}
+	s.w.methods.draw = func(gtx layout.Context, i int) layout.Dimensions {
+		return describe(gtx, "Method", func(gtx layout.Context) layout.Dimensions {
+			return layoutNote(gtx, env, s.form.Result().Notes[i])
+		})
+	}
+}
+
 // inputs returns the input widgets the chosen kind of design reads, the
 // optional limits last under their own heading. The device-file name is
 // the terminal's: on screen the design opens in the onset editor instead.
+// The slice is the screen's own, valid until the next call.
 func (s *designScreen) inputs() []layout.Widget {
 	kind := s.form.Text(designKeyFor)
-	var main, adv []layout.Widget
-	for _, in := range s.form.Sheet.Inputs {
+	s.ins, s.adv = s.ins[:0], s.adv[:0]
+	for i := range s.form.Sheet.Inputs {
+		in := &s.form.Sheet.Inputs[i]
 		if in.Key == designKeyDeviceOut {
 			continue
 		}
@@ -24,66 +72,60 @@ func (s *designScreen) inputs() []layout.Widget {
 		}
 		w := s.form.InputWidget(in.Key)
 		if in.Advanced {
-			adv = append(adv, w)
+			s.adv = append(s.adv, w)
 		} else {
-			main = append(main, w)
+			s.ins = append(s.ins, w)
 		}
 	}
-	if len(adv) > 0 {
-		main = append(main, Heading(s.env, "Limits and details (optional)"))
-		main = append(main, adv...)
+	if len(s.adv) > 0 {
+		s.ins = append(s.ins, s.w.limitsHead)
+		s.ins = append(s.ins, s.adv...)
 	}
-	return main
+	return s.ins
 }
 
 // outcome returns what the screen shows above the inputs (the progress,
 // the cancelled note, the Form's failure, or the design's summary, its
 // cautions, the device and the button that opens it) and below them (the
-// parts, the sensitivity table and the method).
+// parts, the sensitivity table and the method). The slices are the
+// screen's own, valid until the next call.
 func (s *designScreen) outcome() (top, details []layout.Widget) {
+	w := &s.w
+	s.outTop, s.details = s.outTop[:0], s.details[:0]
 	switch s.state() {
 	case designBusy:
-		return []layout.Widget{s.progressCard}, nil
+		return append(s.outTop, w.progress), nil
 	case designCancelled:
-		return []layout.Widget{
-			Described("design status", Note(s.env, capitalize(errCancelled.Error())+".")),
-			func(gtx layout.Context) layout.Dimensions {
-				gtx.Constraints.Min.X = 0
-				return smallButton(s.env, gtx, &s.again, "Design again")
-			},
-		}, nil
+		return append(s.outTop, w.cancelled, w.again), nil
 	case designIdle:
-		return []layout.Widget{s.form.Results.Layout}, nil
+		return append(s.outTop, w.results), nil
 	}
 	if s.fail {
-		top = append(top, Para(s.env, "The target is out of reach. Below is the nearest design found, with what it misses by."))
+		s.outTop = append(s.outTop, w.failPara)
 	}
-	top = append(top, s.form.PointWidget, s.head.Layout, s.strip.Layout)
+	s.outTop = append(s.outTop, w.point, w.head, w.strip)
 	if s.pump {
-		top = append(top, Note(s.env, "Build it in the Heat pump editor part by part from the sizes below, driver first."))
+		s.outTop = append(s.outTop, w.pumpNote)
 	} else {
-		top = append(top, func(gtx layout.Context) layout.Dimensions {
-			return material.Button(s.env.Theme, &s.open, "Open in Engine onset").Layout(atTarget(gtx))
-		})
+		s.outTop = append(s.outTop, w.open)
 	}
-	top = append(top, s.form.CautionWidget)
-	from := "closed end"
+	s.outTop = append(s.outTop, w.caution)
+	partsHead := w.partsEngine
 	if s.pump {
-		from = "driver"
+		partsHead = w.partsPump
 	}
-	details = append(details, Heading(s.env, "Parts, from the "+from), s.parts.Layout)
+	s.details = append(s.details, partsHead, w.parts)
 	if len(s.sens) > 0 {
-		details = append(details, Heading(s.env, "What moves the onset"),
-			Note(s.env, "How the built engine's onset temperature and frequency change for one step of each quantity, the others held as stated."),
-			s.sensitivityTable)
+		s.details = append(s.details, w.sensHead, w.sensNote, w.sens)
 	}
-	details = append(details, Heading(s.env, "How it was designed"))
+	s.details = append(s.details, w.howHead)
 	if r := s.form.Result(); r != nil {
-		for _, n := range r.Notes {
-			details = append(details, Described("Method", Note(s.env, n)))
+		for i := range r.Notes {
+			s.details = append(s.details, w.methods.at(i))
 		}
 	}
-	return top, append(details, Note(s.env, s.form.Sheet.About))
+	s.details = append(s.details, w.about)
+	return s.outTop, s.details
 }
 
 // progressCard shows the running design's solves with a bar and Cancel.
@@ -122,21 +164,26 @@ func (s *designScreen) progressCard(gtx layout.Context) layout.Dimensions {
 func (s *designScreen) sensitivityTable(gtx layout.Context) layout.Dimensions {
 	c := s.env.Colors
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
-	lines := make([]layout.FlexChild, 0, 1+len(s.sens))
-	lines = append(lines, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-		return s.tableRow(gtx, "One step more of", "Onset", "Frequency", true, "", "")
-	}))
-	for _, l := range s.sens {
-		on, fr := signed(l.Onset.Value, 2, "K"), signed(l.Frequency.Value, 3, "Hz")
-		lines = append(lines, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-			return s.tableRow(gtx, l.Change, on, fr, false, l.Onset.Label, l.Frequency.Label)
-		}))
+	if s.sensRows.draw == nil {
+		s.sensRows.draw = s.sensitivityRow
+	}
+	s.sensCol.reset()
+	for i := 0; i <= len(s.sens); i++ {
+		s.sensCol.add(s.sensRows.at(i))
 	}
 	return background(gtx, c.Surface, c.Divider, gtx.Dp(8), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-		return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, lines...)
-		})
+		return layout.Inset{Top: 4, Bottom: 4}.Layout(gtx, s.sensCol.layout)
 	})
+}
+
+// sensitivityRow draws row i of the sensitivity table: the header, then
+// line i-1 of the sensitivity.
+func (s *designScreen) sensitivityRow(gtx layout.Context, i int) layout.Dimensions {
+	if i == 0 {
+		return s.tableRow(gtx, "One step more of", "Onset", "Frequency", true, "", "")
+	}
+	l, t := s.sens[i-1], s.sensText[i-1]
+	return s.tableRow(gtx, l.Change, t[0], t[1], false, l.Onset.Label, l.Frequency.Label)
 }
 
 // tableRow draws one line of the sensitivity table; the values carry the
@@ -157,7 +204,7 @@ func (s *designScreen) tableRow(gtx layout.Context, change, onset, freq string, 
 			if desc == "" {
 				return l.Layout(gtx)
 			}
-			return Described(desc, l.Layout)(gtx)
+			return describe(gtx, desc, l.Layout)
 		}
 	}
 	return layout.Inset{Left: 14, Right: 14, Top: 7, Bottom: 7}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {

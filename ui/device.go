@@ -38,6 +38,20 @@ type deviceEditor struct {
 	strip    *deviceStrip
 	saved    deviceFile
 	undo     *editorUndo // the Remove or Open that Undo takes back, or nil
+
+	// Kept between frames (see retain.go): the widgets bound once
+	// (bindWidgets), the conditions' widgets for the gas picker shown,
+	// and the slice Layout returns.
+	w       deviceEditorWidgets
+	condFor *GasPicker
+	condWs  []layout.Widget
+	ws      []layout.Widget
+}
+
+// deviceEditorWidgets are the device editor's widgets, bound once.
+type deviceEditorWidgets struct {
+	strip, legend, partsHead, removed, addKind, add layout.Widget
+	parts                                           indexed
 }
 
 // kindLabels are the part kinds as people read them, in linear.Kinds order.
@@ -258,51 +272,65 @@ func defaultPart(kind, diameter string) linear.PartFile {
 }
 
 // Layout draws the editor: the save buttons, the strip, the parts and the
-// add row (the gas and fill fields are Conditions).
+// add row (the gas and fill fields are Conditions). The slice is the
+// editor's own, valid until the next call.
 func (e *deviceEditor) Layout(gtx layout.Context, dev *linear.Device) []layout.Widget {
 	e.strip.dev = dev
-	th := e.env.Theme
-	ws := e.saved.widgets(e.env)
-	ws = append(ws,
-		e.strip.Layout,
-		func(gtx layout.Context) layout.Dimensions {
-			if dev == nil || len(dev.Parts) == 0 {
-				return layout.Dimensions{}
-			}
-			return Note(e.env, stripLegend)(gtx)
-		},
-		Heading(e.env, "Parts, from the start end"),
-	)
+	if e.w.strip == nil {
+		e.bindWidgets()
+	}
+	e.ws = append(append(e.ws[:0], e.saved.widgets(e.env)...), e.w.strip, e.w.legend, e.w.partsHead)
 	removedAt := -1
 	if e.undo != nil && e.undo.part != nil {
 		removedAt = min(e.undo.at, len(e.parts))
 	}
 	for i := range e.parts {
 		if i == removedAt {
-			ws = append(ws, e.removedBar)
+			e.ws = append(e.ws, e.w.removed)
 		}
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return e.parts[i].layout(gtx, i, e.selected == i)
-		})
+		e.ws = append(e.ws, e.w.parts.at(i))
 	}
 	if removedAt == len(e.parts) {
-		ws = append(ws, e.removedBar)
+		e.ws = append(e.ws, e.w.removed)
 	}
-	ws = append(ws,
-		e.addKind.Layout,
-		func(gtx layout.Context) layout.Dimensions {
-			b := material.Button(th, &e.add, "Add part")
+	e.ws = append(e.ws, e.w.addKind, e.w.add)
+	return e.ws
+}
+
+// bindWidgets makes the editor's widgets once; they read the editor when
+// drawn.
+func (e *deviceEditor) bindWidgets() {
+	e.w = deviceEditorWidgets{
+		strip: e.strip.Layout,
+		legend: func(gtx layout.Context) layout.Dimensions {
+			if dev := e.strip.dev; dev == nil || len(dev.Parts) == 0 {
+				return layout.Dimensions{}
+			}
+			return layoutNote(gtx, e.env, stripLegend)
+		},
+		partsHead: Heading(e.env, "Parts, from the start end"),
+		removed:   e.removedBar,
+		addKind:   e.addKind.Layout,
+		add: func(gtx layout.Context) layout.Dimensions {
+			b := material.Button(e.env.Theme, &e.add, "Add part")
 			return b.Layout(atTarget(gtx))
 		},
-	)
-	return ws
+	}
+	e.w.parts.draw = func(gtx layout.Context, i int) layout.Dimensions {
+		return e.parts[i].layout(gtx, i, e.selected == i)
+	}
 }
 
 // Conditions returns the fields of the gas and the fill (mean pressure,
 // ambient temperature), which the screens show above the parts, with the
-// other operating conditions.
+// other operating conditions. The slice is made again only when the gas
+// picker is replaced.
 func (e *deviceEditor) Conditions() []layout.Widget {
-	return []layout.Widget{e.gas.Layout, e.pressure.Layout, e.ambient.Layout}
+	if e.condFor != e.gas || e.condWs == nil {
+		e.condFor = e.gas
+		e.condWs = []layout.Widget{e.gas.Layout, e.pressure.Layout, e.ambient.Layout}
+	}
+	return e.condWs
 }
 
 // stripLegend says what the strip's shapes and colours mean (see

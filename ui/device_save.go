@@ -49,6 +49,12 @@ type deviceFile struct {
 	statusLive bool
 	local      string // the editor's own message
 	localBad   bool
+
+	// Kept between frames (see retain.go): the widgets bound once, the
+	// slice widgets returns and the name line.
+	ws                       []layout.Widget
+	nameW, buttonsW, statusW layout.Widget
+	nameLine                 joined
 }
 
 // defaultDevicePath is the file an earlier version kept an example's
@@ -245,26 +251,39 @@ func (f *deviceFile) widgets(env *Env) []layout.Widget {
 	if e == nil {
 		return nil
 	}
-	ws := []layout.Widget{func(gtx layout.Context) layout.Dimensions {
-		name := e.name
+	if f.nameW == nil {
+		f.bindWidgets(env)
+	}
+	f.ws = append(f.ws[:0], f.nameW)
+	if !f.shown {
+		f.ws = append(f.ws, f.buttonsW, f.statusW)
+	} else {
+		f.ws = append(f.ws, f.panel(env, e)...)
+	}
+	return f.ws
+}
+
+// bindWidgets makes the widgets of the device's name, the buttons and the
+// message once.
+func (f *deviceFile) bindWidgets(env *Env) {
+	f.nameW = func(gtx layout.Context) layout.Dimensions {
+		name := f.editor.name
 		if name == "" {
 			name = "not named yet"
 		}
-		return Described("Device shown", Note(env, "Device: "+name))(gtx)
-	}}
-	if !f.shown {
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepFlow(gtx,
-				func(gtx layout.Context) layout.Dimensions {
-					return keepButton(env, gtx, &f.saveAs, "Save device as…", true)
-				},
-				func(gtx layout.Context) layout.Dimensions {
-					return keepButton(env, gtx, &f.openList, "Open a saved device…", false)
-				})
-		})
-		return append(ws, func(gtx layout.Context) layout.Dimensions { return f.layoutStatus(gtx, env) })
+		text := f.nameLine.of("Device: ", name)
+		return describe(gtx, "Device shown", func(gtx layout.Context) layout.Dimensions { return layoutNote(gtx, env, text) })
 	}
-	return append(ws, f.panel(env, e)...)
+	f.buttonsW = func(gtx layout.Context) layout.Dimensions {
+		return keepFlow(gtx,
+			func(gtx layout.Context) layout.Dimensions {
+				return keepButton(env, gtx, &f.saveAs, "Save device as…", true)
+			},
+			func(gtx layout.Context) layout.Dimensions {
+				return keepButton(env, gtx, &f.openList, "Open a saved device…", false)
+			})
+	}
+	f.statusW = func(gtx layout.Context) layout.Dimensions { return f.layoutStatus(gtx, env) }
 }
 
 // panel lists the saved devices under the name field and Save device.

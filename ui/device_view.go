@@ -28,6 +28,36 @@ type deviceView struct {
 	plots  []*Plot
 	job    *Job[*deviceTables]
 	status string
+
+	// Kept between frames (see retain.go): the columns' widgets, bound
+	// for the intro and heading they were made for, the slices columns
+	// returns, and the operating-point line with what it was written
+	// from.
+	cols      deviceColumns
+	point     string
+	pointRes  *sheet.Result
+	pointDev  *linear.Device
+	pointDone bool
+}
+
+// deviceColumns are the widgets of a device screen's columns.
+type deviceColumns struct {
+	intro, heading                         string
+	introW, headW, condHead, devHead, card layout.Widget
+	caution                                layout.Widget
+	top, inputs                            []layout.Widget
+	// outs is the screen's own results column, made once (see
+	// outputs).
+	outs []layout.Widget
+}
+
+// outputs returns the screen's own widgets of the results column, made by
+// make on the first call and kept.
+func (v *deviceView) outputs(make func() []layout.Widget) []layout.Widget {
+	if v.cols.outs == nil {
+		v.cols.outs = make()
+	}
+	return v.cols.outs
 }
 
 // deviceTables are the tables a screen's plots are drawn from.
@@ -175,19 +205,28 @@ func evaluateWith(ctx context.Context, s *sheet.Sheet, texts map[string]string, 
 // how to build the device, leads the inputs beside the results on wide
 // windows and the whole page on a phone.
 func (v *deviceView) columns(gtx layout.Context, intro, heading string, keys ...string) (top, inputs []layout.Widget) {
-	top = []layout.Widget{Heading(v.env, heading), v.form.resultCard, v.form.CautionWidget}
+	c := &v.cols
+	if c.introW == nil || c.intro != intro || c.heading != heading {
+		c.intro, c.heading = intro, heading
+		c.introW, c.headW = Para(v.env, intro), Heading(v.env, heading)
+		c.condHead, c.devHead = Heading(v.env, "Operating conditions"), Heading(v.env, "The device")
+		c.card, c.caution = v.form.resultCard, v.form.CautionWidget
+	}
+	c.top, c.inputs = c.top[:0], c.inputs[:0]
 	if splitWide(gtx) {
-		inputs = append(inputs, Para(v.env, intro))
+		c.inputs = append(c.inputs, c.introW)
 	} else {
-		top = append([]layout.Widget{Para(v.env, intro)}, top...)
+		c.top = append(c.top, c.introW)
 	}
-	inputs = append(inputs, Heading(v.env, "Operating conditions"))
-	inputs = append(inputs, v.editor.Conditions()...)
+	c.top = append(c.top, c.headW, c.card, c.caution)
+	c.inputs = append(c.inputs, c.condHead)
+	c.inputs = append(c.inputs, v.editor.Conditions()...)
 	for _, k := range keys {
-		inputs = append(inputs, v.form.InputWidget(k))
+		c.inputs = append(c.inputs, v.form.InputWidget(k))
 	}
-	inputs = append(inputs, Heading(v.env, "The device"), v.form.InputWidget(keyExample))
-	return top, append(inputs, v.editor.Layout(gtx, v.dev)...)
+	c.inputs = append(c.inputs, c.devHead, v.form.InputWidget(keyExample))
+	c.inputs = append(c.inputs, v.editor.Layout(gtx, v.dev)...)
+	return c.top, c.inputs
 }
 
 // statusLine shows what runs in the background, or nothing.
@@ -195,7 +234,7 @@ func (v *deviceView) statusLine(gtx layout.Context) layout.Dimensions {
 	if v.status == "" {
 		return layout.Dimensions{}
 	}
-	return Note(v.env, v.status)(gtx)
+	return layoutNote(gtx, v.env, v.status)
 }
 
 // tableXY returns columns x and y of t as points.

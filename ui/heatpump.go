@@ -73,8 +73,10 @@ func (s *heatPumpScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.begin(gtx, pumpTables, s.showPlots)
 	top, inputs := s.columns(gtx, "Build the heat pump from parts, driver first; mark the stack's cold side \"cold\". The span is solved with Rott's linear theory and the total-power equation through the stack after every change.",
 		"Heat pump", "load", "frequency")
-	ws := []layout.Widget{Heading(s.env, "Along the device"), s.statusLine, s.plots[0].Layout, s.plots[1].Layout, s.plots[2].Layout}
-	ws = append(ws, Heading(s.env, "Best drive frequency"), s.plots[3].Layout)
-	ws = append(ws, Note(s.env, s.form.Sheet.About))
+	ws := s.outputs(func() []layout.Widget {
+		ws := []layout.Widget{Heading(s.env, "Along the device"), s.statusLine, s.plots[0].Layout, s.plots[1].Layout, s.plots[2].Layout}
+		ws = append(ws, Heading(s.env, "Best drive frequency"), s.plots[3].Layout)
+		return append(ws, Note(s.env, s.form.Sheet.About))
+	})
 	return splitLayout(gtx, s.page, s.side, top, inputs, ws)
 }

@@ -154,12 +154,14 @@ func (s *onsetScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.begin(gtx, onsetTables, s.showPlots)
 	top, inputs := s.columns(gtx, "Build the engine from parts, closed end first. The hot temperature and frequency at which it starts are solved with Rott's linear theory after every change.",
 		"Onset", "hot", "frequency-guess")
-	ws := []layout.Widget{Heading(s.env, "Along the device"), s.statusLine}
-	for _, p := range s.plots[:4] {
-		ws = append(ws, p.Layout)
-	}
-	ws = append(ws, Note(s.env, "Profiles for |p1| = 1 Pa at the start end: the linear theory fixes shapes, not amplitudes. With a hot temperature typed, they are the nearest mode's at that temperature."))
-	ws = append(ws, Heading(s.env, "Onset and fill pressure"), s.plots[4].Layout)
-	ws = append(ws, Note(s.env, s.form.Sheet.About))
+	ws := s.outputs(func() []layout.Widget {
+		ws := []layout.Widget{Heading(s.env, "Along the device"), s.statusLine}
+		for _, p := range s.plots[:4] {
+			ws = append(ws, p.Layout)
+		}
+		ws = append(ws, Note(s.env, "Profiles for |p1| = 1 Pa at the start end: the linear theory fixes shapes, not amplitudes. With a hot temperature typed, they are the nearest mode's at that temperature."))
+		ws = append(ws, Heading(s.env, "Onset and fill pressure"), s.plots[4].Layout)
+		return append(ws, Note(s.env, s.form.Sheet.About))
+	})
 	return splitLayout(gtx, s.page, s.side, top, inputs, ws)
 }

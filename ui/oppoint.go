@@ -222,16 +222,3 @@ func (f *Form) resultCard(gtx layout.Context) layout.Dimensions {
 		layout.Rigid(f.Results.Layout),
 	)
 }
-
-// withPoint draws the headline w with the Form's operating point under it;
-// the results card then leaves the point out.
-func withPoint(f *Form, w layout.Widget) layout.Widget {
-	f.cs.headed = true
-	return func(gtx layout.Context) layout.Dimensions {
-		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
-			layout.Rigid(w),
-			layout.Rigid(layout.Spacer{Height: 4}.Layout),
-			layout.Rigid(f.PointWidget),
-		)
-	}
-}

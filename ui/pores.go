@@ -29,6 +29,38 @@ type poresScreen struct {
 	// halves says, by shape, whether its sizes are typed whole (a gap, a
 	// diameter) or as their half (a half gap, a radius).
 	halves map[string]*Choice
+
+	// Kept between frames (see retain.go): the geometry keys, the keys
+	// shown (made again only when the choices change), the widgets bound
+	// once and the slices of children.
+	geoKeys    []string
+	shownKeys  []string
+	shownFor   poreShownKey
+	shownOK    bool
+	geoHead    layout.Widget
+	packingW   layout.Widget
+	halvesWs   map[string]layout.Widget
+	gasWs      []layout.Widget
+	bothWs     map[string]*poreBoth
+	ws, joined []layout.Widget
+}
+
+// poreShownKey is what the geometry inputs shown depend on.
+type poreShownKey struct {
+	shape, packing, material string
+	half                     bool
+}
+
+// poreBoth is the line under one size (see both), bound once and written
+// again only when the text changes.
+type poreBoth struct {
+	s         *poresScreen
+	key, desc string
+	w         layout.Widget
+	ok        bool
+	text      string
+	shape     string
+	line      string
 }
 
 // newPoresScreen builds the pores-and-packing screen.
@@ -39,6 +71,18 @@ func newPoresScreen(env *Env) Screen {
 		halves:  map[string]*Choice{}}
 	for shape, chips := range poreHalfChips {
 		s.halves[shape] = NewChoice(env, "Sizes given as", []string{sizeWhole, sizeHalf}, chips[:])
+	}
+	s.geoKeys = poreGeometryKeys(d)
+	s.geoHead = Heading(env, "Geometry")
+	s.gasWs = []layout.Widget{Heading(env, "Gas and operating point")}
+	for _, key := range []string{"gas", "temperature", "pressure", "frequency", "non-ideal"} {
+		s.gasWs = append(s.gasWs, s.form.InputWidget(key))
+	}
+	s.bothWs = map[string]*poreBoth{}
+	s.packingW = s.packing.Layout
+	s.halvesWs = map[string]layout.Widget{}
+	for shape, c := range s.halves {
+		s.halvesWs[shape] = c.Layout
 	}
 	s.sync()
 	return s
@@ -67,7 +111,7 @@ func (s *poresScreen) sync() bool {
 	}
 	shown := s.shown()
 	changed := false
-	for _, key := range poreGeometryKeys(s.form.Sheet) {
+	for _, key := range s.geoKeys {
 		in := s.form.Sheet.Input(key)
 		empty := in.Default // a choice is emptied back to its default
 		text := s.form.Text(key)
@@ -91,10 +135,16 @@ func (s *poresScreen) half(shape string) bool {
 	return c != nil && c.Selected() == sizeHalf
 }
 
-// shown lists the geometry inputs shown for the current choices.
+// shown lists the geometry inputs shown for the current choices. The list
+// is made again only when the choices change, and never changed in place.
 func (s *poresScreen) shown() []string {
 	shape := s.form.Text("shape")
-	return poreFieldsShown(shape, s.packing.Selected(), s.form.Text("material"), s.half(shape))
+	key := poreShownKey{shape: shape, packing: s.packing.Selected(), material: s.form.Text("material"), half: s.half(shape)}
+	if !s.shownOK || key != s.shownFor {
+		s.shownOK, s.shownFor = true, key
+		s.shownKeys = poreFieldsShown(key.shape, key.packing, key.material, key.half)
+	}
+	return s.shownKeys
 }
 
 // switchHalves converts the sizes of shape to the form just chosen (a gap
@@ -124,28 +174,51 @@ func (s *poresScreen) switchHalves(gtx layout.Context, shape string) bool {
 
 // both is the line under a size: the whole and the half together, "gap
 // 2y0 = 0.5 mm (half gap y0 = 0.25 mm)"; empty when the text does not read.
-func (s *poresScreen) both(shape, key string) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
-		for _, p := range poreHalves[shape] {
-			if key != p.whole && key != p.half {
-				continue
-			}
-			q, err := units.Parse(s.form.Text(key), units.DimLength)
-			if err != nil || !(q.Value > 0) || q.Uncertainty != 0 {
-				return layout.Dimensions{}
-			}
-			w := q.Value
-			if key == p.half {
-				w *= 2
-			}
-			text := p.wholeWords + " " + lengthWords(w) + " (" + p.halfWords + " " + lengthWords(w/2) + ")"
-			if shape == "plates" {
-				text = linear.GapWords(w / 2)
-			}
-			return Described("Both sizes of "+key, Note(s.env, text))(gtx)
-		}
+// The widget is made once per key and kept.
+func (s *poresScreen) both(key string) layout.Widget {
+	b := s.bothWs[key]
+	if b == nil {
+		b = &poreBoth{s: s, key: key, desc: "Both sizes of " + key}
+		b.w = b.layout
+		s.bothWs[key] = b
+	}
+	return b.w
+}
+
+// layout draws the line, written again only when the text or the shape
+// changed.
+func (b *poreBoth) layout(gtx layout.Context) layout.Dimensions {
+	shape, text := b.s.form.Text("shape"), b.s.form.Text(b.key)
+	if !b.ok || shape != b.shape || text != b.text {
+		b.ok, b.shape, b.text, b.line = true, shape, text, poreBothLine(shape, b.key, text)
+	}
+	if b.line == "" {
 		return layout.Dimensions{}
 	}
+	return describe(gtx, b.desc, func(gtx layout.Context) layout.Dimensions { return layoutNote(gtx, b.s.env, b.line) })
+}
+
+// poreBothLine writes the line under size key of shape typed as text; ""
+// when the text does not read as one positive length.
+func poreBothLine(shape, key, text string) string {
+	for _, p := range poreHalves[shape] {
+		if key != p.whole && key != p.half {
+			continue
+		}
+		q, err := units.Parse(text, units.DimLength)
+		if err != nil || !(q.Value > 0) || q.Uncertainty != 0 {
+			return ""
+		}
+		w := q.Value
+		if key == p.half {
+			w *= 2
+		}
+		if shape == "plates" {
+			return linear.GapWords(w / 2)
+		}
+		return p.wholeWords + " " + lengthWords(w) + " (" + p.halfWords + " " + lengthWords(w/2) + ")"
+	}
+	return ""
 }
 
 // Layout implements Screen.
@@ -159,25 +232,22 @@ func (s *poresScreen) Layout(gtx layout.Context) layout.Dimensions {
 		s.form.Update(gtx)
 	}
 	f := s.form
-	ws := []layout.Widget{Heading(s.env, "Geometry"), f.InputWidget("role"), f.InputWidget("shape")}
+	s.ws = append(s.ws[:0], s.geoHead, f.InputWidget("role"), f.InputWidget("shape"))
 	shape := f.Text("shape")
 	if shape == "fibres" {
-		ws = append(ws, s.packing.Layout)
+		s.ws = append(s.ws, s.packingW)
 	}
-	if c := s.halves[shape]; c != nil {
-		ws = append(ws, c.Layout)
+	if w := s.halvesWs[shape]; w != nil {
+		s.ws = append(s.ws, w)
 	}
 	for _, key := range s.shown() {
-		ws = append(ws, f.InputWidget(key), s.both(shape, key))
-	}
-	gas := []layout.Widget{Heading(s.env, "Gas and operating point")}
-	for _, key := range []string{"gas", "temperature", "pressure", "frequency", "non-ideal"} {
-		gas = append(gas, f.InputWidget(key))
+		s.ws = append(s.ws, f.InputWidget(key), s.both(key))
 	}
 	if !splitWide(gtx) {
 		// On a phone the verdict follows the geometry it is about.
-		ws = append(append(ws, f.Outputs()...), gas...)
-		return s.page.Layout(gtx, ws...)
+		s.joined = append(append(append(s.joined[:0], s.ws...), f.Outputs()...), s.gasWs...)
+		return s.page.Layout(gtx, s.joined...)
 	}
-	return splitLayout(gtx, s.page, s.side, nil, append(ws, gas...), f.Outputs())
+	s.joined = append(append(s.joined[:0], s.ws...), s.gasWs...)
+	return splitLayout(gtx, s.page, s.side, nil, s.joined, f.Outputs())
 }

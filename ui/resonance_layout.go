@@ -37,7 +37,7 @@ func layoutHeadline(gtx layout.Context, env *Env, label, value string) layout.Di
 
 // formHead is the headline of a form's first result row: its label and
 // its value as the results card shows it, with the operating point it was
-// worked out at beneath (as withPoint draws it). Its widget is bound once
+// worked out at beneath. Its widget is bound once
 // and reads the form each frame.
 type formHead struct {
 	env *Env
@@ -53,7 +53,7 @@ func newFormHead(env *Env, f *Form) *formHead {
 }
 
 // widget returns the headline's widget. While the form has a result, the
-// results card then leaves the operating point out (see withPoint).
+// results card then leaves the operating point out (the headline shows it).
 func (h *formHead) widget() layout.Widget {
 	if res := h.f.Result(); res != nil && len(res.Rows) > 0 {
 		h.f.cs.headed = true

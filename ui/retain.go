@@ -13,10 +13,8 @@ import (
 // Spacers bound once: a method value of layout.Spacer made in a frame and
 // kept in a slice of children would be a new allocation each frame.
 var (
-	gapH2 = layout.Spacer{Height: 2}.Layout
-	gapH4 = layout.Spacer{Height: 4}.Layout
-	gapH6 = layout.Spacer{Height: 6}.Layout
-	gapW8 = layout.Spacer{Width: 8}.Layout
+	gapH6  = layout.Spacer{Height: 6}.Layout
+	gapH12 = layout.Spacer{Height: 12}.Layout
 )
 
 // indexed hands out widgets bound once to an index: widget i draws

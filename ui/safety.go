@@ -52,6 +52,21 @@ type safetyScreen struct {
 	damaged   bool // the last save met a damaged log
 	saved     bool // the current pass was saved
 	now       func() time.Time
+
+	// Kept between frames (see retain.go): widgets bound once, each
+	// item's widgets, the progress line and the slices of children.
+	generalW, progressW, navW layout.Widget
+	itemWs                    []*safetyItem
+	progressKey               [3]int
+	progressText              string
+	ws                        []layout.Widget
+}
+
+// safetyItem is the widgets of one checklist item, bound once; they read
+// the pass when drawn.
+type safetyItem struct {
+	head, verdict, why, inGrid, outGrid, caution, tick, note layout.Widget
+	ws, numbers                                              []layout.Widget
 }
 
 // safetyTitle is the screen's title.
@@ -280,65 +295,95 @@ func (s *safetyScreen) saveTo(aside bool) {
 // Layout implements Screen.
 func (s *safetyScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
-	ws := []layout.Widget{s.general.Layout, s.progress}
-	ws = append(ws, s.undoWidgets()...)
+	if s.generalW == nil {
+		s.generalW, s.progressW, s.navW = s.general.Layout, s.progress, s.navigation
+	}
+	s.ws = append(s.ws[:0], s.generalW, s.progressW)
+	s.ws = append(s.ws, s.undoWidgets()...)
 	if s.step >= s.items() {
-		ws = append(ws, s.reviewWidgets()...)
-		return s.page.Layout(gtx, append(ws, s.navigation)...)
+		s.ws = append(s.ws, s.reviewWidgets()...)
+		s.ws = append(s.ws, s.navW)
+		return s.page.Layout(gtx, s.ws...)
 	}
 	// On wide windows a step's numbers, its verdict on top, sit beside
 	// its inputs.
 	wide := splitWide(gtx)
 	item, numbers := s.itemWidgets(s.step, wide)
-	ws = append(append(ws, item...), s.navigation)
+	s.ws = append(append(s.ws, item...), s.navW)
 	if len(numbers) == 0 {
-		return s.page.Layout(gtx, ws...)
+		return s.page.Layout(gtx, s.ws...)
 	}
-	return splitLayout(gtx, s.page, s.side, nil, ws, numbers)
+	return splitLayout(gtx, s.page, s.side, nil, s.ws, numbers)
 }
 
-// progress is the "Item 3 of 11 · 2 ticked" line.
+// progress is the "Item 3 of 11 · 2 ticked" line, written again only when
+// the step or the ticks change.
 func (s *safetyScreen) progress(gtx layout.Context) layout.Dimensions {
-	txt := fmt.Sprintf("Item %d of %d · %d ticked", s.step+1, s.items(), s.pass.Ticked())
-	if s.step >= s.items() {
-		txt = fmt.Sprintf("Review · %d of %d ticked", s.pass.Ticked(), s.items())
+	key := [3]int{s.step + 1, s.items(), s.pass.Ticked()}
+	if s.progressText == "" || key != s.progressKey {
+		s.progressKey = key
+		s.progressText = fmt.Sprintf("Item %d of %d · %d ticked", s.step+1, s.items(), s.pass.Ticked())
+		if s.step >= s.items() {
+			s.progressText = fmt.Sprintf("Review · %d of %d ticked", s.pass.Ticked(), s.items())
+		}
 	}
-	return Note(s.env, txt)(gtx)
+	return layoutNote(gtx, s.env, s.progressText)
 }
 
 // itemWidgets draws checklist item i. With wide set, the verdict, the
 // numbers and their caution box are returned apart (numbers), for a
-// column of their own beside the inputs; otherwise numbers is empty.
+// column of their own beside the inputs; otherwise numbers is empty. The
+// slices are the item's own, valid until the next call.
 func (s *safetyScreen) itemWidgets(i int, wide bool) (ws, numbers []layout.Widget) {
-	it := s.pass.Items[i]
-	ws = []layout.Widget{Heading(s.env, it.Title)}
+	for len(s.itemWs) < len(s.pass.Items) {
+		s.itemWs = append(s.itemWs, nil)
+	}
+	w := s.itemWs[i]
+	if w == nil {
+		w = s.bindItem(i)
+		s.itemWs[i] = w
+	}
+	w.ws, w.numbers = append(w.ws[:0], w.head), w.numbers[:0]
 	c := s.calcs[i]
 	if c != nil && !wide {
 		// The step's worst outcome first, where it cannot be missed.
-		ws = append(ws, c.Verdict())
+		w.ws = append(w.ws, w.verdict)
 	}
-	ws = append(ws, Para(s.env, it.Why))
+	w.ws = append(w.ws, w.why)
 	if c != nil {
-		in := c.Inputs()
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, in) })
+		w.ws = append(w.ws, w.inGrid)
 		// The numbers and their caution box side by side where the width
 		// allows, so that the box is in view with the numbers.
-		out := c.Outputs()
 		if wide {
-			numbers = append([]layout.Widget{c.Verdict()}, out...)
+			w.numbers = append(append(w.numbers, w.verdict), c.Outputs()...)
 		} else {
-			ws = append(ws, func(gtx layout.Context) layout.Dimensions { return grid(gtx, out) })
+			w.ws = append(w.ws, w.outGrid)
 		}
-	} else if len(it.Cautions) > 0 {
-		ws = append(ws, NewCaution(s.env, "", it.Cautions...).Layout)
+	} else if w.caution != nil {
+		w.ws = append(w.ws, w.caution)
 	}
-	ws = append(ws,
-		func(gtx layout.Context) layout.Dimensions {
-			return tick(s.env, gtx, &s.ticks[i], "Done: "+it.Title)
-		},
-		s.noteEditor(i),
-	)
-	return ws, numbers
+	w.ws = append(w.ws, w.tick, w.note)
+	return w.ws, w.numbers
+}
+
+// bindItem makes the widgets of checklist item i.
+func (s *safetyScreen) bindItem(i int) *safetyItem {
+	it := s.pass.Items[i]
+	w := &safetyItem{
+		head: Heading(s.env, it.Title),
+		why:  Para(s.env, it.Why),
+		note: s.noteEditor(i),
+	}
+	done := "Done: " + it.Title
+	w.tick = func(gtx layout.Context) layout.Dimensions { return tick(s.env, gtx, &s.ticks[i], done) }
+	if c := s.calcs[i]; c != nil {
+		w.verdict = c.Verdict()
+		w.inGrid = func(gtx layout.Context) layout.Dimensions { return grid(gtx, c.Inputs()) }
+		w.outGrid = func(gtx layout.Context) layout.Dimensions { return grid(gtx, c.Outputs()) }
+	} else if len(it.Cautions) > 0 {
+		w.caution = NewCaution(s.env, "", it.Cautions...).Layout
+	}
+	return w
 }
 
 // noteEditor draws the optional note of item i.
@@ -456,25 +501,34 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 
 // navigation is the Previous / Next (or Review) row.
 func (s *safetyScreen) navigation(gtx layout.Context) layout.Dimensions {
-	var children []layout.FlexChild
+	// The children sit in an array on the stack, so that their widgets
+	// are not made on the heap each frame.
+	var children [5]layout.FlexChild
+	n := 0
 	if s.step > 0 {
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		children[n] = layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			return s.button(gtx, &s.prev, "‹ Previous", false)
-		}), layout.Rigid(layout.Spacer{Width: 12}.Layout))
+		})
+		children[n+1] = layout.Rigid(layout.Spacer{Width: 12}.Layout)
+		n += 2
 	}
 	switch {
 	case s.step < s.items()-1:
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		children[n] = layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			return s.button(gtx, &s.next, "Next ›", true)
-		}), layout.Rigid(layout.Spacer{Width: 12}.Layout), layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		})
+		children[n+1] = layout.Rigid(layout.Spacer{Width: 12}.Layout)
+		children[n+2] = layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			return s.button(gtx, &s.review, "Review", false)
-		}))
+		})
+		n += 3
 	case s.step == s.items()-1:
-		children = append(children, layout.Rigid(func(gtx layout.Context) layout.Dimensions {
+		children[n] = layout.Rigid(func(gtx layout.Context) layout.Dimensions {
 			return s.button(gtx, &s.next, "Review and save ›", true)
-		}))
+		})
+		n++
 	}
-	return layout.Flex{Alignment: layout.Middle}.Layout(gtx, children...)
+	return layout.Flex{Alignment: layout.Middle}.Layout(gtx, children[:n]...)
 }
 
 // button draws a filled (primary) or outlined button.

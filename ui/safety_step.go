@@ -57,6 +57,8 @@ type stepPart struct {
 	// pair, when set, shows two of keys as one size typed whole or as
 	// its half (the shell's inside diameter or its radius), with chips.
 	pair *sizePair
+	// cardW is results.Layout, made once (see resultsW).
+	cardW layout.Widget
 
 	shown *sheet.Result // the result on the card
 	err   error         // the error on the card
@@ -76,6 +78,11 @@ type sheetStep struct {
 	caution *Caution
 	// before runs before the forms update: carry-over from other steps.
 	before func()
+
+	// Kept between frames (see retain.go): the slices Inputs and Outputs
+	// return and the cards' widgets.
+	ins, outs []layout.Widget
+	cards     column
 }
 
 // newSheetStep returns a step with the item's cautions and the parts.
@@ -314,37 +321,52 @@ func outcomeIcon(gtx layout.Context, o sheet.Outcome, fg, bg color.NRGBA) layout
 	return layout.Dimensions{Size: size}
 }
 
-// Inputs implements inlineCalc.
+// Inputs implements inlineCalc. The slice is the step's own, valid until
+// the next call.
 func (s *sheetStep) Inputs() []layout.Widget {
-	var ws []layout.Widget
+	s.ins = s.ins[:0]
 	for _, p := range s.parts {
 		for _, k := range p.keys {
 			switch {
 			case p.pair != nil && k == p.pair.whole:
-				ws = append(ws, p.pair.widgets(p.form)...)
+				s.ins = append(s.ins, p.pair.widgets(p.form)...)
 			case p.pair != nil && k == p.pair.half:
 			default:
-				ws = append(ws, p.form.InputWidget(k))
+				s.ins = append(s.ins, p.form.InputWidget(k))
 			}
 		}
 	}
-	return ws
+	return s.ins
 }
 
 // Outputs implements inlineCalc: the parts' cards one above the other,
-// and the caution box (beside them where the width allows).
+// and the caution box (beside them where the width allows). The slice is
+// made once and kept.
 func (s *sheetStep) Outputs() []layout.Widget {
-	cards := func(gtx layout.Context) layout.Dimensions {
-		children := make([]layout.FlexChild, 0, 2*len(s.parts))
-		for i, p := range s.parts {
-			if i > 0 {
-				children = append(children, layout.Rigid(layout.Spacer{Height: 12}.Layout))
-			}
-			children = append(children, layout.Rigid(p.results.Layout))
-		}
-		return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
+	if s.outs == nil {
+		s.outs = []layout.Widget{s.layoutCards, s.caution.Layout}
 	}
-	return []layout.Widget{cards, s.caution.Layout}
+	return s.outs
+}
+
+// layoutCards draws the parts' results cards, 12 dp apart.
+func (s *sheetStep) layoutCards(gtx layout.Context) layout.Dimensions {
+	s.cards.reset()
+	for i, p := range s.parts {
+		if i > 0 {
+			s.cards.add(gapH12)
+		}
+		s.cards.add(p.resultsW())
+	}
+	return s.cards.layout(gtx)
+}
+
+// resultsW returns the part's results card as a widget, made once.
+func (p *stepPart) resultsW() layout.Widget {
+	if p.cardW == nil {
+		p.cardW = p.results.Layout
+	}
+	return p.cardW
 }
 
 // Numbers implements inlineCalc: the number rows shown, in SI with the
