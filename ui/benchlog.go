@@ -41,6 +41,27 @@ type benchLogScreen struct {
 	status           string
 	statusBad        bool
 	now              func() time.Time
+
+	// Kept between frames (see retain.go): widgets bound once
+	// (bindWidgets), texts written when the passes or the pass shown
+	// change (merge, passTexts), where the passes are kept, and the slice
+	// of children.
+	w         benchLogWidgets
+	labels    []string // the row label of each pass
+	countText string
+	shownAt   int // index of the pass whose texts are kept, -1 for none
+	shownHead string
+	shownText string
+	oldThere  bool // the older file exists, as of the last reload
+	where     whereKey
+	whereText string
+	ws        []layout.Widget
+}
+
+// benchLogWidgets are the bench-log screen's widgets, bound once.
+type benchLogWidgets struct {
+	caution, reading, none, count, passHead, passText, export, status, where layout.Widget
+	rows                                                                     indexed
 }
 
 // newBenchLogScreen builds the bench-log screen.
@@ -51,8 +72,9 @@ func newBenchLogScreen(env *Env) Screen {
 		caution: NewCaution(env, "A record, not an approval",
 			safety.CautionGeneral,
 			"A ticked pass records what you checked and when. It does not approve the rig: the applicable code, the inspector and your organisation's safety rules decide."),
-		open: -1,
-		now:  time.Now,
+		open:    -1,
+		shownAt: -1,
+		now:     time.Now,
 	}
 }
 
@@ -64,6 +86,7 @@ func (s *benchLogScreen) Enter() { s.reload() }
 
 // reload reads the older file again, then the log.
 func (s *benchLogScreen) reload() {
+	s.oldThere = bookFor(s.env).oldThere()
 	s.legacy, s.loadErr = bookFor(s.env).Legacy()
 	s.loaded, s.migrated = true, false
 	s.merge()
@@ -99,6 +122,15 @@ func (s *benchLogScreen) merge() {
 	if s.open < 0 && len(s.passes) > 0 {
 		s.open = len(s.passes) - 1
 	}
+	s.labels = s.labels[:0]
+	for i := range s.passes {
+		s.labels = append(s.labels, s.rowLabel(i))
+	}
+	s.countText = fmt.Sprintf("%d saved passes", len(s.passes))
+	if len(s.passes) == 1 {
+		s.countText = "1 saved pass"
+	}
+	s.shownAt = -1
 }
 
 func (s *benchLogScreen) update(gtx layout.Context) {
@@ -141,25 +173,29 @@ func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
 		s.merge()
 	}
 	s.update(gtx)
-	ws := []layout.Widget{s.caution.Layout}
+	if s.w.caution == nil {
+		s.bindWidgets()
+	}
+	w := &s.w
+	s.ws = append(s.ws[:0], w.caution)
 	if d := k.Damaged(); d != nil {
-		ws = append(ws, s.errorLine(d.Error()+". Until then no pass can be saved there: open Saved work to export its raw text or set it aside."))
+		s.ws = append(s.ws, s.errorLine(d.Error()+". Until then no pass can be saved there: open Saved work to export its raw text or set it aside."))
 	}
 	for _, err := range k.Problems() {
-		ws = append(ws, s.errorLine(err.Error()))
+		s.ws = append(s.ws, s.errorLine(err.Error()))
 	}
 	for _, err := range s.unread {
-		ws = append(ws, s.errorLine(err.Error()))
+		s.ws = append(s.ws, s.errorLine(err.Error()))
 	}
 	// The keeper's last word, when it is a failure to keep a pass (the
 	// safety screen queued the save and went on).
 	if st := k.Status(); st.Bad && (strings.HasPrefix(st.Text, whatSavePass) || strings.HasPrefix(st.Text, whatCopyPasses)) {
-		ws = append(ws, s.errorLine(st.Text))
+		s.ws = append(s.ws, s.errorLine(st.Text))
 	}
 	if s.loadErr != nil {
-		ws = append(ws, s.errorLine(s.loadErr.Error()))
+		s.ws = append(s.ws, s.errorLine(s.loadErr.Error()))
 		if isDamaged(s.loadErr) {
-			ws = append(ws,
+			s.ws = append(s.ws,
 				Para(s.env, "The passes in this older file cannot be shown. Setting it aside renames it (its bytes are kept for you to inspect); passes you save now are kept with your saved work either way."),
 				func(gtx layout.Context) layout.Dimensions {
 					return safetyButton(s.env, gtx, &s.setAside, "Set the damaged log aside", true)
@@ -168,43 +204,73 @@ func (s *benchLogScreen) Layout(gtx layout.Context) layout.Dimensions {
 	}
 	switch {
 	case len(s.passes) == 0 && !k.Loaded():
-		ws = append(ws, Para(s.env, "Reading your saved work…"))
+		s.ws = append(s.ws, w.reading)
 	case len(s.passes) == 0:
-		ws = append(ws, Para(s.env, "No safety pass saved yet. Walk the safety pass and save it at the end; it appears here with its date and time."))
+		s.ws = append(s.ws, w.none)
 	default:
-		n := fmt.Sprintf("%d saved passes", len(s.passes))
-		if len(s.passes) == 1 {
-			n = "1 saved pass"
-		}
-		ws = append(ws, Heading(s.env, n))
+		s.ws = append(s.ws, w.count)
 		for i := len(s.passes) - 1; i >= 0; i-- {
-			ws = append(ws, s.row(i))
+			s.ws = append(s.ws, w.rows.at(i))
 		}
 	}
 	if s.open >= 0 && s.open < len(s.passes) {
-		p := s.passes[s.open]
-		ws = append(ws,
-			Heading(s.env, "Pass of "+p.Time.Format("2006-01-02 15:04")),
-			func(gtx layout.Context) layout.Dimensions {
-				return background(gtx, s.env.Colors.Surface, s.env.Colors.Divider, gtx.Dp(8), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-					gtx.Constraints.Min.X = gtx.Constraints.Max.X
-					return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						l := material.Body2(s.env.Theme, p.Text())
-						l.Color = s.env.Colors.Text
-						l.State = &s.text
-						return Described("Pass text", l.Layout)(gtx)
-					})
-				})
-			},
-			func(gtx layout.Context) layout.Dimensions {
-				return safetyButton(s.env, gtx, &s.export, "Export as text", true)
-			})
+		s.passTexts()
+		s.ws = append(s.ws, w.passHead, w.passText, w.export)
 	}
 	if s.status != "" {
-		ws = append(ws, statusLine(s.env, "Export status", s.status, s.statusBad))
+		s.ws = append(s.ws, w.status)
 	}
-	ws = append(ws, Note(s.env, bookFor(s.env).Where()))
-	return s.page.Layout(gtx, ws...)
+	if key := bookFor(s.env).whereKeyOf(s.oldThere); s.whereText == "" || key != s.where {
+		s.where, s.whereText = key, bookFor(s.env).whereText(key)
+	}
+	s.ws = append(s.ws, w.where)
+	return s.page.Layout(gtx, s.ws...)
+}
+
+// passTexts writes the heading and the text of the pass shown when it
+// changed.
+func (s *benchLogScreen) passTexts() {
+	if s.shownAt == s.open {
+		return
+	}
+	p := s.passes[s.open]
+	s.shownAt, s.shownHead, s.shownText = s.open, "Pass of "+p.Time.Format("2006-01-02 15:04"), p.Text()
+}
+
+// bindWidgets makes the screen's widgets once; they read the screen when
+// drawn.
+func (s *benchLogScreen) bindWidgets() {
+	env := s.env
+	s.w = benchLogWidgets{
+		caution: s.caution.Layout,
+		reading: Para(env, "Reading your saved work…"),
+		none:    Para(env, "No safety pass saved yet. Walk the safety pass and save it at the end; it appears here with its date and time."),
+		count: func(gtx layout.Context) layout.Dimensions {
+			return layoutHeading(gtx, env, s.countText)
+		},
+		passHead: func(gtx layout.Context) layout.Dimensions {
+			return layoutHeading(gtx, env, s.shownHead)
+		},
+		passText: func(gtx layout.Context) layout.Dimensions {
+			return background(gtx, env.Colors.Surface, env.Colors.Divider, gtx.Dp(8), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
+				gtx.Constraints.Min.X = gtx.Constraints.Max.X
+				return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					l := material.Body2(env.Theme, s.shownText)
+					l.Color = env.Colors.Text
+					l.State = &s.text
+					return describe(gtx, "Pass text", l.Layout)
+				})
+			})
+		},
+		export: func(gtx layout.Context) layout.Dimensions {
+			return safetyButton(env, gtx, &s.export, "Export as text", true)
+		},
+		status: func(gtx layout.Context) layout.Dimensions {
+			return layoutStatusLine(gtx, env, "Export status", s.status, s.statusBad)
+		},
+		where: func(gtx layout.Context) layout.Dimensions { return layoutNote(gtx, env, s.whereText) },
+	}
+	s.w.rows.draw = s.layoutRow
 }
 
 // errorLine draws a problem in the error colour.
@@ -212,12 +278,12 @@ func (s *benchLogScreen) errorLine(text string) layout.Widget {
 	return func(gtx layout.Context) layout.Dimensions {
 		l := material.Body1(s.env.Theme, text)
 		l.Color = s.env.Colors.Error
-		return Described("Bench log error", l.Layout)(gtx)
+		return describe(gtx, "Bench log error", l.Layout)
 	}
 }
 
-// row draws the list entry of pass i.
-func (s *benchLogScreen) row(i int) layout.Widget {
+// rowLabel is the list entry's words for pass i.
+func (s *benchLogScreen) rowLabel(i int) string {
 	p := s.passes[i]
 	done := 0
 	for _, it := range p.Items {
@@ -229,22 +295,25 @@ func (s *benchLogScreen) row(i int) layout.Widget {
 	if p.Rig != "" {
 		label += " · " + p.Rig
 	}
-	return func(gtx layout.Context) layout.Dimensions {
-		return s.rows[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			bg := s.env.Colors.Surface
-			if i == s.open {
-				bg = s.env.Colors.Selected
-			}
-			gtx.Constraints.Min.X = gtx.Constraints.Max.X
-			return background(gtx, bg, s.env.Colors.Divider, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
-				return targetRow(gtx, func(gtx layout.Context) layout.Dimensions {
-					return layout.Inset{Left: 14, Right: 14, Top: 10, Bottom: 10}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-						l := material.Body1(s.env.Theme, label)
-						l.Color = s.env.Colors.Text
-						return l.Layout(gtx)
-					})
+	return label
+}
+
+// layoutRow draws the list entry of pass i.
+func (s *benchLogScreen) layoutRow(gtx layout.Context, i int) layout.Dimensions {
+	return s.rows[i].Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+		bg := s.env.Colors.Surface
+		if i == s.open {
+			bg = s.env.Colors.Selected
+		}
+		gtx.Constraints.Min.X = gtx.Constraints.Max.X
+		return background(gtx, bg, s.env.Colors.Divider, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
+			return targetRow(gtx, func(gtx layout.Context) layout.Dimensions {
+				return layout.Inset{Left: 14, Right: 14, Top: 10, Bottom: 10}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
+					l := material.Body1(s.env.Theme, s.labels[i])
+					l.Color = s.env.Colors.Text
+					return l.Layout(gtx)
 				})
 			})
 		})
-	}
+	})
 }

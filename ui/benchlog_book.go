@@ -63,25 +63,55 @@ func defaultBook() *benchBook {
 func (b *benchBook) keeper() *Keeper { return keepFor(b.env).keeper }
 
 // Where says where the passes are kept, for the screens.
-func (b *benchBook) Where() string {
-	k := b.keeper()
-	var s string
-	switch kind, persist, ok := k.Where(); {
-	case !ok && !k.Loaded():
-		s = "Safety passes are kept with your saved work; the storage is still opening."
-	case !ok:
-		s = "No storage could be opened, so safety passes cannot be kept: export each pass as text."
-	case k.InMemory():
-		s = "This app keeps your saved work in memory only, so safety passes are lost when it closes: export each pass as text to keep it."
-	case persist == store.PersistDenied:
-		s = "Safety passes are kept with your saved work and go into its export file. Kept in: " + kind + "; the browser may clear it when space runs low, so export now and then."
-	default:
-		s = "Safety passes are kept with your saved work and go into its export file. Kept in: " + kind + "."
+func (b *benchBook) Where() string { return b.whereWith(b.oldThere()) }
+
+// oldThere reports whether the older bench log file exists (a call to the
+// file system: screens keep the answer, see benchLogScreen.reload).
+func (b *benchBook) oldThere() bool {
+	if b.path == "" {
+		return false
 	}
-	if b.path != "" {
-		if _, err := os.Stat(b.path); err == nil {
-			s += " The older bench log file is read too and left as it is: " + b.path
-		}
+	_, err := os.Stat(b.path)
+	return err == nil
+}
+
+// whereKey is what Where's text depends on.
+type whereKey struct {
+	kind                 string
+	persist              store.Persistence
+	ok, loaded, mem, old bool
+}
+
+// whereKeyOf reads the keeper's state for Where, with the older file's
+// presence old.
+func (b *benchBook) whereKeyOf(old bool) whereKey {
+	k := b.keeper()
+	kind, persist, ok := k.Where()
+	return whereKey{kind: kind, persist: persist, ok: ok, loaded: k.Loaded(), mem: ok && k.InMemory(), old: old}
+}
+
+// whereWith is Where with the older file's presence given.
+func (b *benchBook) whereWith(old bool) string {
+	return b.whereText(b.whereKeyOf(old))
+}
+
+// whereText writes Where's text for state w.
+func (b *benchBook) whereText(w whereKey) string {
+	var s string
+	switch {
+	case !w.ok && !w.loaded:
+		s = "Safety passes are kept with your saved work; the storage is still opening."
+	case !w.ok:
+		s = "No storage could be opened, so safety passes cannot be kept: export each pass as text."
+	case w.mem:
+		s = "This app keeps your saved work in memory only, so safety passes are lost when it closes: export each pass as text to keep it."
+	case w.persist == store.PersistDenied:
+		s = "Safety passes are kept with your saved work and go into its export file. Kept in: " + w.kind + "; the browser may clear it when space runs low, so export now and then."
+	default:
+		s = "Safety passes are kept with your saved work and go into its export file. Kept in: " + w.kind + "."
+	}
+	if w.old {
+		s += " The older bench log file is read too and left as it is: " + b.path
 	}
 	return s
 }

@@ -168,17 +168,16 @@ func deviceRows(env *Env, list []store.Device, rows []widget.Clickable, selected
 	var ws []layout.Widget
 	for i, d := range list {
 		sel := d.Name == selected
+		desc, summary := "Device "+d.Name, deviceSummary(d)
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepListRow(env, gtx, &rows[i], "Device "+d.Name, d.Name, deviceSummary(d), sel)
+			return keepListRow(env, gtx, &rows[i], desc, d.Name, summary, sel)
 		})
 		if sel {
-			ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-				bs := make([]layout.Widget, len(actions))
-				for j, a := range actions {
-					bs[j] = func(gtx layout.Context) layout.Dimensions { return keepButton(env, gtx, a.c, a.label, a.primary) }
-				}
-				return keepFlow(gtx, bs...)
-			})
+			bs := make([]layout.Widget, len(actions))
+			for j, a := range actions {
+				bs[j] = func(gtx layout.Context) layout.Dimensions { return keepButton(env, gtx, a.c, a.label, a.primary) }
+			}
+			ws = append(ws, func(gtx layout.Context) layout.Dimensions { return keepFlow(gtx, bs...) })
 		}
 	}
 	return ws

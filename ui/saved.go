@@ -53,6 +53,18 @@ type savedScreen struct {
 		busy bool
 		done []func()
 	}
+
+	// Kept between frames (see retain.go): widgets bound once
+	// (bindWidgets), the line saying where the work is kept, and the
+	// lists of the log, setups and devices, made again only when the
+	// library or the selection changes (listKey).
+	w         savedWidgets
+	whereKey  whereKey
+	whereText string
+	lists     []layout.Widget
+	listKey   savedListKey
+	listOK    bool
+	ws        []layout.Widget
 }
 
 // newSavedScreen builds the Saved work page.
@@ -242,12 +254,56 @@ func (s *savedScreen) openIn(name string) {
 	b.say("Opened “"+name+"”.", false)
 }
 
+// savedWidgets are the Saved work page's widgets, bound once.
+type savedWidgets struct {
+	where, path, buttons, exportNote, status, reading layout.Widget
+}
+
+// savedListKey is what the lists of the Saved work page are made from.
+type savedListKey struct {
+	version       uint64
+	lib           *store.Library
+	entry         *store.Entry
+	setup, device string
+}
+
+// bindWidgets makes the page's widgets once; they read the page when
+// drawn.
+func (s *savedScreen) bindWidgets() {
+	env := s.env
+	s.w = savedWidgets{
+		where: s.where,
+		path: func(gtx layout.Context) layout.Dimensions {
+			hint := "Path of the file to import"
+			if h, ok := keepFor(env).porter.(interface{ PathHint() string }); ok {
+				hint = h.PathHint()
+			}
+			return keepEditor(env, gtx, &s.path, hint, "File to import")
+		},
+		buttons: func(gtx layout.Context) layout.Dimensions {
+			return keepFlow(gtx,
+				func(gtx layout.Context) layout.Dimensions {
+					return keepButton(env, gtx, &s.export, "Export everything", true)
+				},
+				func(gtx layout.Context) layout.Dimensions {
+					return keepButton(env, gtx, &s.importIt, "Import a file", false)
+				})
+		},
+		exportNote: Note(env, "Export writes your setups, devices and log to one file of Tubewright's own format. Import adds a file's items to yours: items whose names you already use are listed and changed only if you ask."),
+		status:     s.layoutStatus,
+		reading:    Note(env, "Reading your saved work…"),
+	}
+}
+
 // Layout implements Screen.
 func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.update(gtx)
+	if s.w.where == nil {
+		s.bindWidgets()
+	}
 	env, k := s.env, s.keeper()
 	lib := k.Library()
-	ws := []layout.Widget{s.where}
+	ws := append(s.ws[:0], s.w.where)
 	for _, p := range k.Problems() {
 		ws = append(ws, keepMessage(env, "Storage problem", p.Error(), true))
 	}
@@ -265,54 +321,55 @@ func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 			})
 	}
 	if pp, ok := keepFor(env).porter.(PathPorter); ok {
+		// The widget reads the porter itself, for its hint.
 		if !s.pathSet {
 			s.path.SingleLine, s.pathSet = true, true
 			s.path.SetText(pp.ImportPath())
 		}
-		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			hint := "Path of the file to import"
-			if h, ok := pp.(interface{ PathHint() string }); ok {
-				hint = h.PathHint()
-			}
-			return keepEditor(env, gtx, &s.path, hint, "File to import")
-		})
+		ws = append(ws, s.w.path)
 	}
-	ws = append(ws,
-		func(gtx layout.Context) layout.Dimensions {
-			return keepFlow(gtx,
-				func(gtx layout.Context) layout.Dimensions {
-					return keepButton(env, gtx, &s.export, "Export everything", true)
-				},
-				func(gtx layout.Context) layout.Dimensions {
-					return keepButton(env, gtx, &s.importIt, "Import a file", false)
-				})
-		},
-		Note(env, "Export writes your setups, devices and log to one file of Tubewright's own format. Import adds a file's items to yours: items whose names you already use are listed and changed only if you ask."),
-		s.layoutStatus,
-	)
+	ws = append(ws, s.w.buttons, s.w.exportNote, s.w.status)
 	if !k.Loaded() {
-		ws = append(ws, Note(env, "Reading your saved work…"))
+		ws = append(ws, s.w.reading)
 	}
-	ws = append(ws, s.logWidgets(lib)...)
-	ws = append(ws, s.setupWidgets(lib)...)
-	ws = append(ws, s.devices.widgets(s, lib)...)
-	return s.page.Layout(gtx, ws...)
+	// The lists are made again only when what they show changes.
+	if key := (savedListKey{version: k.Version(), lib: lib, entry: s.entry, setup: s.setup, device: s.devices.selected}); !s.listOK || key != s.listKey {
+		s.listOK, s.listKey = true, key
+		s.lists = append(s.lists[:0], s.logWidgets(lib)...)
+		s.lists = append(s.lists, s.setupWidgets(lib)...)
+		s.lists = append(s.lists, s.devices.widgets(s, lib)...)
+	}
+	s.ws = append(ws, s.lists...)
+	return s.page.Layout(gtx, s.ws...)
 }
 
 // where says where the work is kept and whether it will stay.
 func (s *savedScreen) where(gtx layout.Context) layout.Dimensions {
 	k := s.keeper()
 	kind, persist, ok := k.Where()
+	key := whereKey{kind: kind, persist: persist, ok: ok, loaded: k.Loaded(), mem: ok && k.InMemory()}
+	if s.whereText == "" || key != s.whereKey {
+		s.whereKey, s.whereText = key, savedWhere(key)
+	}
+	return describe(gtx, "Where saved work is kept", func(gtx layout.Context) layout.Dimensions {
+		return layoutPara(gtx, s.env, s.whereText)
+	})
+}
+
+// savedWhere says where the work is kept and whether it will stay, for
+// the keeper's state w.
+func savedWhere(w whereKey) string {
+	kind, persist, ok := w.kind, w.persist, w.ok
 	text := "Looking for your storage…"
 	switch {
-	case ok && k.InMemory():
+	case ok && w.mem:
 		text = "Kept in " + kind + "."
 	case ok:
 		text = "Kept in " + kind + "; " + persist.String() + "."
-	case k.Loaded():
+	case w.loaded:
 		text = "Nothing can be kept on this device: no storage could be opened (see below), so setups and results cannot be saved."
 	}
-	return Described("Where saved work is kept", Para(s.env, text))(gtx)
+	return text
 }
 
 // layoutStatus draws the last message with its follow-up button.
@@ -351,8 +408,9 @@ func (s *savedScreen) logWidgets(lib *store.Library) []layout.Widget {
 			sub += " · " + w
 		}
 		open := s.entry != nil && s.entry.Time.Equal(e.Time) && s.entry.Calculator == e.Calculator
+		desc := "Logged " + e.Title + " " + e.Time.Format(time.RFC3339)
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepListRow(env, gtx, &s.logRows[i], "Logged "+e.Title+" "+e.Time.Format(time.RFC3339), e.Title, sub, open)
+			return keepListRow(env, gtx, &s.logRows[i], desc, e.Title, sub, open)
 		})
 		if open {
 			text := entryText(e)
@@ -363,7 +421,7 @@ func (s *savedScreen) logWidgets(lib *store.Library) []layout.Widget {
 						return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 							l := material.Body2(env.Theme, text)
 							l.Color = env.Colors.Text
-							return Described("Logged result text", l.Layout)(gtx)
+							return describe(gtx, "Logged result text", l.Layout)
 						})
 					})
 				},
@@ -421,14 +479,16 @@ func (s *savedScreen) setupWidgets(lib *store.Library) []layout.Widget {
 	for i, st := range s.setupsShown {
 		sub := title(st.Calculator) + " · saved " + st.Saved.Local().Format("2006-01-02 15:04")
 		sel := st.Name == s.setup
+		desc := "Setup " + st.Name
 		ws = append(ws, func(gtx layout.Context) layout.Dimensions {
-			return keepListRow(env, gtx, &s.setupRows[i], "Setup "+st.Name, st.Name, sub, sel)
+			return keepListRow(env, gtx, &s.setupRows[i], desc, st.Name, sub, sel)
 		})
 		if sel {
+			openIn := "Open in " + title(st.Calculator)
 			ws = append(ws, func(gtx layout.Context) layout.Dimensions {
 				return keepFlow(gtx,
 					func(gtx layout.Context) layout.Dimensions {
-						return keepButton(env, gtx, &s.openSetup, "Open in "+title(st.Calculator), true)
+						return keepButton(env, gtx, &s.openSetup, openIn, true)
 					},
 					func(gtx layout.Context) layout.Dimensions {
 						return keepButton(env, gtx, &s.delSetup, "Delete", false)

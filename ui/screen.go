@@ -86,12 +86,15 @@ func (p *Page) layout(gtx layout.Context, children []layout.Widget) layout.Dimen
 
 // Heading returns a section heading widget.
 func Heading(env *Env, text string) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
-		l := material.Label(env.Theme, unit.Sp(19), text)
-		l.Font.Weight = 600
-		l.Color = env.Colors.Text
-		return l.Layout(gtx)
-	}
+	return func(gtx layout.Context) layout.Dimensions { return layoutHeading(gtx, env, text) }
+}
+
+// layoutHeading draws Heading's heading without making a widget.
+func layoutHeading(gtx layout.Context, env *Env, text string) layout.Dimensions {
+	l := material.Label(env.Theme, unit.Sp(19), text)
+	l.Font.Weight = 600
+	l.Color = env.Colors.Text
+	return l.Layout(gtx)
 }
 
 // Para returns a paragraph of body text.
