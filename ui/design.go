@@ -1,8 +1,6 @@
 package ui
 
 import (
-	"errors"
-
 	"gioui.org/layout"
 	"gioui.org/widget"
 
@@ -211,13 +209,12 @@ const (
 )
 
 func (s *designScreen) state() designState {
-	err := s.form.Err()
 	switch {
 	case s.form.Result() != nil:
 		return designDone
-	case errors.Is(err, errDesigning):
+	case s.form.errIs(errDesigning):
 		return designBusy
-	case errors.Is(err, errCancelled):
+	case s.form.errIs(errCancelled):
 		return designCancelled
 	}
 	return designIdle

@@ -127,7 +127,12 @@ func (f *Field) Value() (float64, bool) {
 // SetError shows err under the field in place of the hint, for a value that
 // parsed but that a calculation rejected (e.g. a units.RangeError about this
 // input). nil clears it. A parse error always takes precedence.
-func (f *Field) SetError(err error) { f.extErr, f.lineOK = err, false }
+func (f *Field) SetError(err error) {
+	if err == nil && f.extErr == nil {
+		return // nothing changes: the lines under the box stay as written
+	}
+	f.extErr, f.lineOK = err, false
+}
 
 // ErrorText returns the error text shown under the field, or "".
 func (f *Field) ErrorText() string {

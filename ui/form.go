@@ -37,6 +37,13 @@ type Form struct {
 	outWs          [4]layout.Widget // resultCard, CautionWidget, notes, about
 	notes          column
 	noteWs         indexed
+	errIsMemo      []errIsAnswer // answers of errIs for the last evaluation
+}
+
+// errIsAnswer is whether the last evaluation's error is target.
+type errIsAnswer struct {
+	target error
+	is     bool
 }
 
 // formItem is the widget of one input; exactly one of the pointers is set.
@@ -167,6 +174,24 @@ func (f *Form) Result() *sheet.Result { return f.result }
 // Err returns why the last evaluation gave no result, or nil.
 func (f *Form) Err() error { return f.err }
 
+// errIs reports errors.Is(f.Err(), target) for a sentinel target (a
+// comparable error value), worked out once per evaluation: screens ask
+// every frame, and errors.Is's type assertions may allocate (the runtime
+// grows its caches of them now and then).
+func (f *Form) errIs(target error) bool {
+	if f.err == nil {
+		return false
+	}
+	for _, a := range f.errIsMemo {
+		if a.target == target {
+			return a.is
+		}
+	}
+	is := errors.Is(f.err, target)
+	f.errIsMemo = append(f.errIsMemo, errIsAnswer{target, is})
+	return is
+}
+
 // Invalidate marks the form for recomputing at the next Update.
 func (f *Form) Invalidate() { f.dirty = true }
 
@@ -221,6 +246,7 @@ func (f *Form) Compute() {
 		}
 	}
 	f.result, f.err = f.Sheet.Evaluate(f.Texts())
+	f.errIsMemo = f.errIsMemo[:0]
 	r := f.Results
 	r.Reset()
 	f.caution.Lines = nil

@@ -12,6 +12,27 @@ type keepSide struct {
 	forms  map[sheet.ID]*Form
 	bars   map[sheet.ID]*keepBar
 	porter Porter
+
+	// paths is porter as a PathPorter (nil when it takes no typed path)
+	// and pathHint its hint, asked once (see pathPorter): a frame then
+	// makes no type assertion, whose runtime cache may allocate.
+	paths    PathPorter
+	pathHint string
+	pathsOK  bool
+}
+
+// pathPorter returns the porter as a PathPorter, and the hint of its path
+// field, or false when it takes no typed path.
+func (ks *keepSide) pathPorter() (PathPorter, string, bool) {
+	if !ks.pathsOK {
+		ks.pathsOK = true
+		ks.paths, _ = ks.porter.(PathPorter)
+		ks.pathHint = "Path of the file to import"
+		if h, ok := ks.porter.(interface{ PathHint() string }); ok {
+			ks.pathHint = h.PathHint()
+		}
+	}
+	return ks.paths, ks.pathHint, ks.paths != nil
 }
 
 // keepFor returns env's storage side, starting a memory keeper (nothing

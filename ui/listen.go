@@ -344,7 +344,7 @@ func (s *listenScreen) showResults() bool {
 	if s.form.Result() != nil {
 		return true
 	}
-	if s.analysing() || errors.Is(s.form.Err(), errAnalysing) || !s.opened() {
+	if s.analysing() || s.form.errIs(errAnalysing) || !s.opened() {
 		return false
 	}
 	return s.form.Err() != nil

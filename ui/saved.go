@@ -274,10 +274,7 @@ func (s *savedScreen) bindWidgets() {
 	s.w = savedWidgets{
 		where: s.where,
 		path: func(gtx layout.Context) layout.Dimensions {
-			hint := "Path of the file to import"
-			if h, ok := keepFor(env).porter.(interface{ PathHint() string }); ok {
-				hint = h.PathHint()
-			}
+			_, hint, _ := keepFor(env).pathPorter()
 			return keepEditor(env, gtx, &s.path, hint, "File to import")
 		},
 		buttons: func(gtx layout.Context) layout.Dimensions {
@@ -320,8 +317,7 @@ func (s *savedScreen) Layout(gtx layout.Context) layout.Dimensions {
 					})
 			})
 	}
-	if pp, ok := keepFor(env).porter.(PathPorter); ok {
-		// The widget reads the porter itself, for its hint.
+	if pp, _, ok := keepFor(env).pathPorter(); ok {
 		if !s.pathSet {
 			s.path.SingleLine, s.pathSet = true, true
 			s.path.SetText(pp.ImportPath())

@@ -1,0 +1,69 @@
+package ui
+
+import (
+	"image"
+	"runtime"
+	"testing"
+	"time"
+
+	"gioui.org/io/input"
+	"gioui.org/layout"
+	"gioui.org/op"
+	"gioui.org/unit"
+)
+
+// TestIdleLayoutAllocatesNothing opens each catalog screen in the whole
+// app (top bar and screen) at phone size, lets its background work settle,
+// and checks that App.Layout allocates nothing in a frame where nothing
+// changed. Allocation counts are deterministic, unlike timings: the time
+// budget lives in BenchmarkScreenFrame.
+//
+// The input router's Frame runs between the layouts, as a window runs it,
+// but is left out of the count: in gioui.org v0.10.3 it allocates in
+// keyQueue.updateFocusLayout (sort.SliceStable boxes the slice and its
+// swap function, a few objects for each row of focusable widgets), which
+// nothing in how we lay out can avoid; BenchmarkScreenFrame counts it.
+func TestIdleLayoutAllocatesNothing(t *testing.T) {
+	for _, e := range Catalog() {
+		t.Run(string(e.ID), func(t *testing.T) {
+			a := NewApp(func() {})
+			a.Open(e.ID)
+			var r input.Router
+			var ops op.Ops
+			gtx := layout.Context{
+				Ops:         &ops,
+				Now:         time.Unix(1_800_000_000, 0),
+				Metric:      unit.Metric{PxPerDp: 1, PxPerSp: 1},
+				Constraints: layout.Exact(image.Pt(412, 915)),
+				Source:      r.Source(),
+			}
+			frame := func() {
+				ops.Reset()
+				a.Layout(gtx)
+				r.Frame(&ops)
+			}
+			if !layOutUntilQuiet(a.Env(), 300*time.Millisecond, frame) {
+				t.Fatal("the screen's background work did not settle in 20 s")
+			}
+			for range 5 { // text shaped, caches and slices grown
+				frame()
+			}
+			defer runtime.GOMAXPROCS(runtime.GOMAXPROCS(1))
+			const frames = 20
+			var before, after runtime.MemStats
+			var mallocs uint64
+			for range frames {
+				ops.Reset()
+				runtime.ReadMemStats(&before)
+				a.Layout(gtx)
+				runtime.ReadMemStats(&after)
+				mallocs += after.Mallocs - before.Mallocs
+				r.Frame(&ops)
+			}
+			if mallocs != 0 {
+				t.Errorf("an unchanged frame of %s allocates %.1f objects in App.Layout, want none (go test -bench 'BenchmarkScreenFrame/%s/idle' -memprofile, then go tool pprof -sample_index=alloc_objects, shows where)",
+					e.ID, float64(mallocs)/frames, e.ID)
+			}
+		})
+	}
+}
