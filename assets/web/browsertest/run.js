@@ -101,6 +101,7 @@ async function test(dir) {
     await page.goto(url);
     const ms = await firstFrame(page);
     check(await page.locator("canvas").count() === 1, `the app drew its canvas (first frame at ${ms.toFixed(0)} ms)`);
+    check(await page.evaluate(() => UNPACKED_BY) === "workers", "the app's two xz streams were unpacked in two workers");
     await page.waitForTimeout(1500);
     const home = await page.screenshot();
     check(home.length > 20000, `the home screen has content (${home.length} bytes of PNG)`);
@@ -159,9 +160,11 @@ async function test(dir) {
     const ms2 = await firstFrame(page);
     check(doc && doc.fromServiceWorker(), "offline, the page came from the service worker's set");
     check(await page.locator("canvas").count() === 1, `offline reload started the app (first frame at ${ms2.toFixed(0)} ms)`);
+    check(await page.evaluate(() => UNPACKED_BY) === "workers", "offline, the workers came from the set too");
     await ctx.setOffline(false);
     check(foreign.length === 0, "no request left the origin" + (foreign.length ? ": " + foreign.join(", ") : ""));
     check(errors.length === 0, "no page errors" + (errors.length ? ": " + errors.join("; ") : ""));
+    await withoutWorkers(browser, url);
     await updates(browser, dir, stats, url);
     await ctx.close();
     await keepScenario({ browser, url, phone, check, shots: process.env.SHOTS });
@@ -175,6 +178,25 @@ async function test(dir) {
   }
   if (failed) process.exit(1);
   console.log("browser test: passed");
+}
+
+// withoutWorkers starts the app in a browser that has no Worker: the page
+// unpacks both xz streams itself, one after the other.
+async function withoutWorkers(browser, url) {
+  const ctx = await browser.newContext(phone);
+  try {
+    await ctx.addInitScript(() => { delete window.Worker; });
+    const page = await ctx.newPage();
+    const errors = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+    await page.goto(url);
+    const ms = await firstFrame(page);
+    check(await page.evaluate(() => UNPACKED_BY) === "page" && errors.length === 0,
+      `without workers the page unpacked the app itself and started it (first frame at ${ms.toFixed(0)} ms)` +
+      (errors.length ? ": " + errors.join("; ") : ""));
+  } finally {
+    await ctx.close();
+  }
 }
 
 // copyBuild copies a built folder under a new build name; drop lists files

@@ -4,9 +4,10 @@
 // worker with exactly the list of built files.
 //
 // The forms of the app, all served as plain files by any static host:
-// tubewright.wasm.xz (xz -9e, the smallest; the page unpacks it with
-// unxz.js, the xz-decompress package from npm given by -unxz, which is
-// xz-embedded built to WebAssembly), tubewright.wasm.gz (gzip -9, unpacked
+// tubewright.wasm.xz (xz -9e in two streams, code and data, the smallest;
+// the page unpacks them at once in two workers with unxz.js, the
+// xz-decompress package from npm given by -unxz, which is xz-embedded built
+// to WebAssembly), tubewright.wasm.gz (gzip -9, unpacked
 // by the browser's DecompressionStream where unxz.js cannot load) and
 // tubewright.wasm (raw, for browsers with neither). Without -unxz there is
 // no xz form. The xz form needs the xz command (Debian's xz-utils).
@@ -46,9 +47,12 @@ const (
 	wasmGz   = "tubewright.wasm.gz"
 	wasmXz   = "tubewright.wasm.xz"
 	unxzName = "unxz.js"
-	swName   = "sw.js"
-	pageName = "index.html"
-	execName = "wasm_exec.js"
+	// unxzWorkerName is the worker half of unxz.js, appended to the
+	// decoder package's script.
+	unxzWorkerName = "unxz-worker.js"
+	swName         = "sw.js"
+	pageName       = "index.html"
+	execName       = "wasm_exec.js"
 )
 
 // shellFiles are copied from the shell folder unchanged (index.html and
@@ -145,12 +149,17 @@ func pack(o options) (string, error) {
 		return "", err
 	}
 	files[wasmGz] = gz
-	xzSize := 0
+	xzSize, xzSplit := 0, 0
 	if o.unxz != "" {
 		if err := read(unxzName, o.unxz); err != nil {
 			return "", err
 		}
-		if files[wasmXz], err = xzBytes(files[wasmRaw]); err != nil {
+		tail, err := os.ReadFile(filepath.Join(o.shell, unxzWorkerName))
+		if err != nil {
+			return "", err
+		}
+		files[unxzName] = append(append(files[unxzName], '\n'), tail...)
+		if files[wasmXz], xzSplit, err = xzApp(files[wasmRaw]); err != nil {
 			return "", err
 		}
 		xzSize = len(files[wasmXz])
@@ -166,9 +175,11 @@ func pack(o options) (string, error) {
 	// The build is named after everything it serves, templates included.
 	build := buildName(files, page, sw)
 	files[pageName] = fill(page, build, map[string]string{
-		"__WASM_SIZE__":    strconv.Itoa(len(files[wasmRaw])),
-		"__WASM_GZ_SIZE__": strconv.Itoa(len(files[wasmGz])),
-		"__WASM_XZ_SIZE__": strconv.Itoa(xzSize),
+		"__WASM_SIZE__":      strconv.Itoa(len(files[wasmRaw])),
+		"__WASM_GZ_SIZE__":   strconv.Itoa(len(files[wasmGz])),
+		"__WASM_XZ_SIZE__":   strconv.Itoa(xzSize),
+		"__WASM_XZ_SPLIT__":  strconv.Itoa(xzSplit),
+		"<!--__PRELOAD__-->": preload(xzSize > 0, build),
 	})
 	names := make([]string, 0, len(files))
 	for n := range files {
@@ -193,6 +204,16 @@ func pack(o options) (string, error) {
 	return build, checkFolder(o.out)
 }
 
+// preload is the page's request, in its head, for the xz form of the app,
+// so it downloads while the page loads; nothing where the build has no xz
+// form.
+func preload(xz bool, build string) string {
+	if !xz {
+		return ""
+	}
+	return `<link rel="preload" href="` + wasmXz + `?v=` + build + `" as="fetch" crossorigin>`
+}
+
 // gzipBytes compresses b at gzip's best level.
 func gzipBytes(b []byte) ([]byte, error) {
 	var buf bytes.Buffer
@@ -207,21 +228,6 @@ func gzipBytes(b []byte) ([]byte, error) {
 		return nil, err
 	}
 	return buf.Bytes(), nil
-}
-
-// xzBytes compresses b with the xz command at its strongest preset, with a
-// CRC32 check (xz-embedded, the page's decoder, checks CRC32). pb=0 (no
-// position bits) suits WebAssembly's byte-aligned code: measured on the
-// app, 0.7 % smaller than the preset's pb=2.
-func xzBytes(b []byte) ([]byte, error) {
-	cmd := exec.Command("xz", "--format=xz", "--check=crc32", "--lzma2=preset=9e,pb=0", "--stdout", "-")
-	cmd.Stdin = bytes.NewReader(b)
-	var out, errb bytes.Buffer
-	cmd.Stdout, cmd.Stderr = &out, &errb
-	if err := cmd.Run(); err != nil {
-		return nil, fmt.Errorf("xz (Debian package xz-utils): %v %s", err, strings.TrimSpace(errb.String()))
-	}
-	return out.Bytes(), nil
 }
 
 // buildName is the first 12 hex digits of a SHA-256 over the files' names
