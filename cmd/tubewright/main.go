@@ -17,6 +17,7 @@ import (
 	"fmt"
 	"log"
 	"os"
+	"runtime/debug"
 
 	"gioui.org/app"
 	"gioui.org/op"
@@ -44,6 +45,11 @@ func main() {
 
 // run is the window's event loop: one ui.App, laid out on every frame.
 func run(w *app.Window) error {
+	// No garbage collection until the first frame is out: building the app
+	// and shaping its first screen allocate about 10 MB that a collection
+	// would only scan (in the browser, where Go runs on one thread, that
+	// delays the first frame).
+	gcPercent := debug.SetGCPercent(-1)
 	a := ui.NewApp(w.Invalidate)
 	keeper, porter, listen := openStorage(w)
 	a.UseKeeper(keeper, porter)
@@ -64,6 +70,7 @@ func run(w *app.Window) error {
 			if first {
 				first = false
 				mark("tw-frame")
+				debug.SetGCPercent(gcPercent)
 			}
 		}
 	}
