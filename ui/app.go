@@ -38,6 +38,22 @@ type App struct {
 	side    sideToggle
 	welcome *Page
 	bar     appBar
+	home    appHome
+}
+
+// appHome holds the About line's text, made once, and the welcome pane's
+// widgets and the Bench summary it shows, written again only when the
+// Bench changes.
+type appHome struct {
+	about     string
+	ws        []layout.Widget
+	head      layout.Widget
+	intro     layout.Widget
+	carried   layout.Widget
+	aboutW    layout.Widget
+	benchKey  [4]float64
+	benchFrom [2]string
+	benchText string
 }
 
 // appBar holds the top bar's parts as widgets bound once (see layoutBar),
@@ -60,6 +76,9 @@ func NewApp(invalidate func()) *App {
 	a.env.open = a.Open
 	a.welcome = NewPage(a.env)
 	a.bar = appBar{back: a.layoutBack, title: a.layoutTitle, side: a.layoutSide, theme: a.layoutTheme}
+	a.home.about = "Tubewright " + Version + ". Works offline: no network, no telemetry. " +
+		"Each screen names the published methods it uses. Results that bear on safety come with cautions and " +
+		"never replace local codes, standards or licensed practice."
 	return a
 }
 
@@ -363,9 +382,7 @@ func (a *App) layoutCatalog(gtx layout.Context, about bool) layout.Dimensions {
 
 // aboutLine draws the version stamp and the app's promises.
 func (a *App) aboutLine(gtx layout.Context) layout.Dimensions {
-	l := material.Body2(a.env.Theme, "Tubewright "+Version+". Works offline: no network, no telemetry. "+
-		"Each screen names the published methods it uses. Results that bear on safety come with cautions and "+
-		"never replace local codes, standards or licensed practice.")
+	l := material.Body2(a.env.Theme, a.home.about)
 	l.Color = a.env.Colors.Muted
 	l.Alignment = text.Start
 	return l.Layout(gtx)
@@ -373,13 +390,26 @@ func (a *App) aboutLine(gtx layout.Context) layout.Dimensions {
 
 // layoutWelcome fills the right pane of a wide window when no screen is open.
 func (a *App) layoutWelcome(gtx layout.Context) layout.Dimensions {
-	ws := []layout.Widget{
-		Heading(a.env, "Pick a calculator"),
-		Para(a.env, "Choose a calculator from the list. Fields accept the units you have at hand: "+
-			"bar, psi or MPa; K, °C or °F (type degC, degF); m, mm or in; Hz or kHz."),
+	h := &a.home
+	if h.head == nil {
+		h.head = Heading(a.env, "Pick a calculator")
+		h.intro = Para(a.env, "Choose a calculator from the list. Fields accept the units you have at hand: "+
+			"bar, psi or MPa; K, °C or °F (type degC, degF); m, mm or in; Hz or kHz.")
+		h.carried = func(gtx layout.Context) layout.Dimensions { return layoutPara(gtx, a.env, h.benchText) }
+		h.aboutW = a.aboutLine
 	}
-	if b := a.env.Bench.Summary(); b != "" {
-		ws = append(ws, Para(a.env, "Carried between screens: "+b+"."))
+	b := a.env.Bench
+	key, from := [4]float64{b.Temperature, b.Pressure, b.Frequency, 1}, [2]string{b.Gas, b.FrequencyFrom}
+	if key != h.benchKey || from != h.benchFrom {
+		h.benchKey, h.benchFrom, h.benchText = key, from, ""
+		if sum := b.Summary(); sum != "" {
+			h.benchText = "Carried between screens: " + sum + "."
+		}
 	}
-	return a.welcome.Layout(gtx, append(ws, a.aboutLine)...)
+	h.ws = append(h.ws[:0], h.head, h.intro)
+	if h.benchText != "" {
+		h.ws = append(h.ws, h.carried)
+	}
+	h.ws = append(h.ws, h.aboutW)
+	return a.welcome.Layout(gtx, h.ws...)
 }

@@ -190,22 +190,20 @@ func (s *designScreen) sensitivityRow(gtx layout.Context, i int) layout.Dimensio
 // row labels as their descriptions (for screen readers and tests).
 func (s *designScreen) tableRow(gtx layout.Context, change, onset, freq string, header bool, onsetDesc, freqDesc string) layout.Dimensions {
 	th, c := s.env.Theme, s.env.Colors
-	cell := func(txt, desc string, width unit.Dp) layout.Widget {
-		return func(gtx layout.Context) layout.Dimensions {
-			gtx.Constraints.Min.X, gtx.Constraints.Max.X = gtx.Dp(width), gtx.Dp(width)
-			l := material.Label(th, unit.Sp(16), txt)
-			l.Alignment = text.End
-			l.Color = c.Text
-			if header {
-				l.Color, l.Font.Weight = c.Muted, 600
-			} else {
-				l.Font.Weight = 600
-			}
-			if desc == "" {
-				return l.Layout(gtx)
-			}
-			return describe(gtx, desc, l.Layout)
+	cell := func(gtx layout.Context, txt, desc string, width unit.Dp) layout.Dimensions {
+		gtx.Constraints.Min.X, gtx.Constraints.Max.X = gtx.Dp(width), gtx.Dp(width)
+		l := material.Label(th, unit.Sp(16), txt)
+		l.Alignment = text.End
+		l.Color = c.Text
+		if header {
+			l.Color, l.Font.Weight = c.Muted, 600
+		} else {
+			l.Font.Weight = 600
 		}
+		if desc == "" {
+			return l.Layout(gtx)
+		}
+		return describe(gtx, desc, l.Layout)
 	}
 	return layout.Inset{Left: 14, Right: 14, Top: 7, Bottom: 7}.Layout(gtx, func(gtx layout.Context) layout.Dimensions {
 		return layout.Flex{Alignment: layout.Start}.Layout(gtx,
@@ -217,8 +215,8 @@ func (s *designScreen) tableRow(gtx layout.Context, change, onset, freq string, 
 				}
 				return l.Layout(gtx)
 			}),
-			layout.Rigid(cell(onset, onsetDesc, 82)),
-			layout.Rigid(cell(freq, freqDesc, 96)),
+			layout.Rigid(func(gtx layout.Context) layout.Dimensions { return cell(gtx, onset, onsetDesc, 82) }),
+			layout.Rigid(func(gtx layout.Context) layout.Dimensions { return cell(gtx, freq, freqDesc, 96) }),
 		)
 	})
 }

@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"slices"
 	"strings"
 
 	"gioui.org/layout"
@@ -38,6 +39,23 @@ type partEditor struct {
 	amp    *Choice // driver: pressure or volume velocity
 
 	up, down, edit, remove widget.Clickable
+
+	// Kept between frames (see layout): the row's texts with the inputs
+	// they were written from (sig, for index at), the widgets bound once
+	// and the slices of children.
+	sig, sigNew         []string
+	at                  int
+	isOpen, textsOK     bool
+	title, sum          string
+	titleDesc           string
+	btnDescs            [5]string // Edit, Close, Up, Down, Remove with " part N"
+	titleW, sumW, btnsW layout.Widget
+	btnW                func(gtx layout.Context, j int) layout.Dimensions
+	fieldWs             []layout.Widget
+	choiceWs            [5]layout.Widget // amp, temp, tvalue, shape, flange
+	noneW               layout.Widget
+	col                 column
+	openWs              []layout.Widget
 }
 
 // The keys, labels and dimensions of the fields by kind.
@@ -187,11 +205,11 @@ func (e *partEditor) update(gtx layout.Context) bool {
 }
 
 // layout draws the part's row (title, summary, buttons) and, when open, its
-// fields.
+// fields. The row's texts are written again only when the part's inputs or
+// its place change.
 func (e *partEditor) layout(gtx layout.Context, i int, open bool) layout.Dimensions {
-	th := e.env.Theme
+	e.refresh(i, open)
 	c := e.env.Colors
-	pf := e.file()
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
 	bg := c.Surface
 	if open {
@@ -199,83 +217,163 @@ func (e *partEditor) layout(gtx layout.Context, i int, open bool) layout.Dimensi
 	}
 	return background(gtx, bg, c.Divider, gtx.Dp(6), gtx.Dp(1), func(gtx layout.Context) layout.Dimensions {
 		return layout.UniformInset(10).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			rows := []layout.FlexChild{
-				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-					l := material.Label(th, unit.Sp(16), partTitle(i, pf))
-					l.Font.Weight = 600
-					l.Color = c.Text
-					return Described("part "+itoa(i+1), l.Layout)(gtx)
-				}),
-				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-					if summary(pf) == "" {
-						return layout.Dimensions{}
-					}
-					l := material.Body2(th, summary(pf))
-					l.Color = c.Muted
-					return l.Layout(gtx)
-				}),
-				layout.Rigid(layout.Spacer{Height: 6}.Layout),
-				layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-					edit := "Edit"
-					if open {
-						edit = "Close"
-					}
-					btns := []struct {
-						c *widget.Clickable
-						l string
-					}{{&e.edit, edit}, {&e.up, "Up"}, {&e.down, "Down"}, {&e.remove, "Remove"}}
-					if e.kind == linear.KindClosedEnd {
-						btns = btns[1:] // nothing to edit
-					}
-					return flow(gtx, gtx.Dp(6), gtx.Dp(6), len(btns), func(gtx layout.Context, j int) layout.Dimensions {
-						return Described(btns[j].l+" part "+itoa(i+1), func(gtx layout.Context) layout.Dimensions {
-							return smallButton(e.env, gtx, btns[j].c, btns[j].l)
-						})(gtx)
-					})
-				}),
-			}
+			e.col.reset()
+			e.col.add(e.titleW)
+			e.col.add(e.sumW)
+			e.col.add(gapH6)
+			e.col.add(e.btnsW)
 			if open {
 				for _, w := range e.widgets() {
-					rows = append(rows, layout.Rigid(layout.Spacer{Height: 10}.Layout), layout.Rigid(w))
+					e.col.add(gapH10)
+					e.col.add(w)
 				}
 			}
-			return layout.Flex{Axis: layout.Vertical}.Layout(gtx, rows...)
+			return e.col.layout(gtx)
 		})
 	})
 }
 
-// widgets lists the open part's controls in order.
-func (e *partEditor) widgets() []layout.Widget {
-	var ws []layout.Widget
-	if e.amp != nil {
-		ws = append(ws, e.amp.Layout)
-	}
+// appendSig appends what the part's row is written from: its kind and
+// label, its fields' texts and forms, and its choices.
+func (e *partEditor) appendSig(s []string) []string {
+	s = append(s, e.kind, e.label)
 	for _, pf := range e.fields {
+		s = append(s, pf.f.Text())
+		if pf.size != nil {
+			s = append(s, pf.size.choice.Selected())
+		}
+	}
+	for _, c := range [...]*Choice{e.temp, e.shape, e.flange, e.amp} {
+		if c != nil {
+			s = append(s, c.Selected())
+		}
+	}
+	if e.tvalue != nil {
+		s = append(s, e.tvalue.Text())
+	}
+	return s
+}
+
+// refresh binds the row's widgets once and writes its texts again when
+// the part at index i changed.
+func (e *partEditor) refresh(i int, open bool) {
+	e.isOpen = open
+	if e.titleW == nil {
+		e.bindRow()
+	}
+	e.sigNew = e.appendSig(e.sigNew[:0])
+	if e.textsOK && i == e.at && slices.Equal(e.sigNew, e.sig) {
+		return
+	}
+	e.sig, e.sigNew = e.sigNew, e.sig
+	e.textsOK, e.at = true, i
+	pf := e.file()
+	e.title, e.sum = partTitle(i, pf), summary(pf)
+	n := " part " + itoa(i+1)
+	e.titleDesc = "part " + itoa(i+1)
+	for j, w := range [...]string{"Edit", "Close", "Up", "Down", "Remove"} {
+		e.btnDescs[j] = w + n
+	}
+}
+
+// bindRow makes the row's widgets once; they read the part when drawn.
+func (e *partEditor) bindRow() {
+	e.titleW = func(gtx layout.Context) layout.Dimensions {
+		l := material.Label(e.env.Theme, unit.Sp(16), e.title)
+		l.Font.Weight = 600
+		l.Color = e.env.Colors.Text
+		return describe(gtx, e.titleDesc, l.Layout)
+	}
+	e.sumW = func(gtx layout.Context) layout.Dimensions {
+		if e.sum == "" {
+			return layout.Dimensions{}
+		}
+		l := material.Body2(e.env.Theme, e.sum)
+		l.Color = e.env.Colors.Muted
+		return l.Layout(gtx)
+	}
+	e.btnW = e.layoutButton
+	e.btnsW = func(gtx layout.Context) layout.Dimensions {
+		n := 4
+		if e.kind == linear.KindClosedEnd {
+			n = 3 // nothing to edit
+		}
+		return flow(gtx, gtx.Dp(6), gtx.Dp(6), n, e.btnW)
+	}
+}
+
+// layoutButton draws button j of the row: Edit (Close when open), Up,
+// Down, Remove; a closed end has no Edit.
+func (e *partEditor) layoutButton(gtx layout.Context, j int) layout.Dimensions {
+	if e.kind == linear.KindClosedEnd {
+		j++
+	}
+	c, label, desc := &e.edit, "Edit", e.btnDescs[0]
+	switch j {
+	case 0:
+		if e.isOpen {
+			label, desc = "Close", e.btnDescs[1]
+		}
+	case 1:
+		c, label, desc = &e.up, "Up", e.btnDescs[2]
+	case 2:
+		c, label, desc = &e.down, "Down", e.btnDescs[3]
+	default:
+		c, label, desc = &e.remove, "Remove", e.btnDescs[4]
+	}
+	return describe(gtx, desc, func(gtx layout.Context) layout.Dimensions {
+		return smallButton(e.env, gtx, c, label)
+	})
+}
+
+// widgets lists the open part's controls in order. The slice is the
+// part's own, valid until the next call; the widgets are made once.
+func (e *partEditor) widgets() []layout.Widget {
+	if e.fieldWs == nil {
+		for _, pf := range e.fields {
+			e.fieldWs = append(e.fieldWs, pf.widget(e.env))
+		}
+		for j, c := range [...]*Choice{e.amp, e.temp, nil, e.shape, e.flange} {
+			if c != nil {
+				e.choiceWs[j] = c.Layout
+			}
+		}
+		if e.tvalue != nil {
+			e.choiceWs[2] = e.tvalue.Layout
+		}
+		e.noneW = Note(e.env, "A rigid end: nothing to set.")
+	}
+	ws := e.openWs[:0]
+	if e.amp != nil {
+		ws = append(ws, e.choiceWs[0])
+	}
+	for j, pf := range e.fields {
 		if pf.shape != "" || !e.visible(pf) {
 			continue
 		}
-		ws = append(ws, pf.widget(e.env))
+		ws = append(ws, e.fieldWs[j])
 	}
 	if e.temp != nil {
-		ws = append(ws, e.temp.Layout)
+		ws = append(ws, e.choiceWs[1])
 		if e.temp.Selected() == "value" {
-			ws = append(ws, e.tvalue.Layout)
+			ws = append(ws, e.choiceWs[2])
 		}
 	}
 	if e.shape != nil {
-		ws = append(ws, e.shape.Layout)
-		for _, pf := range e.fields {
+		ws = append(ws, e.choiceWs[3])
+		for j, pf := range e.fields {
 			if pf.shape != "" && e.visible(pf) {
-				ws = append(ws, pf.widget(e.env))
+				ws = append(ws, e.fieldWs[j])
 			}
 		}
 	}
 	if e.flange != nil {
-		ws = append(ws, e.flange.Layout)
+		ws = append(ws, e.choiceWs[4])
 	}
 	if len(ws) == 0 {
-		ws = append(ws, Note(e.env, "A rigid end: nothing to set."))
+		ws = append(ws, e.noneW)
 	}
+	e.openWs = ws
 	return ws
 }
 

@@ -19,6 +19,15 @@ type sizeAs struct {
 	labels  [2]string // the field's label for each
 	halfKey string    // the file's key for the half in older files ("" if none)
 	words   [2]string // the whole and the half in the echo: "gap 2y0", "half gap y0"
+
+	// Kept between frames (see layout): the widget for the field it was
+	// made for, the descriptions and the echo with what it was written
+	// from.
+	w                   layout.Widget
+	wFor                *Field
+	chipsDesc, bothDesc string
+	echoText, echoFrom  string
+	echoHalf, echoOK    bool
 }
 
 // Keys of a sizeAs choice.
@@ -116,24 +125,36 @@ func (s *sizeAs) echo(f *Field) string {
 	return s.words[0] + " " + lengthWords(w) + " (" + s.words[1] + " " + lengthWords(w/2) + ")"
 }
 
-// layout draws the chips, the field and the echo.
+// layout draws the chips, the field and the echo. The widget is made once
+// for field f and kept; the echo is written again only when the text or
+// the form changes.
 func (s *sizeAs) layout(env *Env, f *Field) layout.Widget {
-	return func(gtx layout.Context) layout.Dimensions {
+	if s.w != nil && s.wFor == f {
+		return s.w
+	}
+	s.wFor = f
+	s.chipsDesc, s.bothDesc = "Size of "+s.labels[0]+" given as", "Both sizes of "+s.labels[0]
+	s.w = func(gtx layout.Context) layout.Dimensions {
 		return layout.Flex{Axis: layout.Vertical}.Layout(gtx,
 			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				return Described("Size of "+s.labels[0]+" given as", s.choice.Layout)(gtx)
+				return describe(gtx, s.chipsDesc, s.choice.Layout)
 			}),
 			layout.Rigid(layout.Spacer{Height: 4}.Layout),
 			layout.Rigid(f.Layout),
 			layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-				e := s.echo(f)
-				if e == "" {
+				if text, half := f.Text(), s.half(); !s.echoOK || text != s.echoFrom || half != s.echoHalf {
+					s.echoOK, s.echoFrom, s.echoHalf, s.echoText = true, text, half, s.echo(f)
+				}
+				if s.echoText == "" {
 					return layout.Dimensions{}
 				}
-				return Described("Both sizes of "+s.labels[0], Note(env, e))(gtx)
+				return describe(gtx, s.bothDesc, func(gtx layout.Context) layout.Dimensions {
+					return layoutNote(gtx, env, s.echoText)
+				})
 			}),
 		)
 	}
+	return s.w
 }
 
 // lengthWords writes a small length in mm, or in µm below 10 µm, so that

@@ -25,6 +25,10 @@ type zoneEditor struct {
 	zones [resonator.MaxZones]zoneFields
 	// line is the form's zones text the fields last agreed with.
 	line string
+	// Kept between frames (see widgets).
+	countW layout.Widget
+	zoneWs [][3]layout.Widget
+	ws     []layout.Widget
 }
 
 // zoneFields are the fields of one zone; size is its inside diameter, or
@@ -154,14 +158,22 @@ func (z *zoneEditor) sync() {
 	}
 }
 
-// widgets lists the count and the fields of the zones in use.
+// widgets lists the count and the fields of the zones in use. The slice
+// is the editor's own, valid until the next call; the widgets are made
+// once.
 func (z *zoneEditor) widgets() []layout.Widget {
-	ws := []layout.Widget{z.count.Layout}
-	for i := 0; i < z.n(); i++ {
-		f := &z.zones[i]
-		ws = append(ws, f.length.Layout, f.sizeAs.layout(z.env, f.size), f.temp.Layout)
+	if z.countW == nil {
+		z.countW = z.count.Layout
+		for i := range z.zones {
+			f := &z.zones[i]
+			z.zoneWs = append(z.zoneWs, [3]layout.Widget{f.length.Layout, f.sizeAs.layout(z.env, f.size), f.temp.Layout})
+		}
 	}
-	return ws
+	z.ws = append(z.ws[:0], z.countW)
+	for i := 0; i < z.n(); i++ {
+		z.ws = append(z.ws, z.zoneWs[i][:]...)
+	}
+	return z.ws
 }
 
 // showModes fills the results card of a zoned-tube result with one row

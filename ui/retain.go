@@ -14,6 +14,7 @@ import (
 // kept in a slice of children would be a new allocation each frame.
 var (
 	gapH6  = layout.Spacer{Height: 6}.Layout
+	gapH10 = layout.Spacer{Height: 10}.Layout
 	gapH12 = layout.Spacer{Height: 12}.Layout
 )
 

@@ -60,6 +60,24 @@ type safetyScreen struct {
 	progressKey               [3]int
 	progressText              string
 	ws                        []layout.Widget
+	// The review page's widgets, made again only when what they show
+	// changes (see reviewPage).
+	reviewWs  []layout.Widget
+	reviewKey safetyReviewKey
+	reviewOK  bool
+	inReview  bool
+	reviewOld bool // the older bench log file exists, as of the last rebuild
+	undoWs    []layout.Widget
+}
+
+// safetyReviewKey is what the review page shows: each item's tick and
+// outcome, the save's message and state, and where passes are kept.
+type safetyReviewKey struct {
+	done                [64]bool
+	out                 [64]sheet.Outcome
+	status              string
+	bad, damaged, saved bool
+	where               whereKey
 }
 
 // safetyItem is the widgets of one checklist item, bound once; they read
@@ -131,7 +149,7 @@ func (s *safetyScreen) outcomeOf(i int) sheet.Outcome {
 		return sheet.None
 	}
 	st.settle()
-	w, _ := st.worst()
+	w, _, _ := st.banner()
 	return w
 }
 
@@ -301,10 +319,11 @@ func (s *safetyScreen) Layout(gtx layout.Context) layout.Dimensions {
 	s.ws = append(s.ws[:0], s.generalW, s.progressW)
 	s.ws = append(s.ws, s.undoWidgets()...)
 	if s.step >= s.items() {
-		s.ws = append(s.ws, s.reviewWidgets()...)
+		s.ws = append(s.ws, s.reviewPage()...)
 		s.ws = append(s.ws, s.navW)
 		return s.page.Layout(gtx, s.ws...)
 	}
+	s.inReview = false
 	// On wide windows a step's numbers, its verdict on top, sit beside
 	// its inputs.
 	wide := splitWide(gtx)
@@ -314,6 +333,34 @@ func (s *safetyScreen) Layout(gtx layout.Context) layout.Dimensions {
 		return s.page.Layout(gtx, s.ws...)
 	}
 	return splitLayout(gtx, s.page, s.side, nil, s.ws, numbers)
+}
+
+// reviewPage returns the review page's widgets, made again by reviewWidgets
+// only when the ticks, the outcomes, the save's message or where passes
+// are kept changed.
+func (s *safetyScreen) reviewPage() []layout.Widget {
+	if !s.inReview {
+		s.inReview, s.reviewOK = true, false
+	}
+	var key safetyReviewKey
+	ok := s.items() <= len(key.done)
+	if ok {
+		for i := range s.items() {
+			key.done[i], key.out[i] = s.pass.Done[i], s.outcomeOf(i)
+		}
+		key.status, key.bad, key.damaged, key.saved = s.status, s.statusBad, s.damaged, s.saved
+	}
+	if ok && s.reviewOK {
+		key.where = bookFor(s.env).whereKeyOf(s.reviewOld)
+		if key == s.reviewKey {
+			return s.reviewWs
+		}
+	}
+	s.reviewOld = bookFor(s.env).oldThere()
+	key.where = bookFor(s.env).whereKeyOf(s.reviewOld)
+	s.reviewOK, s.reviewKey = ok, key
+	s.reviewWs = s.reviewWidgets()
+	return s.reviewWs
 }
 
 // progress is the "Item 3 of 11 · 2 ticked" line, written again only when
@@ -495,7 +542,7 @@ func (s *safetyScreen) reviewWidgets() []layout.Widget {
 			})
 		})
 	}
-	ws = append(ws, Note(s.env, bookFor(s.env).Where()))
+	ws = append(ws, Note(s.env, bookFor(s.env).whereText(bookFor(s.env).whereKeyOf(s.reviewOld))))
 	return ws
 }
 

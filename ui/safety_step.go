@@ -83,6 +83,33 @@ type sheetStep struct {
 	// return and the cards' widgets.
 	ins, outs []layout.Widget
 	cards     column
+	// The banner's text, kept while the parts show the same results.
+	vFor   []*sheet.Result
+	vOut   sheet.Outcome
+	vHead  string
+	vLines []string
+	vCol   column
+	vHeadW layout.Widget
+	vLineW indexed
+}
+
+// banner returns verdictText, written again only when a part's result
+// changed.
+func (s *sheetStep) banner() (sheet.Outcome, string, []string) {
+	same := len(s.vFor) == len(s.parts)
+	for i, p := range s.parts {
+		if same && s.vFor[i] != p.shown {
+			same = false
+		}
+	}
+	if !same {
+		s.vFor = s.vFor[:0]
+		for _, p := range s.parts {
+			s.vFor = append(s.vFor, p.shown)
+		}
+		s.vOut, s.vHead, s.vLines = s.verdictText()
+	}
+	return s.vOut, s.vHead, s.vLines
 }
 
 // newSheetStep returns a step with the item's cautions and the parts.
@@ -254,40 +281,53 @@ func (s *sheetStep) verdictText() (sheet.Outcome, string, []string) {
 // at the top of the step, readable in glare and by a screen reader.
 func (s *sheetStep) Verdict() layout.Widget {
 	return func(gtx layout.Context) layout.Dimensions {
-		o, head, lines := s.verdictText()
+		_, head, _ := s.banner()
 		if head == "" {
 			return layout.Dimensions{}
 		}
-		_, bg := outcomeLook(s.env.Colors, o)
-		white := s.env.Colors.OnBadge
+		if s.vHeadW == nil {
+			s.vHeadW = s.layoutBannerHead
+			s.vLineW.draw = s.layoutBannerLine
+		}
+		_, bg := outcomeLook(s.env.Colors, s.vOut)
 		gtx.Constraints.Min.X = gtx.Constraints.Max.X
-		return Described("Step verdict", func(gtx layout.Context) layout.Dimensions {
+		return describe(gtx, "Step verdict", func(gtx layout.Context) layout.Dimensions {
 			return background(gtx, bg, bg, gtx.Dp(8), 0, func(gtx layout.Context) layout.Dimensions {
 				return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-					children := []layout.FlexChild{layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-						return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
-							layout.Rigid(func(gtx layout.Context) layout.Dimensions { return outcomeIcon(gtx, o, white, bg) }),
-							layout.Rigid(layout.Spacer{Width: 10}.Layout),
-							layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
-								l := material.Label(s.env.Theme, unit.Sp(19), head)
-								l.Color = white
-								l.Font.Weight = 700
-								return l.Layout(gtx)
-							}))
-					})}
-					for _, line := range lines {
-						children = append(children, layout.Rigid(layout.Spacer{Height: 6}.Layout),
-							layout.Rigid(func(gtx layout.Context) layout.Dimensions {
-								l := material.Label(s.env.Theme, unit.Sp(16), line)
-								l.Color = white
-								return l.Layout(gtx)
-							}))
+					s.vCol.reset()
+					s.vCol.add(s.vHeadW)
+					for i := range s.vLines {
+						s.vCol.add(gapH6)
+						s.vCol.add(s.vLineW.at(i))
 					}
-					return layout.Flex{Axis: layout.Vertical}.Layout(gtx, children...)
+					return s.vCol.layout(gtx)
 				})
 			})
-		})(gtx)
+		})
 	}
+}
+
+// layoutBannerHead draws the banner's icon and outcome in words.
+func (s *sheetStep) layoutBannerHead(gtx layout.Context) layout.Dimensions {
+	o, head := s.vOut, s.vHead
+	_, bg := outcomeLook(s.env.Colors, o)
+	white := s.env.Colors.OnBadge
+	return layout.Flex{Alignment: layout.Middle}.Layout(gtx,
+		layout.Rigid(func(gtx layout.Context) layout.Dimensions { return outcomeIcon(gtx, o, white, bg) }),
+		layout.Rigid(layout.Spacer{Width: 10}.Layout),
+		layout.Flexed(1, func(gtx layout.Context) layout.Dimensions {
+			l := material.Label(s.env.Theme, unit.Sp(19), head)
+			l.Color = white
+			l.Font.Weight = 700
+			return l.Layout(gtx)
+		}))
+}
+
+// layoutBannerLine draws line i of the banner.
+func (s *sheetStep) layoutBannerLine(gtx layout.Context, i int) layout.Dimensions {
+	l := material.Label(s.env.Theme, unit.Sp(16), s.vLines[i])
+	l.Color = s.env.Colors.OnBadge
+	return l.Layout(gtx)
 }
 
 // outcomeIcon draws the outcome's sign in a disc of fg on bg: a tick for

@@ -55,10 +55,13 @@ func (s *safetyScreen) undoWidgets() []layout.Widget {
 	if s.undo == nil {
 		return nil
 	}
-	return []layout.Widget{
-		statusLine(s.env, "New pass status", "A new pass is started: ticks and notes are cleared. The saved pass stays in the bench log.", false),
-		func(gtx layout.Context) layout.Dimensions {
-			return s.button(gtx, &s.undoBtn, "Undo: back to the last pass", false)
-		},
+	if s.undoWs == nil {
+		s.undoWs = []layout.Widget{
+			statusLine(s.env, "New pass status", "A new pass is started: ticks and notes are cleared. The saved pass stays in the bench log.", false),
+			func(gtx layout.Context) layout.Dimensions {
+				return s.button(gtx, &s.undoBtn, "Undo: back to the last pass", false)
+			},
+		}
 	}
+	return s.undoWs
 }
