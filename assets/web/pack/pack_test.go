@@ -77,8 +77,9 @@ func TestPackListsExactlyTheBuiltFiles(t *testing.T) {
 }
 
 // TestPackWritesXzForm packs with a decoder script and checks the xz form:
-// it is listed with unxz.js, the xz command unpacks it to the app, and the
-// page knows its size; without a decoder the page's xz size is 0.
+// it is listed with unxz.js (the decoder, then the worker half), the xz
+// command unpacks it to the app, and the page knows its size; without a
+// decoder the page's xz size is 0.
 func TestPackWritesXzForm(t *testing.T) {
 	wasm := bytes.Repeat([]byte("\x00asm fake module, xz "), 4000)
 	tmp := t.TempDir()
@@ -95,6 +96,11 @@ func TestPackWritesXzForm(t *testing.T) {
 		if !slices.Contains(listed, f) {
 			t.Errorf("the worker does not list %s: %v", f, listed)
 		}
+	}
+	unxz := string(must(os.ReadFile(filepath.Join(dir, unxzName))))
+	tail := string(must(os.ReadFile(filepath.Join("..", unxzWorkerName))))
+	if !strings.HasPrefix(unxz, "/* a stand-in decoder */") || !strings.HasSuffix(unxz, tail) {
+		t.Error("unxz.js is not the decoder followed by its worker half")
 	}
 	xzFile := filepath.Join(dir, wasmXz)
 	got, err := exec.Command("xz", "--decompress", "--stdout", xzFile).Output()
