@@ -71,7 +71,7 @@ func TestDataSectionStart(t *testing.T) {
 // TestXzAppTwoStreams checks the xz form of a module: the xz command
 // unpacks the whole file to the module, and the first stream alone (xz
 // --single-stream) to the module up to its data section; the page is told
-// where the second stream begins.
+// where the second stream begins and asks for the file in its head.
 func TestXzAppTwoStreams(t *testing.T) {
 	m, at := fakeModule()
 	tmp := t.TempDir()
@@ -80,7 +80,8 @@ func TestXzAppTwoStreams(t *testing.T) {
 	os.WriteFile(w, m, 0o644)
 	os.WriteFile(dec, []byte("/* a stand-in decoder */"), 0o644)
 	dir := filepath.Join(tmp, "web")
-	if _, err := pack(options{shell: "..", wasm: w, unxz: dec, out: dir, wasmExec: must(goWasmExec())}); err != nil {
+	build, err := pack(options{shell: "..", wasm: w, unxz: dec, out: dir, wasmExec: must(goWasmExec())})
+	if err != nil {
 		t.Fatal(err)
 	}
 	xzFile := filepath.Join(dir, wasmXz)
@@ -105,5 +106,12 @@ func TestXzAppTwoStreams(t *testing.T) {
 	page := string(must(os.ReadFile(filepath.Join(dir, pageName))))
 	if want := "split: " + strconv.Itoa(split); !strings.Contains(page, want) {
 		t.Errorf("the page does not say %q", want)
+	}
+	if want := `<link rel="preload" href="tubewright.wasm.xz?v=` + build + `" as="fetch" crossorigin>`; !strings.Contains(page, want) {
+		t.Errorf("the page does not ask for the xz file in its head: no %q", want)
+	}
+	plain, _ := packFake(t, m)
+	if page := string(must(os.ReadFile(filepath.Join(plain, pageName)))); strings.Contains(page, `rel="preload"`) {
+		t.Error("a build without an xz form asks for one")
 	}
 }
