@@ -329,7 +329,7 @@ func (e *partEditor) layoutButton(gtx layout.Context, j int) layout.Dimensions {
 // widgets lists the open part's controls in order. The slice is the
 // part's own, valid until the next call; the widgets are made once.
 func (e *partEditor) widgets() []layout.Widget {
-	if e.fieldWs == nil {
+	if e.noneW == nil {
 		for _, pf := range e.fields {
 			e.fieldWs = append(e.fieldWs, pf.widget(e.env))
 		}

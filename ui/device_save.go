@@ -55,6 +55,9 @@ type deviceFile struct {
 	ws                       []layout.Widget
 	nameW, buttonsW, statusW layout.Widget
 	nameLine                 joined
+	panelWs                  []layout.Widget
+	panelKey                 keepPanelKey
+	panelOld, panelOK        bool
 }
 
 // defaultDevicePath is the file an earlier version kept an example's
@@ -258,7 +261,13 @@ func (f *deviceFile) widgets(env *Env) []layout.Widget {
 	if !f.shown {
 		f.ws = append(f.ws, f.buttonsW, f.statusW)
 	} else {
-		f.ws = append(f.ws, f.panel(env, e)...)
+		k := f.keeper(e)
+		key := keepPanelKey{version: k.Version(), lib: k.Library(), loaded: k.Loaded(), selected: f.selected}
+		if !f.panelOK || key != f.panelKey || f.oldThere != f.panelOld {
+			f.panelOK, f.panelKey, f.panelOld = true, key, f.oldThere
+			f.panelWs = f.panel(env, e)
+		}
+		f.ws = append(f.ws, f.panelWs...)
 	}
 	return f.ws
 }

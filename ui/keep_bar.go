@@ -48,6 +48,20 @@ type keepBar struct {
 	statusLive                       bool
 	noteShown                        bool
 	lastCopied                       string // the text last put on the clipboard
+
+	// The setups panel's widgets, made again only when the library, its
+	// loading or the selection changes (see layoutPanel).
+	panelWs  []layout.Widget
+	panelKey keepPanelKey
+	panelOK  bool
+}
+
+// keepPanelKey is what the setups panel is made from.
+type keepPanelKey struct {
+	version  uint64
+	lib      *store.Library
+	loaded   bool
+	selected string
 }
 
 // bar returns the bar of calculator id.
@@ -343,9 +357,20 @@ func setupsOf(lib *store.Library, id sheet.ID) []store.Setup {
 
 // layoutPanel draws the calculator's setups in place of its screen.
 func (b *keepBar) layoutPanel(gtx layout.Context, f *Form) layout.Dimensions {
+	k := b.keeper()
+	key := keepPanelKey{version: k.Version(), lib: k.Library(), loaded: k.Loaded(), selected: b.selected}
+	if !b.panelOK || key != b.panelKey {
+		b.panelOK, b.panelKey = true, key
+		b.panelWs = b.panelWidgets(f, key.lib)
+	}
+	return b.page.Layout(gtx, b.panelWs...)
+}
+
+// panelWidgets makes the setups panel's widgets from library lib.
+func (b *keepBar) panelWidgets(f *Form, lib *store.Library) []layout.Widget {
 	env := b.env
 	k := b.keeper()
-	list := setupsOf(k.Library(), b.id)
+	list := setupsOf(lib, b.id)
 	b.listed = b.listed[:0]
 	for _, s := range list {
 		b.listed = append(b.listed, s.Name)
@@ -376,16 +401,16 @@ func (b *keepBar) layoutPanel(gtx layout.Context, f *Form) layout.Dimensions {
 			ws = append(ws, b.layoutRowActions)
 		}
 	}
-	ws = append(ws, func(gtx layout.Context) layout.Dimensions {
+	return append(ws, func(gtx layout.Context) layout.Dimensions {
 		return keepButton(env, gtx, &b.all, "All saved work…", false)
 	})
-	return b.page.Layout(gtx, ws...)
 }
 
 // layoutRow draws one setup: its name and when it was saved.
 func (b *keepBar) layoutRow(i int, s store.Setup) layout.Widget {
+	desc, saved := "Setup "+s.Name, "saved "+s.Saved.Local().Format("2006-01-02 15:04")
 	return func(gtx layout.Context) layout.Dimensions {
-		return keepListRow(b.env, gtx, &b.rows[i], "Setup "+s.Name, s.Name, "saved "+s.Saved.Local().Format("2006-01-02 15:04"), s.Name == b.selected)
+		return keepListRow(b.env, gtx, &b.rows[i], desc, s.Name, saved, s.Name == b.selected)
 	}
 }
 
