@@ -42,13 +42,13 @@ type pointMemo struct {
 // pointKey is, for each kind of opKinds, the index of the input that
 // gives it (-1 for none) and the screen its value came from.
 type pointKey struct {
-	item [4]int
-	from [4]string
+	item [len(opKinds)]int
+	from [len(opKinds)]string
 }
 
 // opKinds are the values of an operating point, in the order the line
 // names them.
-var opKinds = []carryKind{carryGas, carryPressure, carryTemperature, carryFrequency}
+var opKinds = [...]carryKind{carryGas, carryPressure, carryTemperature, carryFrequency}
 
 // opPart is one value of the operating point: what it is, as shown, and
 // the screen it came from ("" when typed here).
