@@ -74,7 +74,7 @@ define npm_install
 		fi; }
 endef
 
-.PHONY: all run test deps check-go fmt-check vet lint unit idle-allocs-web-flags build-twcalc build-wasm \
+.PHONY: all run test deps check-go fmt-check vet lint unit idle-allocs build-twcalc build-wasm \
 	web web-deps serve-web web-size browser-deps browser-test store-wasm-deps store-wasm-test apk shots fonts bench fuzz clean
 
 all: test
@@ -84,7 +84,7 @@ run: deps
 	$(GO) run -ldflags "$(LDFLAGS)" ./cmd/tubewright
 
 ## test: everything CI checks
-test: deps fmt-check vet lint unit idle-allocs-web-flags store-wasm-test build-twcalc build-wasm browser-test
+test: deps fmt-check vet lint unit idle-allocs store-wasm-test build-twcalc build-wasm browser-test
 	@echo "make test: all checks passed"
 
 check-go:
@@ -110,10 +110,12 @@ unit:
 build-twcalc:
 	CGO_ENABLED=0 $(GO) build -o /dev/null ./cmd/twcalc
 
-## idle-allocs-web-flags: the steady-frame allocation test again, compiled
-## with the browser build's WASM_GCFLAGS (a package left without inlining
-## can make a frame allocate that does not natively)
-idle-allocs-web-flags:
+## idle-allocs: the steady-frame allocation test, which the -race run skips
+## (the race detector allocates on its own), built as usual and again with
+## the browser build's WASM_GCFLAGS (a package left without inlining can
+## make a frame allocate that does not natively)
+idle-allocs:
+	$(GO) test -count=1 -run 'TestIdleLayoutAllocatesNothing' ./ui
 	$(GO) test -count=1 -run 'TestIdleLayoutAllocatesNothing' $(WASM_GCFLAGS) ./ui
 
 build-wasm:

@@ -28,6 +28,9 @@ import (
 // swap function, a few objects for each row of focusable widgets), which
 // nothing in how we lay out can avoid; BenchmarkScreenFrame counts it.
 func TestIdleLayoutAllocatesNothing(t *testing.T) {
+	if raceDetector {
+		t.Skip("allocation counts mean nothing under -race; make idle-allocs runs this test without it")
+	}
 	sizes := []struct {
 		name string
 		size image.Point

@@ -7,8 +7,8 @@
 // tubewright.wasm.xz (xz -9e in two streams, code and data, the smallest;
 // the page unpacks them at once in two workers with unxz.js, the
 // xz-decompress package from npm given by -unxz, which is xz-embedded built
-// to WebAssembly), tubewright.wasm.gz (gzip -9, unpacked
-// by the browser's DecompressionStream where unxz.js cannot load) and
+// to WebAssembly), tubewright.wasm.gz (gzip -9, unpacked by the browser's
+// DecompressionStream where the xz form fails to load or unpack) and
 // tubewright.wasm (raw, for browsers with neither). Without -unxz there is
 // no xz form. The xz form needs the xz command (Debian's xz-utils).
 //
