@@ -43,13 +43,7 @@ func (c *Caution) Layout(gtx layout.Context) layout.Dimensions {
 	gtx.Constraints.Min.X = gtx.Constraints.Max.X
 	return background(gtx, col.CautionBg, col.CautionEdge, gtx.Dp(6), gtx.Dp(2), func(gtx layout.Context) layout.Dimensions {
 		return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-			c.col.reset()
-			c.col.add(c.head)
-			for i := range c.Lines {
-				c.col.add(gapH6)
-				c.col.add(c.lines.at(i))
-			}
-			return c.col.layout(gtx)
+			return c.col.headAndLines(gtx, c.head, &c.lines, len(c.Lines))
 		})
 	})
 }

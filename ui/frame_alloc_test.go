@@ -7,9 +7,7 @@ import (
 	"time"
 
 	"gioui.org/io/input"
-	"gioui.org/layout"
 	"gioui.org/op"
-	"gioui.org/unit"
 
 	"tubewright/calc/sheet"
 )
@@ -49,13 +47,7 @@ func checkIdleLayout(t *testing.T, size image.Point, id sheet.ID) {
 	a.Open(id)
 	var r input.Router
 	var ops op.Ops
-	gtx := layout.Context{
-		Ops:         &ops,
-		Now:         time.Unix(1_800_000_000, 0),
-		Metric:      unit.Metric{PxPerDp: 1, PxPerSp: 1},
-		Constraints: layout.Exact(size),
-		Source:      r.Source(),
-	}
+	gtx := frameContext(&ops, &r, size)
 	frame := func() {
 		ops.Reset()
 		a.Layout(gtx)

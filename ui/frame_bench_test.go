@@ -35,13 +35,7 @@ func BenchmarkScreenFrame(b *testing.B) {
 				}
 				var r input.Router
 				var ops op.Ops
-				gtx := layout.Context{
-					Ops:         &ops,
-					Now:         time.Unix(1_800_000_000, 0),
-					Metric:      unit.Metric{PxPerDp: 1, PxPerSp: 1},
-					Constraints: layout.Exact(image.Pt(412, 915)),
-					Source:      r.Source(),
-				}
+				gtx := frameContext(&ops, &r, image.Pt(412, 915))
 				frame := func() {
 					ops.Reset()
 					if recompute {
@@ -59,6 +53,19 @@ func BenchmarkScreenFrame(b *testing.B) {
 				}
 			})
 		}
+	}
+}
+
+// frameContext is the layout context of the frame tests and benchmarks: a
+// window of size pixels at one pixel per dp, a fixed time, ops, and r's
+// events.
+func frameContext(ops *op.Ops, r *input.Router, size image.Point) layout.Context {
+	return layout.Context{
+		Ops:         ops,
+		Now:         time.Unix(1_800_000_000, 0),
+		Metric:      unit.Metric{PxPerDp: 1, PxPerSp: 1},
+		Constraints: layout.Exact(size),
+		Source:      r.Source(),
 	}
 }
 

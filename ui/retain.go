@@ -57,6 +57,19 @@ func (c *column) layout(gtx layout.Context) layout.Dimensions {
 	return layout.Flex{Axis: layout.Vertical}.Layout(gtx, c.children...)
 }
 
+// headAndLines fills the column anew with head and then n lines drawn by
+// lines, 6 dp apart, and draws it: the layout of the caution box and of a
+// safety step's verdict banner.
+func (c *column) headAndLines(gtx layout.Context, head layout.Widget, lines *indexed, n int) layout.Dimensions {
+	c.reset()
+	c.add(head)
+	for i := range n {
+		c.add(gapH6)
+		c.add(lines.at(i))
+	}
+	return c.layout(gtx)
+}
+
 // joined is a string a+b kept until a or b changes, for text (semantic
 // descriptions, lines of words) that would otherwise be built each frame.
 type joined struct {

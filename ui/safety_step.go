@@ -294,13 +294,7 @@ func (s *sheetStep) Verdict() layout.Widget {
 		return describe(gtx, "Step verdict", func(gtx layout.Context) layout.Dimensions {
 			return background(gtx, bg, bg, gtx.Dp(8), 0, func(gtx layout.Context) layout.Dimensions {
 				return layout.UniformInset(14).Layout(gtx, func(gtx layout.Context) layout.Dimensions {
-					s.vCol.reset()
-					s.vCol.add(s.vHeadW)
-					for i := range s.vLines {
-						s.vCol.add(gapH6)
-						s.vCol.add(s.vLineW.at(i))
-					}
-					return s.vCol.layout(gtx)
+					return s.vCol.headAndLines(gtx, s.vHeadW, &s.vLineW, len(s.vLines))
 				})
 			})
 		})
