@@ -31,6 +31,27 @@ func packFake(t *testing.T, wasm []byte) (dir, build string) {
 	return dir, build
 }
 
+// packXz packs the real shell with a stand-in WebAssembly file and a
+// stand-in decoder script, so with an xz form, into a new temporary folder.
+func packXz(t *testing.T, wasm []byte) (dir, build string) {
+	t.Helper()
+	tmp := t.TempDir()
+	w := filepath.Join(tmp, "app.wasm")
+	dec := filepath.Join(tmp, "decoder.js")
+	if err := os.WriteFile(w, wasm, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(dec, []byte("/* a stand-in decoder */"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	dir = filepath.Join(tmp, "web")
+	build, err := pack(options{shell: "..", wasm: w, unxz: dec, out: dir, wasmExec: must(goWasmExec())})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return dir, build
+}
+
 // TestPackListsExactlyTheBuiltFiles packs the shell and checks the service
 // worker lists every file of the folder but itself, no more; that the
 // compressed app unpacks to the raw one; and that the page and the worker
@@ -82,15 +103,7 @@ func TestPackListsExactlyTheBuiltFiles(t *testing.T) {
 // decoder the page's xz size is 0.
 func TestPackWritesXzForm(t *testing.T) {
 	wasm := bytes.Repeat([]byte("\x00asm fake module, xz "), 4000)
-	tmp := t.TempDir()
-	w := filepath.Join(tmp, "app.wasm")
-	dec := filepath.Join(tmp, "decoder.js")
-	os.WriteFile(w, wasm, 0o644)
-	os.WriteFile(dec, []byte("/* a stand-in decoder */"), 0o644)
-	dir := filepath.Join(tmp, "web")
-	if _, err := pack(options{shell: "..", wasm: w, unxz: dec, out: dir, wasmExec: must(goWasmExec())}); err != nil {
-		t.Fatal(err)
-	}
+	dir, _ := packXz(t, wasm)
 	listed := must(workerFiles(must(os.ReadFile(filepath.Join(dir, swName)))))
 	for _, f := range []string{wasmXz, unxzName, wasmGz, wasmRaw} {
 		if !slices.Contains(listed, f) {

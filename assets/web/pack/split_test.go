@@ -74,16 +74,7 @@ func TestDataSectionStart(t *testing.T) {
 // where the second stream begins and asks for the file in its head.
 func TestXzAppTwoStreams(t *testing.T) {
 	m, at := fakeModule()
-	tmp := t.TempDir()
-	w := filepath.Join(tmp, "app.wasm")
-	dec := filepath.Join(tmp, "decoder.js")
-	os.WriteFile(w, m, 0o644)
-	os.WriteFile(dec, []byte("/* a stand-in decoder */"), 0o644)
-	dir := filepath.Join(tmp, "web")
-	build, err := pack(options{shell: "..", wasm: w, unxz: dec, out: dir, wasmExec: must(goWasmExec())})
-	if err != nil {
-		t.Fatal(err)
-	}
+	dir, build := packXz(t, m)
 	xzFile := filepath.Join(dir, wasmXz)
 	whole, err := exec.Command("xz", "--decompress", "--stdout", xzFile).Output()
 	if err != nil || !bytes.Equal(whole, m) {
