@@ -33,15 +33,8 @@ func waitSolved(t *testing.T, h *harness, running func() bool, have func() bool)
 // in its editor, computed with calc/linear directly.
 func wantOnset(t *testing.T, e *deviceEditor) string {
 	t.Helper()
-	d, err := e.File().Validate()
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := linear.Onset(d, nil)
-	if err != nil {
-		t.Fatal(err)
-	}
-	s, _ := units.FormatIn(r.HotTemperature, "K")
+	hot, _ := onsetOf(t, e)
+	s, _ := units.FormatIn(hot, "K")
 	return s
 }
 
